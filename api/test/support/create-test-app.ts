@@ -1,0 +1,40 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { Test } from '@nestjs/testing';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+
+export interface TestApp {
+  readonly app: NestExpressApplication;
+  readonly dataDir: string;
+  close(): Promise<void>;
+}
+
+/**
+ * Boots the real AppModule, configured as main.ts configures it, on a fresh SQLite file in a
+ * temporary data directory (migrations run as on a first start). The module is imported after
+ * the environment is set because ConfigModule validates the environment when it is imported.
+ */
+export async function createTestApp(options: { webDistDir?: string } = {}): Promise<TestApp> {
+  const dataDir = mkdtempSync(join(tmpdir(), 'loftwright-api-'));
+  process.env.NODE_ENV = 'test';
+  process.env.DATA_DIR = dataDir;
+  if (options.webDistDir) process.env.WEB_DIST_DIR = options.webDistDir;
+  else delete process.env.WEB_DIST_DIR;
+
+  const { AppModule } = await import('../../src/app.module');
+  const { configureApp } = await import('../../src/app.setup');
+  const moduleRef = await Test.createTestingModule({ imports: [AppModule] }).compile();
+  const app = moduleRef.createNestApplication<NestExpressApplication>({ logger: ['error'] });
+  configureApp(app);
+  await app.init();
+
+  return {
+    app,
+    dataDir,
+    async close() {
+      await app.close();
+      rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
+}

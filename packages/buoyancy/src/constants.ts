@@ -1,0 +1,20 @@
+/**
+ * Physical constants, grouped by the publication that defines them. Models keep to the constants
+ * of their own source: the 1976 atmosphere uses its own gas constant, not the CODATA one, or its
+ * published tables would not be reproduced to five digits.
+ */
+
+/** U.S. Standard Atmosphere 1976 (NOAA-S/T 76-1562), Table 2: universal gas constant [J/(mol K)]. */
+export const USSA1976_GAS_CONSTANT_J_PER_MOL_K = 8.31432;
+
+/** U.S. Standard Atmosphere 1976, Table 2: mean molar mass of sea-level dry air [kg/mol]. */
+export const USSA1976_AIR_MOLAR_MASS_KG_PER_MOL = 0.0289644;
+
+/** U.S. Standard Atmosphere 1976: sea-level temperature [K]. */
+export const USSA1976_SEA_LEVEL_TEMPERATURE_K = 288.15;
+
+/** U.S. Standard Atmosphere 1976: sea-level pressure [Pa]; also the exact "standard atmosphere". */
+export const USSA1976_SEA_LEVEL_PRESSURE_PA = 101325;
+
+/** Standard acceleration of gravity [m/s2], exact (3rd CGPM, 1901). */
+export const STANDARD_GRAVITY_M_PER_S2 = 9.80665;

@@ -1,0 +1,25 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+
+/** What GET /api/health answers (api/src/health/health.service.ts). */
+export interface HealthReport {
+  status: 'ok' | 'error';
+  version: string;
+  engineVersion: string;
+  database: 'ok' | 'error';
+  databaseCreatedAt?: string;
+  pendingMigrations?: boolean;
+}
+
+export async function getHealth(): Promise<HealthReport> {
+  // A 503 still carries the report, so read it instead of treating it as a failure.
+  const response = await apiClient.get<HealthReport>('/health', {
+    validateStatus: (status) => status === 200 || status === 503,
+  });
+  return response.data;
+}
+
+export const getHealthQueryOptions = () =>
+  queryOptions({ queryKey: ['health'], queryFn: getHealth, staleTime: 10_000 });
+
+export const useHealth = () => useQuery(getHealthQueryOptions());
