@@ -35,6 +35,10 @@ export const theme: ThemeConfig = {
   },
   components: {
     Layout: { siderBg: '#FFFFFF', bodyBg: palette.ground, headerBg: palette.ground },
-    Menu: { itemSelectedColor: palette.deepLagoon, itemSelectedBg: '#E2EFEF', activeBarBorderWidth: 0 },
+    Menu: {
+      itemSelectedColor: palette.deepLagoon,
+      itemSelectedBg: '#E2EFEF',
+      activeBarBorderWidth: 0,
+    },
   },
 };
