@@ -1,23 +1,61 @@
-/**
- * Raised for any input the engine cannot compute with: not a finite number, or outside the range
- * the model is valid for. It names the field path so a form can show the message beside the field,
- * and the API can answer 422 with the same details. The engine never clamps a value instead.
- */
-export class InputError extends Error {
-  override readonly name = 'InputError';
+/** Allowed range of a numeric input, in the unit the input is given in. */
+export interface InputRange {
+  readonly min?: number;
+  readonly max?: number;
+  readonly unit: string;
+}
 
+/** One refused input: where it is, what it was, and why it was refused. */
+export interface InputIssue {
+  /** Dotted path of the offending input, e.g. `ambient.temperatureK`. */
+  readonly field: string;
+  /** The value received, as given. */
+  readonly value: unknown;
+  /** Why it was refused, in words a user understands. */
+  readonly reason: string;
+  /** Allowed range, where the refusal is a range check. */
+  readonly range?: InputRange;
+}
+
+/**
+ * Raised for any input the engine cannot compute with: missing, not a finite number, or outside
+ * the range the model is valid for. It names the field path so a form can show the message beside
+ * the field, and the API can answer 422 with the same details. The engine never clamps a value
+ * instead. `field`, `value`, `reason` and `range` describe the first issue; `issues` lists all.
+ */
+export class InputError extends Error implements InputIssue {
+  override readonly name = 'InputError';
+  readonly field: string;
+  readonly value: unknown;
+  readonly reason: string;
+  readonly range?: InputRange;
+  readonly issues: readonly InputIssue[];
+
+  constructor(field: string, value: unknown, reason: string, range?: InputRange);
+  constructor(issues: readonly InputIssue[]);
   constructor(
-    /** Dotted path of the offending input, e.g. `ambient.temperatureK`. */
-    readonly field: string,
-    /** The value received, as given. */
-    readonly value: unknown,
-    /** Why it was refused, in words a user understands. */
-    readonly reason: string,
-    /** Allowed range, where the refusal is a range check. */
-    readonly range?: { readonly min?: number; readonly max?: number; readonly unit: string },
+    fieldOrIssues: string | readonly InputIssue[],
+    value?: unknown,
+    reason?: string,
+    range?: InputRange,
   ) {
-    super(`${field}: ${reason} (got ${formatValue(value)})`);
+    const issues: readonly InputIssue[] =
+      typeof fieldOrIssues === 'string'
+        ? [{ field: fieldOrIssues, value, reason: reason ?? 'is not valid', range }]
+        : fieldOrIssues;
+    const first = issues[0];
+    if (!first) throw new TypeError('InputError needs at least one issue');
+    super(issues.map(describeIssue).join('; '));
+    this.field = first.field;
+    this.value = first.value;
+    this.reason = first.reason;
+    if (first.range) this.range = first.range;
+    this.issues = issues;
   }
+}
+
+function describeIssue(issue: InputIssue): string {
+  return `${issue.field}: ${issue.reason} (got ${formatValue(issue.value)})`;
 }
 
 function formatValue(value: unknown): string {
@@ -25,7 +63,8 @@ function formatValue(value: unknown): string {
     return String(value);
   }
   if (value === undefined) return 'nothing';
-  return JSON.stringify(value);
+  const text = JSON.stringify(value);
+  return text.length > 60 ? `${text.slice(0, 57)}...` : text;
 }
 
 /**
@@ -50,4 +89,13 @@ export function requireInRange(
     });
   }
   return value;
+}
+
+/**
+ * Raised when a result cannot be computed although every input is valid on its own: a numerical
+ * method that does not converge, or a combination no physical answer exists for. It is a defect
+ * or a limit of the model, never the user's typing.
+ */
+export class ComputationError extends Error {
+  override readonly name = 'ComputationError';
 }

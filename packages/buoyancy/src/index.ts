@@ -1,14 +1,60 @@
 export { ENGINE_VERSION } from './version.js';
-export { InputError } from './errors.js';
+export { ComputationError, InputError } from './errors.js';
+export type { InputIssue, InputRange } from './errors.js';
+export type {
+  CalculationResult,
+  CalculationWarning,
+  DerivationStep,
+  OutputQuantity,
+  Quantity,
+  SubstitutedValue,
+  WarningSeverity,
+} from './derivation.js';
 export {
   AIR_PRESSURE_RANGE_PA,
   AIR_TEMPERATURE_RANGE_K,
   dryAirDensityKgM3,
 } from './atmosphere/air-density.js';
 export {
-  STANDARD_GRAVITY_M_PER_S2,
-  USSA1976_AIR_MOLAR_MASS_KG_PER_MOL,
-  USSA1976_GAS_CONSTANT_J_PER_MOL_K,
-  USSA1976_SEA_LEVEL_PRESSURE_PA,
-  USSA1976_SEA_LEVEL_TEMPERATURE_K,
-} from './constants.js';
+  geometricAltitudeM,
+  geopotentialAltitudeM,
+  gravityAtAltitudeMS2,
+  STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M,
+  standardAltitudeForPressureM,
+  standardAtmosphere,
+  TEMPERATURE_OFFSET_RANGE_K,
+} from './atmosphere/standard-atmosphere.js';
+export type {
+  StandardAtmosphereOptions,
+  StandardAtmosphereState,
+} from './atmosphere/standard-atmosphere.js';
+export * from './constants.js';
+export { evaluate, isKindId, KIND_IDS, KINDS, normaliseInputs } from './kinds/registry.js';
+export type { KindDescription, KindId } from './kinds/registry.js';
+export type { LiftCheckInput } from './kinds/lift-check.kind.js';
+export { GAS_CATALOGUE, GAS_IDS } from './gas/gas-catalogue.js';
+export type { GasHazard, GasId, LiftingGas } from './gas/gas-catalogue.js';
+export { liftingGasDensity, idealGasDensityKgM3 } from './gas/lifting-gas-density.js';
+export type { GasDensityInput, GasState } from './gas/lifting-gas-density.js';
+export {
+  moistAirDensity,
+  moistAirDensityKgM3,
+  vapourMoleFractionFromDewPoint,
+  vapourMoleFractionFromRelativeHumidity,
+} from './atmosphere/moist-air-density.js';
+export {
+  enhancementFactor,
+  saturationVapourPressurePa,
+} from './atmosphere/saturation-vapour-pressure.js';
+export {
+  capsuleGeometry,
+  cushionGeometry,
+  cushionThicknessM,
+  envelopeGeometry,
+  sphereGeometry,
+  spheroidGeometry,
+} from './envelope/envelope-geometry.js';
+export type { EnvelopeGeometry, EnvelopeShape } from './envelope/envelope-geometry.js';
+export { liftMasses } from './steps/lift-steps.js';
+export type { LiftMasses } from './steps/lift-steps.js';
+export { findRoot } from './numerics/find-root.js';

@@ -1,0 +1,59 @@
+import { describe, expect, it } from 'vitest';
+import { InputError } from '../errors.js';
+import {
+  capsuleGeometry,
+  cushionGeometry,
+  cushionThicknessM,
+  envelopeGeometry,
+  sphereGeometry,
+  spheroidGeometry,
+} from './envelope-geometry.js';
+
+describe('envelope geometry', () => {
+  it('gives the sphere’s volume and area (CRC Standard Mathematical Tables)', () => {
+    const sphere = sphereGeometry(2);
+    expect(sphere.volumeM3).toBeCloseTo((4 / 3) * Math.PI, 12);
+    expect(sphere.surfaceAreaM2).toBeCloseTo(4 * Math.PI, 12);
+    expect(sphere.frontalAreaM2).toBeCloseTo(Math.PI, 12);
+    expect(sphere.referenceDiameterM).toBeCloseTo(2, 12);
+  });
+
+  it('gives the surface of the WGS 84 ellipsoid, 510 065 621.724 km², as an oblate spheroid', () => {
+    // WGS 84: a = 6 378 137 m, c = 6 356 752.314 245 m; surface area 510 065 621.724 km²
+    // (value from memory, as commonly quoted for the WGS 84 ellipsoid).
+    const earth = spheroidGeometry(2 * 6378137, 2 * 6356752.314245);
+    expect(earth.surfaceAreaM2 / 1e6).toBeCloseTo(510065621.724, 2);
+  });
+
+  it('tends to the sphere from both sides (oblate and prolate formulas agree at a = c)', () => {
+    const sphere = sphereGeometry(1);
+    for (const polar of [1 - 1e-6, 1 + 1e-6]) {
+      expect(spheroidGeometry(1, polar).surfaceAreaM2 / sphere.surfaceAreaM2).toBeCloseTo(1, 5);
+    }
+  });
+
+  it('makes a capsule of length equal to its diameter a sphere', () => {
+    const capsule = capsuleGeometry(0.8, 0.8);
+    const sphere = sphereGeometry(0.8);
+    expect(capsule.volumeM3).toBeCloseTo(sphere.volumeM3, 12);
+    expect(capsule.surfaceAreaM2).toBeCloseTo(sphere.surfaceAreaM2, 12);
+  });
+
+  it('gives the inflated two-disc cushion of 0.90 m flat diameter 0.111 03 m³ and 0.411 m thick', () => {
+    // Paulsen (1994), Mladenov & Oprea (2003): r = a/1.3110287771, τ = 2·0.5990701173·r,
+    // V = (2/3)·π·a·r². Worked check in the reference check values: 0.11103 m³, τ 0.41125 m.
+    expect(Math.abs(cushionGeometry(0.9).volumeM3 / 0.11103 - 1)).toBeLessThan(1e-4);
+    expect(cushionThicknessM(0.9)).toBeCloseTo(0.41125, 5);
+    // The inflated cushion holds less than the sphere of the same flat diameter, more than a lens.
+    expect(cushionGeometry(0.9).surfaceAreaM2).toBeLessThan(2 * Math.PI * 0.45 ** 2);
+  });
+
+  it('refuses a capsule shorter than its diameter and a custom surface smaller than a sphere’s', () => {
+    expect(() => envelopeGeometry({ shape: 'capsule', diameterM: 1, lengthM: 0.5 })).toThrow(
+      InputError,
+    );
+    expect(() => envelopeGeometry({ shape: 'custom', volumeM3: 1, surfaceAreaM2: 4 })).toThrow(
+      /surfaceAreaM2/,
+    );
+  });
+});

@@ -1,0 +1,70 @@
+import * as z from 'zod';
+import { AIR_PRESSURE_RANGE_PA, AIR_TEMPERATURE_RANGE_K } from '../atmosphere/air-density.js';
+import {
+  STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M,
+  TEMPERATURE_OFFSET_RANGE_K,
+} from '../atmosphere/standard-atmosphere.js';
+import { fraction, quantity } from './quantity-schema.js';
+
+export const humiditySchema = z
+  .discriminatedUnion('kind', [
+    z.object({ kind: z.literal('dry') }).strict(),
+    z
+      .object({
+        kind: z.literal('relative'),
+        relativeHumidity: fraction('relative humidity over liquid water, 0 to 1'),
+      })
+      .strict(),
+    z
+      .object({
+        kind: z.literal('dewPoint'),
+        dewPointK: quantity('K', 233.15, AIR_TEMPERATURE_RANGE_K.max, 'dew-point temperature'),
+      })
+      .strict(),
+  ])
+  .default({ kind: 'dry' })
+  .meta({ description: 'Water vapour in the air: dry, a relative humidity, or a dew point' });
+
+/** The air around the envelope: the standard atmosphere at an altitude, or measured values. */
+export const ambientSchema = z
+  .discriminatedUnion('mode', [
+    z
+      .object({
+        mode: z.literal('standard'),
+        altitudeM: quantity(
+          'm',
+          STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M.min,
+          STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M.max,
+          'geometric altitude above mean sea level',
+        ),
+        temperatureOffsetK: quantity(
+          'K',
+          TEMPERATURE_OFFSET_RANGE_K.min,
+          TEMPERATURE_OFFSET_RANGE_K.max,
+          'difference from the standard temperature (ISA + ΔT)',
+        ).default(0),
+        humidity: humiditySchema,
+      })
+      .strict(),
+    z
+      .object({
+        mode: z.literal('measured'),
+        temperatureK: quantity(
+          'K',
+          AIR_TEMPERATURE_RANGE_K.min,
+          AIR_TEMPERATURE_RANGE_K.max,
+          'air temperature',
+        ),
+        pressurePa: quantity(
+          'Pa',
+          AIR_PRESSURE_RANGE_PA.min,
+          AIR_PRESSURE_RANGE_PA.max,
+          'absolute air pressure',
+        ),
+        humidity: humiditySchema,
+      })
+      .strict(),
+  ])
+  .meta({ description: 'Ambient air' });
+
+export type AmbientInput = z.output<typeof ambientSchema>;

@@ -1,0 +1,24 @@
+import * as z from 'zod';
+import { GAS_IDS } from '../gas/gas-catalogue.js';
+import { MIN_PURITY } from '../gas/lifting-gas-density.js';
+import { fraction, quantity } from './quantity-schema.js';
+
+/** The gas in the envelope, relative to the air around it. */
+export const gasSchema = z
+  .object({
+    gasId: z.enum(GAS_IDS).meta({ description: 'lifting gas' }),
+    purity: fraction(
+      'mole fraction of the named gas in the dry gas; the rest is air',
+      MIN_PURITY,
+      1,
+    ).default(1),
+    superheatK: quantity('K', -30, 200, 'gas temperature above the air temperature').default(0),
+    superpressurePa: quantity('Pa', 0, 1e6, 'gas pressure above the air pressure').default(0),
+    relativeHumidity: fraction(
+      'water vapour in the gas at its own temperature: 0 dried, 1 saturated',
+    ).default(0),
+  })
+  .strict()
+  .meta({ description: 'Lifting gas' });
+
+export type GasInput = z.output<typeof gasSchema>;

@@ -1,0 +1,267 @@
+import {
+  CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL,
+  CIPM_GAS_CONSTANT_J_PER_MOL_K,
+  CIPM_VALIDITY,
+  WATER_MOLAR_MASS_KG_PER_MOL,
+  moistAirDensity,
+  vapourMoleFractionFromDewPoint,
+  vapourMoleFractionFromRelativeHumidity,
+} from '../atmosphere/moist-air-density.js';
+import {
+  enhancementFactor,
+  saturationVapourPressurePa,
+} from '../atmosphere/saturation-vapour-pressure.js';
+import {
+  geopotentialAltitudeM,
+  standardAtmosphere,
+  standardAtmosphereLayer,
+  USSA1976_HYDROSTATIC_CONSTANT_K_PER_M,
+} from '../atmosphere/standard-atmosphere.js';
+import {
+  USSA1976_AIR_MOLAR_MASS_KG_PER_MOL,
+  USSA1976_EARTH_RADIUS_M,
+  USSA1976_GAS_CONSTANT_J_PER_MOL_K,
+  ZERO_CELSIUS_K,
+} from '../constants.js';
+import { type Derivation, v } from '../derivation.js';
+import { InputError } from '../errors.js';
+import type { AmbientInput } from '../schema/ambient-schema.js';
+import { SOURCES } from '../sources.js';
+
+export interface AmbientState {
+  readonly temperatureK: number;
+  readonly pressurePa: number;
+  readonly densityKgM3: number;
+  readonly vapourMoleFraction: number;
+  /** One line saying what air this is, for result context: "15.0 °C, 101.33 kPa, dry air". */
+  readonly context: string;
+}
+
+/** Derives the ambient air state, recording a step for each quantity. */
+export function deriveAmbient(d: Derivation, ambient: AmbientInput): AmbientState {
+  let temperatureK: number;
+  let pressurePa: number;
+  if (ambient.mode === 'standard') {
+    const z = ambient.altitudeM;
+    const heightM = d.step({
+      id: 'geopotential-height',
+      label: 'Geopotential height',
+      formula: 'H = r₀·Z / (r₀ + Z)',
+      values: [v('r₀', USSA1976_EARTH_RADIUS_M, 'm'), v('Z', z, 'm')],
+      result: v('H', geopotentialAltitudeM(z), "m'"),
+      source: SOURCES.ussa1976Geopotential,
+    });
+    const state = standardAtmosphere(z, { temperatureOffsetK: ambient.temperatureOffsetK });
+    const layer = standardAtmosphereLayer(heightM);
+    const offsetValues =
+      ambient.temperatureOffsetK === 0 ? [] : [v('ΔT', ambient.temperatureOffsetK, 'K')];
+    temperatureK = d.step({
+      id: 'air-temperature',
+      label: `Air temperature (1976 standard, layer ${layer.index + 1})`,
+      formula:
+        ambient.temperatureOffsetK === 0
+          ? 'T = T_b + L_b·(H − H_b)'
+          : 'T = T_b + L_b·(H − H_b) + ΔT',
+      values: [
+        v('T_b', layer.baseTemperatureK, 'K'),
+        v('L_b', layer.lapseRateKPerM * 1000, "K/km'"),
+        v('H_b', layer.baseHeightM, "m'"),
+        v('H', heightM, "m'"),
+        ...offsetValues,
+      ],
+      result: v('T', state.temperatureK, 'K'),
+      source: SOURCES.ussa1976Temperature,
+    });
+    pressurePa = d.step({
+      id: 'air-pressure',
+      label: 'Air pressure (1976 standard)',
+      formula:
+        layer.lapseRateKPerM === 0
+          ? 'p = p_b·exp(−g₀M₀·(H − H_b) / (R*·T_b))'
+          : 'p = p_b·[T_b / (T_b + L_b·(H − H_b))]^(g₀M₀ / (R*·L_b))',
+      values: [
+        v('p_b', layer.basePressurePa, 'Pa'),
+        v('T_b', layer.baseTemperatureK, 'K'),
+        v('L_b', layer.lapseRateKPerM * 1000, "K/km'"),
+        v('g₀M₀/R*', USSA1976_HYDROSTATIC_CONSTANT_K_PER_M * 1000, "K/km'"),
+        v('H − H_b', heightM - layer.baseHeightM, "m'"),
+      ],
+      result: v('p', state.pressurePa, 'Pa'),
+      source: SOURCES.ussa1976Pressure,
+    });
+    if (ambient.humidity.kind === 'dry') {
+      const densityKgM3 = d.step({
+        id: 'air-density',
+        label: 'Density of the surrounding air (dry, 1976 standard)',
+        formula: 'ρ_air = p·M₀ / (R*·T)',
+        values: [
+          v('p', pressurePa, 'Pa'),
+          v('M₀', USSA1976_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+          v('R*', USSA1976_GAS_CONSTANT_J_PER_MOL_K, 'J/(mol·K)'),
+          v('T', temperatureK, 'K'),
+        ],
+        result: v('ρ_air', state.densityKgM3, 'kg/m³'),
+        source: SOURCES.ussa1976Density,
+      });
+      return {
+        temperatureK,
+        pressurePa,
+        densityKgM3,
+        vapourMoleFraction: 0,
+        context: describeAir(temperatureK, pressurePa, 'dry air'),
+      };
+    }
+  } else {
+    temperatureK = d.step({
+      id: 'air-temperature',
+      label: 'Air temperature (measured)',
+      formula: 'T = T_measured',
+      values: [],
+      result: v('T', ambient.temperatureK, 'K'),
+      source: SOURCES.measured,
+    });
+    pressurePa = d.step({
+      id: 'air-pressure',
+      label: 'Air pressure (measured, absolute)',
+      formula: 'p = p_measured',
+      values: [],
+      result: v('p', ambient.pressurePa, 'Pa'),
+      source: SOURCES.measured,
+    });
+  }
+  return deriveRealAir(d, ambient, temperatureK, pressurePa);
+}
+
+function deriveRealAir(
+  d: Derivation,
+  ambient: AmbientInput,
+  temperatureK: number,
+  pressurePa: number,
+): AmbientState {
+  const humidity = ambient.humidity;
+  let vapourMoleFraction = 0;
+  let humidityText = 'dry air';
+  if (humidity.kind !== 'dry') {
+    const waterTemperatureK = humidity.kind === 'relative' ? temperatureK : humidity.dewPointK;
+    if (humidity.kind === 'dewPoint' && humidity.dewPointK > temperatureK) {
+      throw new InputError(
+        'ambient.humidity.dewPointK',
+        humidity.dewPointK,
+        'must not be above the air temperature',
+        {
+          max: temperatureK,
+          unit: 'K',
+        },
+      );
+    }
+    const psvPa = d.step({
+      id: 'saturation-vapour-pressure',
+      label:
+        humidity.kind === 'relative'
+          ? 'Saturation vapour pressure at the air temperature'
+          : 'Saturation vapour pressure at the dew point',
+      formula: 'p_sv = exp(A·T² + B·T + C + D/T)',
+      values: [v('T', waterTemperatureK, 'K')],
+      result: v('p_sv', saturationVapourPressurePa(waterTemperatureK), 'Pa'),
+      source: SOURCES.cipm2007Saturation,
+    });
+    const f = d.step({
+      id: 'enhancement-factor',
+      label: 'Enhancement factor of water vapour in air',
+      formula: 'f = α + β·p + γ·t²',
+      values: [v('p', pressurePa, 'Pa'), v('t', waterTemperatureK - ZERO_CELSIUS_K, '°C')],
+      result: v('f', enhancementFactor(pressurePa, waterTemperatureK), ''),
+      source: SOURCES.cipm2007,
+    });
+    vapourMoleFraction =
+      humidity.kind === 'relative'
+        ? d.step({
+            id: 'vapour-mole-fraction',
+            label: 'Mole fraction of water vapour in the air',
+            formula: 'x_v = h·f·p_sv / p',
+            values: [
+              v('h', humidity.relativeHumidity, ''),
+              v('f', f, ''),
+              v('p_sv', psvPa, 'Pa'),
+              v('p', pressurePa, 'Pa'),
+            ],
+            result: v(
+              'x_v',
+              vapourMoleFractionFromRelativeHumidity(
+                humidity.relativeHumidity,
+                temperatureK,
+                pressurePa,
+              ),
+              '',
+            ),
+            source: SOURCES.cipm2007,
+          })
+        : d.step({
+            id: 'vapour-mole-fraction',
+            label: 'Mole fraction of water vapour in the air',
+            formula: 'x_v = f·p_sv(T_d) / p',
+            values: [v('f', f, ''), v('p_sv', psvPa, 'Pa'), v('p', pressurePa, 'Pa')],
+            result: v(
+              'x_v',
+              vapourMoleFractionFromDewPoint(humidity.dewPointK, temperatureK, pressurePa),
+              '',
+            ),
+            source: SOURCES.cipm2007,
+          });
+    humidityText =
+      humidity.kind === 'relative'
+        ? `relative humidity ${(humidity.relativeHumidity * 100).toFixed(0)} %`
+        : `dew point ${(humidity.dewPointK - ZERO_CELSIUS_K).toFixed(1)} °C`;
+  }
+  const air = moistAirDensity({ temperatureK, pressurePa, vapourMoleFraction });
+  const compressibility = d.step({
+    id: 'air-compressibility',
+    label: 'Compressibility factor of the air',
+    formula:
+      'Z = 1 − (p/T)·[a₀ + a₁t + a₂t² + (b₀ + b₁t)·x_v + (c₀ + c₁t)·x_v²] + (p/T)²·(d + e·x_v²)',
+    values: [v('p', pressurePa, 'Pa'), v('T', temperatureK, 'K'), v('x_v', vapourMoleFraction, '')],
+    result: v('Z', air.compressibility, ''),
+    source: SOURCES.cipm2007,
+  });
+  const densityKgM3 = d.step({
+    id: 'air-density',
+    label: 'Density of the surrounding air',
+    formula: 'ρ_air = p·M_a / (Z·R·T) · [1 − x_v·(1 − M_v/M_a)]',
+    values: [
+      v('p', pressurePa, 'Pa'),
+      v('M_a', CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+      v('Z', compressibility, ''),
+      v('R', CIPM_GAS_CONSTANT_J_PER_MOL_K, 'J/(mol·K)'),
+      v('T', temperatureK, 'K'),
+      v('x_v', vapourMoleFraction, ''),
+      v('M_v', WATER_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+    ],
+    result: v('ρ_air', air.densityKgM3, 'kg/m³'),
+    source: SOURCES.cipm2007,
+  });
+  const outsideFit =
+    pressurePa < CIPM_VALIDITY.pressurePa.min ||
+    pressurePa > CIPM_VALIDITY.pressurePa.max ||
+    temperatureK < CIPM_VALIDITY.temperatureK.min ||
+    temperatureK > CIPM_VALIDITY.temperatureK.max;
+  if (outsideFit) {
+    d.warn({
+      code: 'air-density-formula-extrapolated',
+      severity: 'note',
+      message:
+        'The CIPM-2007 air-density formula is published for 600–1100 hPa and 15–27 °C; here its small real-gas correction (about 0.04 % near sea level, shrinking as pressure falls) is extrapolated.',
+      field: 'ambient',
+    });
+  }
+  return {
+    temperatureK,
+    pressurePa,
+    densityKgM3,
+    vapourMoleFraction,
+    context: describeAir(temperatureK, pressurePa, humidityText),
+  };
+}
+
+function describeAir(temperatureK: number, pressurePa: number, humidityText: string): string {
+  return `at ${(temperatureK - ZERO_CELSIUS_K).toFixed(1)} °C, ${(pressurePa / 1000).toFixed(2)} kPa, ${humidityText}`;
+}

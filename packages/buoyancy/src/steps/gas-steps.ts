@@ -1,0 +1,156 @@
+import {
+  WATER_MOLAR_MASS_KG_PER_MOL,
+  CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL,
+} from '../atmosphere/moist-air-density.js';
+import { saturationVapourPressurePa } from '../atmosphere/saturation-vapour-pressure.js';
+import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
+import { type Derivation, v } from '../derivation.js';
+import { InputError } from '../errors.js';
+import { GAS_CATALOGUE } from '../gas/gas-catalogue.js';
+import { GAS_TEMPERATURE_RANGE_K, liftingGasDensity } from '../gas/lifting-gas-density.js';
+import type { GasInput } from '../schema/gas-schema.js';
+import { SOURCES } from '../sources.js';
+import type { AmbientState } from './ambient-steps.js';
+
+export interface GasDerivedState {
+  readonly temperatureK: number;
+  readonly pressurePa: number;
+  readonly densityKgM3: number;
+  readonly molarMassKgPerMol: number;
+}
+
+/** Derives the state of the lifting gas inside the envelope, with its steps and cautions. */
+export function deriveGas(
+  d: Derivation,
+  gasInput: GasInput,
+  ambient: AmbientState,
+): GasDerivedState {
+  const gas = GAS_CATALOGUE[gasInput.gasId];
+  const temperatureK = d.step({
+    id: 'gas-temperature',
+    label:
+      gasInput.superheatK === 0
+        ? 'Gas temperature (same as the air)'
+        : 'Gas temperature (air plus superheat)',
+    formula: 'T_gas = T + ΔT_superheat',
+    values: [v('T', ambient.temperatureK, 'K'), v('ΔT_superheat', gasInput.superheatK, 'K')],
+    result: v('T_gas', ambient.temperatureK + gasInput.superheatK, 'K'),
+    source: SOURCES.given,
+  });
+  if (temperatureK < GAS_TEMPERATURE_RANGE_K.min || temperatureK > GAS_TEMPERATURE_RANGE_K.max) {
+    throw new InputError(
+      'gas.superheatK',
+      gasInput.superheatK,
+      `puts the gas at ${temperatureK.toFixed(2)} K; the gas temperature must be between ${GAS_TEMPERATURE_RANGE_K.min} and ${GAS_TEMPERATURE_RANGE_K.max} K`,
+      {
+        min: GAS_TEMPERATURE_RANGE_K.min - ambient.temperatureK,
+        max: GAS_TEMPERATURE_RANGE_K.max - ambient.temperatureK,
+        unit: 'K',
+      },
+    );
+  }
+  const pressurePa = d.step({
+    id: 'gas-pressure',
+    label:
+      gasInput.superpressurePa === 0
+        ? 'Gas pressure (same as the air)'
+        : 'Gas pressure (air plus superpressure)',
+    formula: 'p_gas = p + Δp',
+    values: [v('p', ambient.pressurePa, 'Pa'), v('Δp', gasInput.superpressurePa, 'Pa')],
+    result: v('p_gas', ambient.pressurePa + gasInput.superpressurePa, 'Pa'),
+    source: SOURCES.given,
+  });
+  const state = liftingGasDensity({
+    gasId: gas.id,
+    temperatureK,
+    pressurePa,
+    purity: gasInput.purity,
+    relativeHumidity: gasInput.relativeHumidity,
+  });
+  const values = [
+    v('x', gasInput.purity, ''),
+    v(`M_${gas.formula}`, gas.molarMassKgPerMol, 'kg/mol'),
+    v('M_air', CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+  ];
+  if (gasInput.relativeHumidity > 0) {
+    const psvPa = d.step({
+      id: 'gas-saturation-vapour-pressure',
+      label: 'Saturation vapour pressure at the gas temperature',
+      formula: 'p_sv = exp(A·T_gas² + B·T_gas + C + D/T_gas)',
+      values: [v('T_gas', temperatureK, 'K')],
+      result: v('p_sv', saturationVapourPressurePa(temperatureK), 'Pa'),
+      source: SOURCES.cipm2007Saturation,
+    });
+    d.step({
+      id: 'gas-vapour-mole-fraction',
+      label: 'Mole fraction of water vapour in the gas',
+      formula: 'x_w = h_gas·p_sv / p_gas',
+      values: [
+        v('h_gas', gasInput.relativeHumidity, ''),
+        v('p_sv', psvPa, 'Pa'),
+        v('p_gas', pressurePa, 'Pa'),
+      ],
+      result: v('x_w', state.vapourMoleFraction, ''),
+      source: SOURCES.mixture,
+    });
+    values.push(
+      v('x_w', state.vapourMoleFraction, ''),
+      v('M_w', WATER_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+    );
+  }
+  const molarMassKgPerMol = d.step({
+    id: 'gas-molar-mass',
+    label: `Molar mass of the gas in the envelope (${gas.name.toLowerCase()}${gasInput.purity < 1 ? ' with air' : ''}${gasInput.relativeHumidity > 0 ? ' and water vapour' : ''})`,
+    formula:
+      gasInput.relativeHumidity > 0
+        ? 'M = [x·M_gas + (1 − x)·M_air]·(1 − x_w) + x_w·M_w'
+        : 'M = x·M_gas + (1 − x)·M_air',
+    values,
+    result: v('M', state.molarMassKgPerMol, 'kg/mol'),
+    source: `${SOURCES.mixture}; ${gas.molarMassSource}`,
+  });
+  const densityKgM3 = d.step({
+    id: 'gas-density',
+    label: 'Density of the gas in the envelope',
+    formula: 'ρ_gas = p_gas·M / (R·T_gas)',
+    values: [
+      v('p_gas', pressurePa, 'Pa'),
+      v('M', molarMassKgPerMol, 'kg/mol'),
+      v('R', MOLAR_GAS_CONSTANT_J_PER_MOL_K, 'J/(mol·K)'),
+      v('T_gas', temperatureK, 'K'),
+    ],
+    result: v('ρ_gas', state.densityKgM3, 'kg/m³'),
+    source: SOURCES.idealGas,
+  });
+  warnAboutGas(d, gasInput);
+  return { temperatureK, pressurePa, densityKgM3, molarMassKgPerMol };
+}
+
+function warnAboutGas(d: Derivation, gasInput: GasInput): void {
+  const gas = GAS_CATALOGUE[gasInput.gasId];
+  if (gas.hazard.flammable) {
+    d.warn({
+      code: 'flammable-gas',
+      severity: 'caution',
+      message: `${gas.name} is flammable. ${gas.hazard.note} Fill in open air or a well-ventilated space, away from ignition sources, and follow your local fire code and the gas supplier's instructions.`,
+      field: 'gas.gasId',
+    });
+  }
+  if (gas.hazard.toxic) {
+    d.warn({
+      code: 'toxic-gas',
+      severity: 'caution',
+      message: `${gas.name} is toxic. Handle it only with the ventilation and protection its safety data sheet requires.`,
+      field: 'gas.gasId',
+    });
+  }
+  if (gas.isHeatedAir && gasInput.superheatK <= 0) {
+    d.warn({
+      code: 'heated-air-not-heated',
+      severity: 'warning',
+      message:
+        'Heated air lifts only when it is warmer than the surrounding air: enter a superheat above 0 K.',
+      field: 'gas.superheatK',
+    });
+  }
+}
