@@ -66,7 +66,7 @@ export function moistAirDensity(input: MoistAirInput): MoistAirState {
     AIR_PRESSURE_RANGE_PA.max,
     'Pa',
   );
-  const xv = requireInRange('vapourMoleFraction', input.vapourMoleFraction, 0, 0.5, '');
+  const xv = requireInRange('vapourMoleFraction', input.vapourMoleFraction, 0, 1, '');
   const xCo2 = requireInRange(
     'co2MoleFraction',
     input.co2MoleFraction ?? REFERENCE_CO2_MOLE_FRACTION,

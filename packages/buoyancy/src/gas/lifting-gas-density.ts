@@ -7,8 +7,8 @@ import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
 import { InputError, requireInRange } from '../errors.js';
 import { GAS_CATALOGUE, type GasId } from './gas-catalogue.js';
 
-/** Gas temperatures accepted [K]: −60 °C to +150 °C (hot-air envelopes run near 100 °C). */
-export const GAS_TEMPERATURE_RANGE_K = { min: 213.15, max: 423.15 } as const;
+/** Gas temperatures accepted [K]: down to 120 K (the 1976 atmosphere at 86 km with a −60 K offset is 127 K) and up to +150 °C (hot air). */
+export const GAS_TEMPERATURE_RANGE_K = { min: 120, max: 423.15 } as const;
 /** Lowest purity accepted: a gas that is mostly air is not a lifting gas any more. */
 export const MIN_PURITY = 0.5;
 

@@ -4,11 +4,18 @@ import { InputError } from '../errors.js';
 import { parseInputs } from '../schema/parse-inputs.js';
 import { ambientAirKind } from './ambient-air.kind.js';
 import { envelopeGeometryKind } from './envelope-geometry.kind.js';
+import { envelopeSizingKind } from './envelope-sizing.kind.js';
 import type { CalculationKind } from './kind.js';
 import { liftCheckKind } from './lift-check.kind.js';
 import { liftingGasKind } from './lifting-gas.kind.js';
 
-const KIND_LIST = [ambientAirKind, liftingGasKind, envelopeGeometryKind, liftCheckKind] as const;
+const KIND_LIST = [
+  ambientAirKind,
+  liftingGasKind,
+  envelopeGeometryKind,
+  liftCheckKind,
+  envelopeSizingKind,
+] as const;
 
 export type KindId = (typeof KIND_LIST)[number]['id'];
 

@@ -208,6 +208,13 @@ function deriveRealAir(
             ),
             source: SOURCES.cipm2007,
           });
+    if (vapourMoleFraction >= 1) {
+      throw new InputError(
+        'ambient.humidity',
+        humidity,
+        'is more water vapour than air can hold: water boils at this temperature and pressure',
+      );
+    }
     humidityText =
       humidity.kind === 'relative'
         ? `relative humidity ${(humidity.relativeHumidity * 100).toFixed(0)} %`
