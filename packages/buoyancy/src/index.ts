@@ -58,3 +58,9 @@ export type { EnvelopeGeometry, EnvelopeShape } from './envelope/envelope-geomet
 export { liftMasses } from './steps/lift-steps.js';
 export type { LiftMasses } from './steps/lift-steps.js';
 export { findRoot } from './numerics/find-root.js';
+export { convertFromSI, formatQuantity, parseQuantity } from './units/quantity-text.js';
+export type { FormattedQuantity } from './units/quantity-text.js';
+export { DIMENSIONS, DISPLAY_UNITS } from './units/dimensions.js';
+export type { Dimension, UnitSystem } from './units/dimensions.js';
+export { envelopeSizingKind } from './kinds/envelope-sizing.kind.js';
+export type { EnvelopeSizingInput } from './kinds/envelope-sizing.kind.js';
