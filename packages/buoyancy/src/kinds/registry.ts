@@ -3,11 +3,13 @@ import type { CalculationResult } from '../derivation.js';
 import { InputError } from '../errors.js';
 import { parseInputs } from '../schema/parse-inputs.js';
 import { ambientAirKind } from './ambient-air.kind.js';
+import { balloonRulesKind } from './balloon-rules.kind.js';
 import { envelopeGeometryKind } from './envelope-geometry.kind.js';
 import { envelopeSizingKind } from './envelope-sizing.kind.js';
 import type { CalculationKind } from './kind.js';
 import { liftCheckKind } from './lift-check.kind.js';
 import { liftingGasKind } from './lifting-gas.kind.js';
+import { liftMeasurementKind } from './lift-measurement.kind.js';
 
 const KIND_LIST = [
   ambientAirKind,
@@ -15,6 +17,8 @@ const KIND_LIST = [
   envelopeGeometryKind,
   liftCheckKind,
   envelopeSizingKind,
+  liftMeasurementKind,
+  balloonRulesKind,
 ] as const;
 
 export type KindId = (typeof KIND_LIST)[number]['id'];

@@ -1,0 +1,94 @@
+import { describe, expect, it } from 'vitest';
+import { evaluate } from './registry.js';
+
+// Title 14 CFR § 101.1(a): thresholds in pounds, ounces per square inch, feet and cubic feet,
+// converted with the exact NIST SP 811 definitions (1 lb = 0.453 592 37 kg, 1 in = 0.0254 m).
+const LB = 0.45359237;
+const LBF = 4.4482216152605;
+const crossed = (inputs: unknown) =>
+  evaluate('balloon-rules', inputs)
+    .warnings.filter((warning) => warning.code.startsWith('rule-crossed-'))
+    .map((warning) => warning.code);
+
+describe('balloon-rules, U.S. 14 CFR 101.1', () => {
+  it('leaves a 6 lb package inside (ii) and puts one just over 6 lb under it', () => {
+    const base = {
+      profileId: 'us-14cfr101',
+      operation: 'free',
+      packages: [{ massKg: 6 * LB, smallestSurfaceAreaM2: 1 }],
+    };
+    expect(crossed(base)).not.toContain('rule-crossed-101.1(a)(4)(ii)-single-package-mass');
+    expect(
+      crossed({ ...base, packages: [{ massKg: 6 * LB + 1e-6, smallestSurfaceAreaM2: 1 }] }),
+    ).toContain('rule-crossed-101.1(a)(4)(ii)-single-package-mass');
+  });
+
+  it('applies (i) only to packages over 4 lb denser than 3 oz per square inch of their smallest face', () => {
+    const massKg = 5 * LB;
+    // 5 lb = 80 oz: the ratio exceeds 3 oz/in² when the smallest face is under 80/3 in².
+    const justDense = (80 / 3 - 0.01) * 0.0254 ** 2;
+    const justLight = (80 / 3 + 0.01) * 0.0254 ** 2;
+    const at = (area: number) =>
+      crossed({
+        profileId: 'us-14cfr101',
+        operation: 'free',
+        packages: [{ massKg, smallestSurfaceAreaM2: area }],
+      });
+    expect(at(justDense)).toContain('rule-crossed-101.1(a)(4)(i)-single-package-mass-and-ratio');
+    expect(at(justLight)).not.toContain(
+      'rule-crossed-101.1(a)(4)(i)-single-package-mass-and-ratio',
+    );
+  });
+
+  it('adds packages for (iii), over 12 lb together', () => {
+    const packages = [
+      { massKg: 5 * LB, smallestSurfaceAreaM2: 1 },
+      { massKg: 7 * LB + 1e-6, smallestSurfaceAreaM2: 1 },
+    ];
+    expect(crossed({ profileId: 'us-14cfr101', operation: 'free', packages })).toContain(
+      'rule-crossed-101.1(a)(4)(iii)-combined-package-mass',
+    );
+  });
+
+  it('checks the suspension against 50 lbf for (iv)', () => {
+    const inputs = {
+      profileId: 'us-14cfr101',
+      operation: 'free',
+      packages: [],
+      suspensionSeparationForceN: 50 * LBF + 0.01,
+    };
+    expect(crossed(inputs)).toEqual(['rule-crossed-101.1(a)(4)(iv)-suspension-force']);
+  });
+
+  it('checks a moored balloon against 6 ft and 115 ft³ for (a)(1)', () => {
+    const over = crossed({
+      profileId: 'us-14cfr101',
+      operation: 'moored',
+      mooredDiameterM: 1.83,
+      mooredGasVolumeM3: 3.2,
+    });
+    expect(over).toEqual(['rule-crossed-101.1(a)(1)-moored-diameter']);
+    const volume = crossed({
+      profileId: 'us-14cfr101',
+      operation: 'moored',
+      mooredDiameterM: 1.8,
+      mooredGasVolumeM3: 115 * 0.3048 ** 3 + 1e-6,
+    });
+    expect(volume).toEqual(['rule-crossed-101.1(a)(1)-moored-gas-volume']);
+  });
+
+  it('always says it is not legal advice, and refuses an unknown profile', () => {
+    const result = evaluate('balloon-rules', {
+      profileId: 'us-14cfr101',
+      operation: 'free',
+      packages: [{ massKg: 0.3 }],
+    });
+    expect(result.outputs.thresholdsCrossed?.value).toBe(0);
+    expect(result.warnings.find((warning) => warning.code === 'not-legal-advice')?.message).toMatch(
+      /not legal advice/,
+    );
+    expect(() => evaluate('balloon-rules', { profileId: 'atlantis', operation: 'free' })).toThrow(
+      /profileId/,
+    );
+  });
+});
