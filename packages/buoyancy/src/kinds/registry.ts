@@ -6,6 +6,7 @@ import { ambientAirKind } from './ambient-air.kind.js';
 import { balloonRulesKind } from './balloon-rules.kind.js';
 import { envelopeGeometryKind } from './envelope-geometry.kind.js';
 import { envelopeSizingKind } from './envelope-sizing.kind.js';
+import { gasSupplyKind } from './gas-supply.kind.js';
 import type { CalculationKind } from './kind.js';
 import { liftCheckKind } from './lift-check.kind.js';
 import { liftingGasKind } from './lifting-gas.kind.js';
@@ -18,6 +19,7 @@ const KIND_LIST = [
   liftCheckKind,
   envelopeSizingKind,
   liftMeasurementKind,
+  gasSupplyKind,
   balloonRulesKind,
 ] as const;
 
