@@ -231,7 +231,7 @@ export const gasSupplyKind = defineKind({
         result: v('E', (powerW * minutes) / 60, 'Wh'),
         source: 'energy = power × time',
       });
-      const kWhPerM3 = d.step({
+      d.step({
         id: 'specific-energy',
         label: 'Energy per cubic metre at fill conditions',
         formula: 'e = E / V_total',
