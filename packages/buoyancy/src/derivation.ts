@@ -51,11 +51,24 @@ export interface OutputQuantity extends Quantity {
   readonly context?: string;
 }
 
+/** A table of numbers for a chart: named columns with units, one row per point. */
+export interface DataSeries {
+  readonly label: string;
+  readonly columns: readonly {
+    readonly key: string;
+    readonly label: string;
+    readonly unit: string;
+  }[];
+  readonly rows: readonly (readonly number[])[];
+}
+
 /** What every calculation kind returns. */
 export interface CalculationResult {
   readonly outputs: Readonly<Record<string, OutputQuantity>>;
   readonly steps: readonly DerivationStep[];
   readonly warnings: readonly CalculationWarning[];
+  /** Data for charts, where a kind produces a profile or a sweep. */
+  readonly series?: Readonly<Record<string, DataSeries>>;
 }
 
 /**
@@ -66,6 +79,7 @@ export class Derivation {
   private readonly steps: DerivationStep[] = [];
   private readonly outputs: Record<string, OutputQuantity> = {};
   private readonly warnings: CalculationWarning[] = [];
+  private readonly series: Record<string, DataSeries> = {};
 
   /** Records a step and returns its result value, so code reads like the formula it shows. */
   step(step: DerivationStep): number {
@@ -98,6 +112,18 @@ export class Derivation {
     }
   }
 
+  /** Attaches a data series for a chart; every value must be finite. */
+  addSeries(name: string, series: DataSeries): void {
+    for (const row of series.rows) {
+      if (row.length !== series.columns.length || !row.every(Number.isFinite)) {
+        throw new ComputationError(
+          `Series "${name}" has a row that is not ${series.columns.length} finite numbers`,
+        );
+      }
+    }
+    this.series[name] = series;
+  }
+
   /** Appends another derivation's steps and warnings (its outputs stay its own). */
   include(other: Pick<CalculationResult, 'steps' | 'warnings'>): void {
     for (const step of other.steps) this.step(step);
@@ -110,7 +136,13 @@ export class Derivation {
         throw new ComputationError(`Output "${name}" is not a finite number (${output.value})`);
       }
     }
-    return { outputs: { ...this.outputs }, steps: [...this.steps], warnings: [...this.warnings] };
+    const hasSeries = Object.keys(this.series).length > 0;
+    return {
+      outputs: { ...this.outputs },
+      steps: [...this.steps],
+      warnings: [...this.warnings],
+      ...(hasSeries ? { series: { ...this.series } } : {}),
+    };
   }
 }
 

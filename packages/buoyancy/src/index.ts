@@ -4,6 +4,7 @@ export type { InputIssue, InputRange } from './errors.js';
 export type {
   CalculationResult,
   CalculationWarning,
+  DataSeries,
   DerivationStep,
   OutputQuantity,
   Quantity,

@@ -6,6 +6,7 @@ import { ambientAirKind } from './ambient-air.kind.js';
 import { balloonRulesKind } from './balloon-rules.kind.js';
 import { envelopeGeometryKind } from './envelope-geometry.kind.js';
 import { envelopeSizingKind } from './envelope-sizing.kind.js';
+import { flightProfileKind } from './flight-profile.kind.js';
 import { gasSupplyKind } from './gas-supply.kind.js';
 import type { CalculationKind } from './kind.js';
 import { liftCheckKind } from './lift-check.kind.js';
@@ -19,6 +20,7 @@ const KIND_LIST = [
   liftCheckKind,
   envelopeSizingKind,
   liftMeasurementKind,
+  flightProfileKind,
   gasSupplyKind,
   balloonRulesKind,
 ] as const;
