@@ -183,9 +183,20 @@ export function standardAtmosphere(
     TEMPERATURE_OFFSET_RANGE_K.max,
     'K',
   );
+  return standardAtmosphereUnchecked(geometricAltitudeM, temperatureOffsetK);
+}
+
+/**
+ * standardAtmosphere without its range checks, for integrators that have checked their
+ * altitude span once. Outside −5 to 86 km its results are extrapolations of the end layers.
+ * @internal
+ */
+export function standardAtmosphereUnchecked(
+  geometricAltitudeM: number,
+  temperatureOffsetK: number,
+): StandardAtmosphereState {
   const heightM = geopotentialAltitudeM(geometricAltitudeM);
   const layer = standardAtmosphereLayer(heightM);
-  const layerIndex = layer.index;
   const molecularTemperatureK =
     layer.baseTemperatureK + layer.lapseRateKPerM * (heightM - layer.baseHeightM);
   const pressurePa = pressureInLayer(layer, heightM);
@@ -200,7 +211,7 @@ export function standardAtmosphere(
     densityKgM3,
     geopotentialAltitudeM: heightM,
     gravityMS2: gravityAtAltitudeMS2(geometricAltitudeM),
-    layerIndex,
+    layerIndex: layer.index,
   };
 }
 
@@ -245,8 +256,13 @@ export function standardAtmosphereLayer(geopotentialHeightM: number): StandardAt
   ) {
     index += 1;
   }
-  return { index, ...(LAYERS[index] as Layer) };
+  return INDEXED_LAYERS[index] as StandardAtmosphereLayer;
 }
+
+const INDEXED_LAYERS: readonly StandardAtmosphereLayer[] = LAYERS.map((layer, index) => ({
+  index,
+  ...layer,
+}));
 
 /** g0·M0/R* of the 1976 standard [K/m'], the exponent scale of its pressure formulas. */
 export const USSA1976_HYDROSTATIC_CONSTANT_K_PER_M = HYDROSTATIC_CONSTANT_K_PER_M;

@@ -1,6 +1,6 @@
 import {
   STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M,
-  standardAtmosphere,
+  standardAtmosphereUnchecked,
 } from '../atmosphere/standard-atmosphere.js';
 import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
 
@@ -37,7 +37,8 @@ export interface AscentState {
  * rises at the terminal velocity where drag balances free lift: ½·ρ·w²·C_d·A = L_free·g.
  */
 export function ascentState(model: AscentModel, altitudeM: number): AscentState {
-  const air = standardAtmosphere(altitudeM, { temperatureOffsetK: model.temperatureOffsetK });
+  // Callers stay within the model's altitudes (checked at the kind's boundary).
+  const air = standardAtmosphereUnchecked(altitudeM, model.temperatureOffsetK);
   let volumeM3: number;
   let frontalAreaM2: number;
   let diameterM: number;
@@ -70,7 +71,7 @@ export function descentRateMS(
   altitudeM: number,
   temperatureOffsetK: number,
 ): number {
-  const air = standardAtmosphere(altitudeM, { temperatureOffsetK });
+  const air = standardAtmosphereUnchecked(altitudeM, temperatureOffsetK);
   return Math.sqrt(
     (2 * massKg * air.gravityMS2) / (air.densityKgM3 * dragCoefficient * parachuteAreaM2),
   );
@@ -123,9 +124,10 @@ export function integrateAscent(
   const target = Math.min(stopAltitudeM, ceilingM);
   let t = 0;
   let z = launchAltitudeM;
+  // The rate at the start of a step is the one recorded at the end of the previous step.
+  let k1 = rate(z);
   while (t < maxTimeS) {
     const h = timeStepS;
-    const k1 = rate(z);
     const k2 = rate(z + (h * k1) / 2);
     const k3 = rate(z + (h * k2) / 2);
     const k4 = rate(z + h * k3);
@@ -147,7 +149,9 @@ export function integrateAscent(
     }
     t += h;
     z += dz;
-    points.push(point(t, z));
+    const reached = point(t, z);
+    points.push(reached);
+    k1 = reached.ascentRateMS;
   }
   return { points, endTimeS: t, endAltitudeM: z, end: 'time-limit' };
 }

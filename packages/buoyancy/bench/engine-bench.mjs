@@ -1,0 +1,120 @@
+// Speed of the engine as shipped (dist), against goals stated as ratios and medians. Prints a
+// table; it is a measurement, not a test, and always exits 0 unless the engine throws.
+import { Bench } from 'tinybench';
+import { evaluate, fastLift, sweepSphereDiameter } from '../dist/index.js';
+
+const fastInput = {
+  volumeM3: 0.0731,
+  envelopeMassKg: 0.0246,
+  payloadMassKg: 0.01,
+  airTemperatureK: 293.15,
+  airPressurePa: 101325,
+  airVapourMoleFraction: 0,
+  gas: { gasId: 'hydrogen', temperatureK: 293.15, pressurePa: 101325, purity: 0.98 },
+};
+
+// The same physics typed out inline: CIPM-2007 dry air, ideal gas with air as contaminant, lift.
+function inlinedFreeLiftKg(
+  volumeM3,
+  envelopeMassKg,
+  payloadMassKg,
+  temperatureK,
+  pressurePa,
+  purity,
+) {
+  const t = temperatureK - 273.15;
+  const pOverT = pressurePa / temperatureK;
+  const z =
+    1 - pOverT * (1.58123e-6 - 2.9331e-8 * t + 1.1043e-10 * t * t) + pOverT * pOverT * 1.83e-11;
+  const airDensity = (pressurePa * 28.96546e-3) / (z * 8.314472 * temperatureK);
+  const gasMolarMass = purity * 2.016e-3 + (1 - purity) * 28.96546e-3;
+  const gasDensity = (pressurePa * gasMolarMass) / (8.314462618 * temperatureK);
+  return volumeM3 * (airDensity - gasDensity) - envelopeMassKg - payloadMassKg;
+}
+
+const flightInputs = {
+  envelope: { kind: 'extensible', launchDiameterM: 1.6, burstDiameterM: 6 },
+  envelopeMassKg: 0.6,
+  payloadMassKg: 0.9,
+  gas: { gasId: 'helium' },
+  launch: { altitudeM: 100 },
+  timeStepS: 1,
+};
+
+// Two inputs alternated, so neither side can be folded into a constant.
+const fastInputs = [fastInput, { ...fastInput, volumeM3: 0.0732 }];
+const volumes = [0.0731, 0.0732];
+let sink = 0;
+let turn = 0;
+const bench = new Bench({ time: 1500, warmupTime: 300 });
+bench
+  .add('lift check without steps (fastLift)', () => {
+    turn ^= 1;
+    sink += fastLift(fastInputs[turn]).freeLiftKg;
+  })
+  .add('hand-inlined lift formula', () => {
+    turn ^= 1;
+    sink += inlinedFreeLiftKg(volumes[turn], 0.0246, 0.01, 293.15, 101325, 0.98);
+  })
+  .add('1,000-point diameter sweep', () => {
+    const sweep = sweepSphereDiameter(
+      fastInput,
+      { fixedMassKg: 0, arealDensityKgM2: 0.05 },
+      0.1,
+      3,
+      1000,
+    );
+    sink += sweep[999].freeLiftKg;
+  })
+  .add('flight profile to burst at 1 s steps (with steps and series)', () => {
+    sink += evaluate('flight-profile', flightInputs).outputs.ascentTime.value;
+  })
+  .add('lift check through evaluate (validation and derivation)', () => {
+    sink += evaluate('lift-check', {
+      envelope: { shape: 'sphere', diameterM: 0.52 },
+      envelopeMass: { kind: 'fixed', massKg: 0.0246 },
+      payloadMassKg: 0.01,
+      gas: { gasId: 'hydrogen', purity: 0.98 },
+      ambient: { mode: 'measured', temperatureK: 293.15, pressurePa: 101325 },
+    }).outputs.freeLift.value;
+  });
+
+await bench.run();
+
+const median = (name) => {
+  const task = bench.tasks.find((candidate) => candidate.name === name);
+  const latency = task?.result?.latency;
+  if (!latency) throw new Error(`no result for ${name}`);
+  return latency.p50;
+};
+const ms = (value) => `${value.toFixed(4)} ms`;
+const fast = median('lift check without steps (fastLift)');
+const inlined = median('hand-inlined lift formula');
+const sweep = median('1,000-point diameter sweep');
+const flight = median('flight profile to burst at 1 s steps (with steps and series)');
+const full = median('lift check through evaluate (validation and derivation)');
+
+const rows = [
+  [
+    'lift check without steps / inlined formula',
+    `${(fast / inlined).toFixed(2)} x`,
+    '<= 3 x',
+    fast / inlined <= 3,
+  ],
+  ['1,000-point diameter sweep, median', ms(sweep), '< 2 ms', sweep < 2],
+  ['flight profile to burst at 1 s steps, median', ms(flight), '< 10 ms', flight < 10],
+  [
+    'lift check through evaluate / without steps',
+    `${(full / fast).toFixed(1)} x`,
+    '(for information)',
+    true,
+  ],
+];
+console.log(
+  `\n@loftwright/buoyancy benchmark (Node ${process.version}, medians of tinybench samples)`,
+);
+console.table(bench.table());
+for (const [what, measured, goal, met] of rows) {
+  console.log(`${met ? 'meets ' : 'MISSES'}  ${what}: ${measured} (goal ${goal})`);
+}
+if (!Number.isFinite(sink)) throw new Error('benchmark produced a non-finite result');
