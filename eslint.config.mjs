@@ -67,5 +67,10 @@ export default tseslint.config(
       'no-restricted-imports': ['error', { patterns: [deepRelative, fromFeatures, fromApp] }],
     },
   },
+  {
+    // Benchmarks and developer scripts report on the console by design.
+    files: ['**/bench/**', 'scripts/**'],
+    rules: { 'no-console': 'off' },
+  },
   prettier,
 );
