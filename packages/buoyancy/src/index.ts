@@ -75,3 +75,5 @@ export { HYDROGEN_HHV_J_PER_KG, hydrogenMolarRateMolPerS } from './supply/electr
 export { cylinderDeliverableMol, virialCompressibility } from './supply/cylinder.js';
 export { fitLiftRetention } from './measurement/lift-retention.js';
 export type { LiftReading, RetentionFit } from './measurement/lift-retention.js';
+export { kindsMarkdown } from './kinds/kinds-markdown.js';
+export { DEFAULT_BALLOON_DRAG_COEFFICIENT, DEFAULT_PARACHUTE_DRAG_COEFFICIENT } from './flight/drag-defaults.js';

@@ -24,11 +24,10 @@ import {
   spheroidGeometry,
   type EnvelopeGeometry,
 } from '../envelope/envelope-geometry.js';
+import { DEFAULT_BALLOON_DRAG_COEFFICIENT } from '../flight/drag-defaults.js';
 import { defineKind } from './kind.js';
 import { warnAboutLift } from './lift-check.kind.js';
 
-/** Default drag coefficient for an ascent-rate target: a smooth sphere below the drag crisis. */
-export const DEFAULT_SPHERE_DRAG_COEFFICIENT = 0.47;
 
 const shapeFamilySchema = z
   .discriminatedUnion('shape', [
@@ -67,7 +66,7 @@ const targetSchema = z
         kind: z.literal('ascentRate'),
         ascentRateMS: quantity('m/s', 0.1, 20, 'initial rate of climb wanted'),
         dragCoefficient: quantity('', 0.05, 2, 'drag coefficient on the frontal area').default(
-          DEFAULT_SPHERE_DRAG_COEFFICIENT,
+          DEFAULT_BALLOON_DRAG_COEFFICIENT,
         ),
       })
       .strict(),

@@ -24,16 +24,10 @@ import { deriveGas } from '../steps/gas-steps.js';
 import { deriveGeometry } from '../steps/geometry-steps.js';
 import { deriveLift } from '../steps/lift-steps.js';
 import { defineKind } from './kind.js';
-
-/**
- * Default drag coefficient of a sounding balloon. A smooth sphere below the drag crisis has
- * about 0.47; balloons fly near the crisis, where it falls. 0.35 reproduces U.S. radiosonde
- * practice: about 1.13 m³ of helium, a 100 g balloon and 700 g free lift give 900–1000 ft/min
- * (U.S. Navy Aerographer's Mate training manual, NAVEDTRA 14270), see the flight-profile tests.
- */
-export const DEFAULT_BALLOON_DRAG_COEFFICIENT = 0.35;
-/** Default parachute drag coefficient on its canopy area: common practice, no published source. */
-export const DEFAULT_PARACHUTE_DRAG_COEFFICIENT = 1.0;
+import {
+  DEFAULT_BALLOON_DRAG_COEFFICIENT,
+  DEFAULT_PARACHUTE_DRAG_COEFFICIENT,
+} from '../flight/drag-defaults.js';
 
 /** Rows kept in a profile series; longer integrations are thinned evenly (end points kept). */
 const MAX_SERIES_ROWS = 600;
