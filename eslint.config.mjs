@@ -69,7 +69,7 @@ export default tseslint.config(
   },
   {
     // Benchmarks and developer scripts report on the console by design.
-    files: ['**/bench/**', 'scripts/**'],
+    files: ['**/bench/**', '**/scripts/**'],
     rules: { 'no-console': 'off' },
   },
   prettier,

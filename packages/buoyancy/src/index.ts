@@ -76,4 +76,7 @@ export { cylinderDeliverableMol, virialCompressibility } from './supply/cylinder
 export { fitLiftRetention } from './measurement/lift-retention.js';
 export type { LiftReading, RetentionFit } from './measurement/lift-retention.js';
 export { kindsMarkdown } from './kinds/kinds-markdown.js';
-export { DEFAULT_BALLOON_DRAG_COEFFICIENT, DEFAULT_PARACHUTE_DRAG_COEFFICIENT } from './flight/drag-defaults.js';
+export {
+  DEFAULT_BALLOON_DRAG_COEFFICIENT,
+  DEFAULT_PARACHUTE_DRAG_COEFFICIENT,
+} from './flight/drag-defaults.js';

@@ -28,7 +28,6 @@ import { DEFAULT_BALLOON_DRAG_COEFFICIENT } from '../flight/drag-defaults.js';
 import { defineKind } from './kind.js';
 import { warnAboutLift } from './lift-check.kind.js';
 
-
 const shapeFamilySchema = z
   .discriminatedUnion('shape', [
     z.object({ shape: z.literal('sphere') }).strict(),

@@ -11,10 +11,12 @@ interface FieldRow {
   readonly description: string;
 }
 
-const asSchema = (value: unknown): Schema => (value && typeof value === 'object' ? (value as Schema) : {});
+const asSchema = (value: unknown): Schema =>
+  value && typeof value === 'object' ? (value as Schema) : {};
 
 function typeOf(schema: Schema): string {
-  if (Array.isArray(schema.enum)) return schema.enum.map((value) => `\`${String(value)}\``).join(', ');
+  if (Array.isArray(schema.enum))
+    return schema.enum.map((value) => `\`${String(value)}\``).join(', ');
   if (schema.const !== undefined) return `\`${String(schema.const)}\``;
   if (schema.type === 'array') return `list of ${typeOf(asSchema(schema.items))}`;
   return typeof schema.type === 'string' ? schema.type : 'value';
@@ -23,7 +25,8 @@ function typeOf(schema: Schema): string {
 function discriminatorOf(variant: Schema): string | undefined {
   const properties = asSchema(variant.properties);
   for (const [key, property] of Object.entries(properties)) {
-    if (asSchema(property).const !== undefined) return `${key}: ${String(asSchema(property).const)}`;
+    if (asSchema(property).const !== undefined)
+      return `${key}: ${String(asSchema(property).const)}`;
   }
   return undefined;
 }
@@ -56,7 +59,12 @@ function collect(schema: Schema, path: string, required: boolean, rows: FieldRow
     type: typeOf(schema),
     unit: typeof schema.unit === 'string' ? schema.unit : '',
     range: hasRange ? `${String(schema.minimum ?? '−∞')} … ${String(schema.maximum ?? '∞')}` : '',
-    fallback: schema.default !== undefined ? `\`${JSON.stringify(schema.default)}\`` : required ? 'required' : 'optional',
+    fallback:
+      schema.default !== undefined
+        ? `\`${JSON.stringify(schema.default)}\``
+        : required
+          ? 'required'
+          : 'optional',
     description: typeof schema.description === 'string' ? schema.description : '',
   });
 }
@@ -80,9 +88,14 @@ export function kindsMarkdown(): string {
     const rows: FieldRow[] = [];
     collect(kind.inputSchema, '', true, rows);
     lines.push(`## ${kind.title} (\`${kind.id}\`)`, '', kind.description, '');
-    lines.push('| field | type | unit | range | default | meaning |', '| --- | --- | --- | --- | --- | --- |');
+    lines.push(
+      '| field | type | unit | range | default | meaning |',
+      '| --- | --- | --- | --- | --- | --- |',
+    );
     for (const row of rows) {
-      lines.push(`| \`${row.path}\` | ${row.type} | ${row.unit} | ${row.range} | ${row.fallback} | ${row.description} |`);
+      lines.push(
+        `| \`${row.path}\` | ${row.type} | ${row.unit} | ${row.range} | ${row.fallback} | ${row.description} |`,
+      );
     }
     lines.push('', 'Example:', '', '```json', JSON.stringify(kind.example, null, 2), '```', '');
   }
