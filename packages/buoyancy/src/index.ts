@@ -35,7 +35,7 @@ export type { KindDescription, KindId } from './kinds/registry.js';
 export type { LiftCheckInput } from './kinds/lift-check.kind.js';
 export { GAS_CATALOGUE, GAS_IDS } from './gas/gas-catalogue.js';
 export type { GasHazard, GasId, LiftingGas } from './gas/gas-catalogue.js';
-export { liftingGasDensity, idealGasDensityKgM3 } from './gas/lifting-gas-density.js';
+export { gasDensity, idealGasDensityKgM3 } from './gas/lifting-gas-density.js';
 export type { GasDensityInput, GasState } from './gas/lifting-gas-density.js';
 export {
   moistAirDensity,

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { NORMAL_PRESSURE_PA, NORMAL_TEMPERATURE_K } from '../constants.js';
 import { InputError } from '../errors.js';
 import { GAS_CATALOGUE, GAS_IDS } from './gas-catalogue.js';
-import { liftingGasDensity } from './lifting-gas-density.js';
+import { gasDensity } from './lifting-gas-density.js';
 
 // mathjs (CODATA 2018): molar volume of an ideal gas at 273.15 K and 101.325 kPa.
 if (!molarVolumeDependencies) throw new Error('this mathjs build has no molarVolume');
@@ -11,10 +11,10 @@ const { molarVolume } = create({ molarVolumeDependencies });
 const MOLAR_VOLUME_M3_PER_MOL = molarVolume.toNumber('m^3/mol');
 
 const atNormalConditions = (gasId: (typeof GAS_IDS)[number]) =>
-  liftingGasDensity({ gasId, temperatureK: NORMAL_TEMPERATURE_K, pressurePa: NORMAL_PRESSURE_PA })
+  gasDensity({ gasId, temperatureK: NORMAL_TEMPERATURE_K, pressurePa: NORMAL_PRESSURE_PA })
     .densityKgM3;
 
-describe('liftingGasDensity', () => {
+describe('gasDensity', () => {
   it('equals molar mass over the CODATA molar volume (mathjs) for every pure gas at 0 °C, 1 atm', () => {
     for (const gasId of GAS_IDS) {
       const expected = GAS_CATALOGUE[gasId].molarMassKgPerMol / MOLAR_VOLUME_M3_PER_MOL;
@@ -47,14 +47,14 @@ describe('liftingGasDensity', () => {
   });
 
   it('mixes in air for impure gas and water vapour for a saturated gas', () => {
-    const pure = liftingGasDensity({ gasId: 'hydrogen', temperatureK: 293.15, pressurePa: 101325 });
-    const impure = liftingGasDensity({
+    const pure = gasDensity({ gasId: 'hydrogen', temperatureK: 293.15, pressurePa: 101325 });
+    const impure = gasDensity({
       gasId: 'hydrogen',
       temperatureK: 293.15,
       pressurePa: 101325,
       purity: 0.95,
     });
-    const wet = liftingGasDensity({
+    const wet = gasDensity({
       gasId: 'hydrogen',
       temperatureK: 293.15,
       pressurePa: 101325,
@@ -70,10 +70,10 @@ describe('liftingGasDensity', () => {
 
   it('refuses a purity below 0.5 and a saturated gas hot enough to boil', () => {
     expect(() =>
-      liftingGasDensity({ gasId: 'helium', temperatureK: 293.15, pressurePa: 101325, purity: 0.3 }),
+      gasDensity({ gasId: 'helium', temperatureK: 293.15, pressurePa: 101325, purity: 0.3 }),
     ).toThrow(InputError);
     expect(() =>
-      liftingGasDensity({
+      gasDensity({
         gasId: 'helium',
         temperatureK: 373.15,
         pressurePa: 50000,

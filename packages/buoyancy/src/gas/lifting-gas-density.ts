@@ -39,7 +39,7 @@ export interface GasState {
  * The ideal-gas law overstates H₂ and He density by about 6e-4 at 1 atm (Z ≈ 1.0005–1.0006);
  * see docs/physics.md.
  */
-export function liftingGasDensity(input: GasDensityInput): GasState {
+export function gasDensity(input: GasDensityInput): GasState {
   const gas = GAS_CATALOGUE[input.gasId];
   const temperatureK = requireInRange(
     'temperatureK',

@@ -453,7 +453,7 @@ export const flightProfileKind = defineKind({
           formula: 't_flight = t + t_d',
           values: [v('t', ascent.endTimeS, 's'), v('t_d', descent.durationS, 's')],
           result: v('t_flight', ascent.endTimeS + descent.durationS, 's'),
-          source: 'sum',
+          source: 'ascent time plus descent time',
         });
         d.output('landingDescentRate', 'Descent rate at landing', 'landing-descent-rate');
         d.output('descentTime', 'Descent time', 'descent-time');

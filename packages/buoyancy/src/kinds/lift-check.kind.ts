@@ -23,6 +23,9 @@ export const liftCheckSchema = z
 
 export type LiftCheckInput = z.input<typeof liftCheckSchema>;
 
+/** Superpressure above which the lift check notes the ideal-gas error (one atmosphere) [Pa]. */
+const IDEAL_GAS_NOTE_SUPERPRESSURE_PA = 101325;
+
 /** Warnings about a lift result that every lift-based kind shares. */
 export function warnAboutLift(d: Derivation, lift: LiftMasses, gasName: string): void {
   if (lift.grossLiftKg <= 0) {
@@ -93,6 +96,15 @@ export const liftCheckKind = defineKind({
     d.output('freeLiftForce', 'Free lift force', 'free-lift-force');
     d.output('liftPerLitre', 'Gross lift per litre', 'lift-per-litre', context);
     warnAboutLift(d, lift, GAS_CATALOGUE[inputs.gas.gasId].name);
+    if (inputs.gas.superpressurePa > IDEAL_GAS_NOTE_SUPERPRESSURE_PA) {
+      d.warn({
+        code: 'ideal-gas-at-pressure',
+        severity: 'note',
+        message:
+          'The gas is held well above ambient pressure: its ideal-gas density is off by about 0.05 % per atmosphere of superpressure (compressibility of H₂ and He).',
+        field: 'gas.superpressurePa',
+      });
+    }
     return d.result();
   },
 });

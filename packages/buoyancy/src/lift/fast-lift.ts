@@ -1,6 +1,6 @@
 import { moistAirDensity } from '../atmosphere/moist-air-density.js';
 import { sphereGeometry } from '../envelope/envelope-geometry.js';
-import { liftingGasDensity, type GasDensityInput } from '../gas/lifting-gas-density.js';
+import { gasDensity, type GasDensityInput } from '../gas/lifting-gas-density.js';
 import { liftMasses, type LiftMasses } from '../steps/lift-steps.js';
 
 /** Everything a lift check needs, already in SI numbers: for charts, sweeps and hot loops. */
@@ -25,7 +25,7 @@ export function fastLift(input: FastLiftInput): LiftMasses {
     pressurePa: input.airPressurePa,
     vapourMoleFraction: input.airVapourMoleFraction,
   });
-  const gas = liftingGasDensity(input.gas);
+  const gas = gasDensity(input.gas);
   return liftMasses(
     input.volumeM3,
     air.densityKgM3,
@@ -57,7 +57,7 @@ export function sweepSphereDiameter(
     pressurePa: base.airPressurePa,
     vapourMoleFraction: base.airVapourMoleFraction,
   });
-  const gas = liftingGasDensity(base.gas);
+  const gas = gasDensity(base.gas);
   const sweep: DiameterSweepPoint[] = new Array(points);
   for (let index = 0; index < points; index += 1) {
     const diameterM =

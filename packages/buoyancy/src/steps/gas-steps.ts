@@ -7,7 +7,7 @@ import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
 import { type Derivation, v } from '../derivation.js';
 import { InputError } from '../errors.js';
 import { GAS_CATALOGUE } from '../gas/gas-catalogue.js';
-import { GAS_TEMPERATURE_RANGE_K, liftingGasDensity } from '../gas/lifting-gas-density.js';
+import { GAS_TEMPERATURE_RANGE_K, gasDensity } from '../gas/lifting-gas-density.js';
 import type { GasInput } from '../schema/gas-schema.js';
 import { SOURCES } from '../sources.js';
 import type { AmbientState } from './ambient-steps.js';
@@ -60,7 +60,7 @@ export function deriveGas(
     result: v('p_gas', ambient.pressurePa + gasInput.superpressurePa, 'Pa'),
     source: SOURCES.given,
   });
-  const state = liftingGasDensity({
+  const state = gasDensity({
     gasId: gas.id,
     temperatureK,
     pressurePa,
