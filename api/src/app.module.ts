@@ -1,9 +1,18 @@
 import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditModule } from './audit/audit.module';
+import { AuthModule } from './auth/auth.module';
+import { CalculationsModule } from './calculations/calculations.module';
 import { EnvironmentVariables, validateEnvironment } from './config/env.validation';
+import { DatabaseModule } from './database/database.module';
 import { buildDataSourceOptions } from './database/database.options';
+import { EvaluateModule } from './evaluate/evaluate.module';
 import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { ReviewsModule } from './reviews/reviews.module';
+import { SeedModule } from './seed/seed.module';
+import { UsersModule } from './users/users.module';
 
 @Module({
   imports: [
@@ -13,7 +22,16 @@ import { HealthModule } from './health/health.module';
       useFactory: (config: ConfigService<EnvironmentVariables, true>) =>
         buildDataSourceOptions(config.get('DATA_DIR', { infer: true })),
     }),
+    DatabaseModule,
+    AuditModule,
+    MailModule,
+    UsersModule,
+    AuthModule,
+    CalculationsModule,
+    ReviewsModule,
+    EvaluateModule,
     HealthModule,
+    SeedModule,
   ],
 })
 export class AppModule {}

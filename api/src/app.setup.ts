@@ -1,9 +1,12 @@
-import { ValidationPipe } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import helmet from 'helmet';
 import { API_PREFIX } from './app.constants';
+import { API_VERSION } from './config/app-info';
 import type { EnvironmentVariables } from './config/env.validation';
+import { ApiExceptionFilter } from './common/filters/api-exception.filter';
+import { createValidationPipe } from './common/pipes/api-validation.pipe';
 import { DEFAULT_WEB_DIST_DIR, serveWebApp } from './web/serve-web-app';
 
 /**
@@ -28,10 +31,30 @@ export function configureApp(app: NestExpressApplication): void {
       },
     }),
   );
+  // Calculation inputs are small; anything bigger is a mistake or an attack.
+  app.useBodyParser('json', { limit: '256kb' });
+  const corsOrigins = config.get('CORS_ORIGINS', { infer: true });
+  if (corsOrigins) {
+    app.enableCors({
+      origin: corsOrigins.split(',').map((origin) => origin.trim()),
+      credentials: false,
+    });
+  }
   app.setGlobalPrefix(API_PREFIX);
-  app.useGlobalPipes(
-    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true }),
-  );
+  app.useGlobalPipes(createValidationPipe());
+  app.useGlobalFilters(new ApiExceptionFilter());
   app.enableShutdownHooks();
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Loftwright API')
+      .setDescription('Lift and buoyancy calculations, their versions, review and sign-off.')
+      .setVersion(API_VERSION)
+      .addBearerAuth()
+      .build(),
+  );
+  SwaggerModule.setup(`${API_PREFIX}/docs`, app, document, {
+    jsonDocumentUrl: `${API_PREFIX}/docs-json`,
+  });
   serveWebApp(app, config.get('WEB_DIST_DIR', { infer: true }) ?? DEFAULT_WEB_DIST_DIR);
 }

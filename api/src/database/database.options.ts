@@ -1,13 +1,30 @@
 import { mkdirSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { DataSourceOptions } from 'typeorm';
+import { AuditEntry } from '../audit/audit-entry.entity';
+import { PasswordResetToken } from '../auth/password-reset-token.entity';
+import { CalculationVersion } from '../calculations/calculation-version.entity';
+import { Calculation } from '../calculations/calculation.entity';
 import { Installation } from '../health/installation.entity';
+import { OutboxMessage } from '../mail/outbox-message.entity';
+import { Review } from '../reviews/review.entity';
+import { User } from '../users/user.entity';
 import { InitSchema1764633600000 } from './migrations/1764633600000-init-schema';
+import { AccountsCalculationsReviews1764640800000 } from './migrations/1764640800000-accounts-calculations-reviews';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
-export const ENTITIES = [Installation];
-export const MIGRATIONS = [InitSchema1764633600000];
+export const ENTITIES = [
+  Installation,
+  User,
+  PasswordResetToken,
+  Calculation,
+  CalculationVersion,
+  Review,
+  AuditEntry,
+  OutboxMessage,
+];
+export const MIGRATIONS = [InitSchema1764633600000, AccountsCalculationsReviews1764640800000];
 
 /**
  * TypeORM options for the SQLite file under `dataDir`. Schema changes come only from migrations,
@@ -25,9 +42,13 @@ export function buildDataSourceOptions(dataDir: string): DataSourceOptions {
     migrationsRun: true,
     synchronize: false,
     // WAL keeps readers going while a save commits; foreign keys are off by default in SQLite.
+    // synchronous = FULL syncs the WAL on every commit, so an acknowledged save survives a crash
+    // or power loss (NORMAL would survive a process crash only). See docs/architecture.md.
     prepareDatabase: (db: { pragma(source: string): unknown }) => {
       db.pragma('journal_mode = WAL');
+      db.pragma('synchronous = FULL');
       db.pragma('foreign_keys = ON');
+      db.pragma('busy_timeout = 5000');
     },
   };
 }

@@ -1,5 +1,6 @@
 import { Controller, Get, Res } from '@nestjs/common';
 import type { Response } from 'express';
+import { Public } from '../common/decorators/public.decorator';
 import { HealthReport, HealthService } from './health.service';
 
 @Controller('health')
@@ -7,6 +8,7 @@ export class HealthController {
   constructor(private readonly healthService: HealthService) {}
 
   /** 200 when the API and its database answer, 503 (same body shape) when they do not. */
+  @Public()
   @Get()
   async check(@Res({ passthrough: true }) response: Response): Promise<HealthReport> {
     const report = await this.healthService.check();

@@ -15,10 +15,18 @@ export interface TestApp {
  * temporary data directory (migrations run as on a first start). The module is imported after
  * the environment is set because ConfigModule validates the environment when it is imported.
  */
-export async function createTestApp(options: { webDistDir?: string } = {}): Promise<TestApp> {
+export async function createTestApp(
+  options: { webDistDir?: string; seedDemo?: boolean; env?: Record<string, string> } = {},
+): Promise<TestApp> {
   const dataDir = mkdtempSync(join(tmpdir(), 'loftwright-api-'));
   process.env.NODE_ENV = 'test';
   process.env.DATA_DIR = dataDir;
+  // Cheap hashes keep the suites fast; production refuses a cost below 12 (env.validation.ts).
+  process.env.BCRYPT_COST = '4';
+  process.env.SEED_DEMO = options.seedDemo ? '1' : '0';
+  process.env.LOGIN_RATE_LIMIT = '1000';
+  delete process.env.SMTP_URL;
+  for (const [key, value] of Object.entries(options.env ?? {})) process.env[key] = value;
   if (options.webDistDir) process.env.WEB_DIST_DIR = options.webDistDir;
   else delete process.env.WEB_DIST_DIR;
 

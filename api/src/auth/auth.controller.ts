@@ -1,0 +1,87 @@
+import {
+  Body,
+  Controller,
+  Get,
+  HttpCode,
+  HttpStatus,
+  Patch,
+  Post,
+  UseGuards,
+} from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ThrottlerGuard } from '@nestjs/throttler';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { Public } from '../common/decorators/public.decorator';
+import { type PublicUser, toPublicUser } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
+import { AuthService, type SignedIn } from './auth.service';
+import type { AuthUser } from './auth-user';
+import { LoginDto } from './dto/login.dto';
+import { PasswordResetConfirmDto, PasswordResetRequestDto } from './dto/password-reset.dto';
+import { RegisterDto } from './dto/register.dto';
+import { UpdatePreferencesDto } from './dto/update-preferences.dto';
+import { NotFoundException } from '@nestjs/common';
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(
+    private readonly authService: AuthService,
+    private readonly usersService: UsersService,
+  ) {}
+
+  @Public()
+  @Post('register')
+  register(@Body() body: RegisterDto): Promise<SignedIn> {
+    return this.authService.register(body);
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('login')
+  @HttpCode(HttpStatus.OK)
+  login(@Body() body: LoginDto): Promise<SignedIn> {
+    return this.authService.login(body);
+  }
+
+  @ApiBearerAuth()
+  @Post('logout')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  logout(@CurrentUser() user: AuthUser): Promise<void> {
+    return this.authService.logout(user.id);
+  }
+
+  @ApiBearerAuth()
+  @Get('me')
+  async me(@CurrentUser() user: AuthUser): Promise<PublicUser> {
+    const found = await this.usersService.findById(user.id);
+    if (!found) throw new NotFoundException({ message: 'No such user.' });
+    return toPublicUser(found);
+  }
+
+  @ApiBearerAuth()
+  @Patch('me/preferences')
+  async updatePreferences(
+    @CurrentUser() user: AuthUser,
+    @Body() body: UpdatePreferencesDto,
+  ): Promise<PublicUser> {
+    await this.usersService.setUnitSystem(user.id, body.unitSystem);
+    return this.me(user);
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('password-reset/request')
+  @HttpCode(HttpStatus.ACCEPTED)
+  async requestReset(@Body() body: PasswordResetRequestDto): Promise<{ message: string }> {
+    await this.authService.requestPasswordReset(body.email);
+    return { message: 'If this address has an account, a reset link is on its way.' };
+  }
+
+  @Public()
+  @Post('password-reset/confirm')
+  @HttpCode(HttpStatus.NO_CONTENT)
+  confirmReset(@Body() body: PasswordResetConfirmDto): Promise<void> {
+    return this.authService.confirmPasswordReset(body.token, body.password);
+  }
+}

@@ -1,0 +1,60 @@
+import { Module } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { APP_GUARD } from '@nestjs/core';
+import { JwtModule } from '@nestjs/jwt';
+import { PassportModule } from '@nestjs/passport';
+import { ThrottlerModule } from '@nestjs/throttler';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import type { EnvironmentVariables } from '../config/env.validation';
+import { resolveJwtSecret } from '../config/jwt-secret';
+import { MailModule } from '../mail/mail.module';
+import { UsersModule } from '../users/users.module';
+import { JWT_SECRET } from './auth.constants';
+import { AuthController } from './auth.controller';
+import { AuthService } from './auth.service';
+import { JwtAuthGuard } from './guards/jwt-auth.guard';
+import { RolesGuard } from './guards/roles.guard';
+import { PasswordResetToken } from './password-reset-token.entity';
+import { JwtStrategy } from './strategies/jwt.strategy';
+
+const jwtSecretProvider = {
+  provide: JWT_SECRET,
+  inject: [ConfigService],
+  useFactory: (config: ConfigService<EnvironmentVariables, true>) =>
+    resolveJwtSecret(
+      config.get('JWT_SECRET', { infer: true }),
+      config.get('DATA_DIR', { infer: true }),
+    ),
+};
+
+@Module({
+  imports: [
+    UsersModule,
+    MailModule,
+    PassportModule,
+    TypeOrmModule.forFeature([PasswordResetToken]),
+    ThrottlerModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<EnvironmentVariables, true>) => [
+        { name: 'sign-in', ttl: 60_000, limit: config.get('LOGIN_RATE_LIMIT', { infer: true }) },
+      ],
+    }),
+    JwtModule.registerAsync({
+      inject: [ConfigService, JWT_SECRET],
+      extraProviders: [jwtSecretProvider],
+      useFactory: (config: ConfigService<EnvironmentVariables, true>, secret: string) => ({
+        secret,
+        signOptions: { expiresIn: config.get('JWT_TTL_S', { infer: true }), algorithm: 'HS256' },
+      }),
+    }),
+  ],
+  controllers: [AuthController],
+  providers: [
+    AuthService,
+    JwtStrategy,
+    jwtSecretProvider,
+    { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: RolesGuard },
+  ],
+})
+export class AuthModule {}

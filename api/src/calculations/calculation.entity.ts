@@ -1,0 +1,46 @@
+import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+
+export const VISIBILITIES = ['private', 'team', 'published'] as const;
+export type Visibility = (typeof VISIBILITIES)[number];
+
+@Entity('calculation')
+export class Calculation {
+  @PrimaryColumn('varchar', { length: 36 })
+  id: string;
+
+  @Column('varchar')
+  title: string;
+
+  @Column('varchar')
+  kind: string;
+
+  @Column('varchar', { name: 'owner_id', length: 36 })
+  ownerId: string;
+
+  @Column('varchar', { default: 'private' })
+  visibility: Visibility;
+
+  @Column('simple-json')
+  tags: string[];
+
+  /** Number of the newest version; a save must name it as its base. */
+  @Column('integer', { name: 'latest_version' })
+  latestVersion: number;
+
+  /** Status of the newest version, kept here so lists can filter and sort on it. */
+  @Column('varchar', { name: 'latest_status' })
+  latestStatus: string;
+
+  /** Set once any version has been submitted: reviewers may then read it. */
+  @Column('boolean', { name: 'ever_submitted', default: false })
+  everSubmitted: boolean;
+
+  @Column('datetime', { name: 'archived_at', nullable: true })
+  archivedAt: Date | null;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  updatedAt: Date;
+}

@@ -1,0 +1,15 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { User } from '../users/user.entity';
+import { CalculationVersion } from './calculation-version.entity';
+import { Calculation } from './calculation.entity';
+import { CalculationsController } from './calculations.controller';
+import { CalculationsService } from './calculations.service';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([Calculation, CalculationVersion, User])],
+  controllers: [CalculationsController],
+  providers: [CalculationsService],
+  exports: [CalculationsService],
+})
+export class CalculationsModule {}

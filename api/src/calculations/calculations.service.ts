@@ -1,0 +1,318 @@
+import {
+  ConflictException,
+  ForbiddenException,
+  Injectable,
+  NotFoundException,
+} from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { DataSource, In, Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
+import { type AuthUser, hasRole } from '../auth/auth-user';
+import { insertRow } from '../database/insert-row';
+import { WriteLock } from '../database/write-lock';
+import { AUTHOR_ROLES, TEAM_ROLES } from '../users/roles';
+import { User } from '../users/user.entity';
+import { canArchive, canEdit, canRead } from './calculation-access';
+import { CalculationVersion } from './calculation-version.entity';
+import {
+  calculationSummary,
+  type NameLookup,
+  versionDetail,
+  versionSummary,
+} from './calculation-views';
+import { Calculation } from './calculation.entity';
+import type { CreateCalculationDto } from './dto/create-calculation.dto';
+import type { ListCalculationsDto } from './dto/list-calculations.dto';
+import type { SaveVersionDto } from './dto/save-version.dto';
+import type { UpdateCalculationDto } from './dto/update-calculation.dto';
+import { computeVersionContent } from './version-content';
+import { diffInputs, diffOutputs } from './version-diff';
+
+const SORT_COLUMNS: Record<string, string> = {
+  updatedAt: 'calculation.updated_at',
+  createdAt: 'calculation.created_at',
+  title: 'calculation.title',
+  kind: 'calculation.kind',
+  status: 'calculation.latest_status',
+};
+
+@Injectable()
+export class CalculationsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    @InjectRepository(Calculation) private readonly calculations: Repository<Calculation>,
+    @InjectRepository(CalculationVersion) private readonly versions: Repository<CalculationVersion>,
+    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly audit: AuditService,
+    private readonly writeLock: WriteLock,
+  ) {}
+
+  /** Display names for a set of user ids, as a lookup function for the views. */
+  async names(ids: readonly (string | null)[]): Promise<NameLookup> {
+    const wanted = [...new Set(ids.filter((id): id is string => id !== null))];
+    const found = wanted.length ? await this.users.findBy({ id: In(wanted) }) : [];
+    const byId = new Map(
+      found.map((user) => [user.id, { id: user.id, displayName: user.displayName }]),
+    );
+    return (id) => (id ? (byId.get(id) ?? { id, displayName: 'unknown user' }) : null);
+  }
+
+  /** The calculation if the user may see it; otherwise 404, so its existence does not leak. */
+  async findReadable(user: AuthUser, id: string): Promise<Calculation> {
+    const calculation = await this.calculations.findOneBy({ id });
+    if (!calculation || !canRead(user, calculation)) {
+      throw new NotFoundException({ message: 'No such calculation.', field: 'id' });
+    }
+    return calculation;
+  }
+
+  async findVersion(calculationId: string, number: number): Promise<CalculationVersion> {
+    const version = await this.versions.findOneBy({ calculationId, number });
+    if (!version)
+      throw new NotFoundException({ message: `Version ${number} does not exist.`, field: 'n' });
+    return version;
+  }
+
+  async create(user: AuthUser, dto: CreateCalculationDto) {
+    if (!hasRole(user, ...AUTHOR_ROLES)) {
+      throw new ForbiddenException({
+        message: 'Creating calculations needs the designer or teacher role.',
+      });
+    }
+    const content = computeVersionContent(dto.kind, dto.inputs);
+    const calculationId = randomUUID();
+    await this.writeLock.run(() =>
+      this.dataSource.transaction(async (manager) => {
+        await manager.getRepository(Calculation).insert({
+          id: calculationId,
+          title: dto.title.trim(),
+          kind: dto.kind,
+          ownerId: user.id,
+          visibility: dto.visibility ?? 'private',
+          tags: [...new Set(dto.tags ?? [])],
+          latestVersion: 1,
+          latestStatus: 'draft',
+          everSubmitted: false,
+          archivedAt: null,
+        });
+        await insertRow(manager.getRepository(CalculationVersion), {
+          id: randomUUID(),
+          calculationId,
+          number: 1,
+          ...content,
+          authorId: user.id,
+          note: dto.note ?? '',
+          status: 'draft',
+          reviewerId: null,
+          submittedAt: null,
+        });
+        await this.audit.record(
+          {
+            actorId: user.id,
+            action: 'calculation.create',
+            targetType: 'calculation',
+            targetId: calculationId,
+            detail: { kind: dto.kind },
+          },
+          manager,
+        );
+      }),
+    );
+    return this.detail(user, calculationId);
+  }
+
+  async list(user: AuthUser, query: ListCalculationsDto) {
+    const builder = this.calculations.createQueryBuilder('calculation');
+    if (!hasRole(user, 'admin')) {
+      builder.andWhere('calculation.archived_at IS NULL');
+      const visible = ['calculation.owner_id = :me', `calculation.visibility = 'published'`];
+      if (hasRole(user, ...TEAM_ROLES)) visible.push(`calculation.visibility = 'team'`);
+      if (hasRole(user, 'reviewer')) visible.push('calculation.ever_submitted = 1');
+      builder.andWhere(`(${visible.join(' OR ')})`, { me: user.id });
+    }
+    if (query.kind) builder.andWhere('calculation.kind = :kind', { kind: query.kind });
+    if (query.status)
+      builder.andWhere('calculation.latest_status = :status', { status: query.status });
+    if (query.owner)
+      builder.andWhere('calculation.owner_id = :owner', {
+        owner: query.owner === 'me' ? user.id : query.owner,
+      });
+    if (query.tag) {
+      builder.andWhere(
+        'EXISTS (SELECT 1 FROM json_each(calculation.tags) WHERE json_each.value = :tag)',
+        { tag: query.tag },
+      );
+    }
+    if (query.q) {
+      const words = query.q.trim().split(/\s+/).filter(Boolean).slice(0, 8);
+      words.forEach((word, index) => {
+        builder.andWhere(
+          `(calculation.title LIKE :q${index} ESCAPE '\\' OR calculation.tags LIKE :q${index} ESCAPE '\\')`,
+          {
+            [`q${index}`]: `%${word.replace(/[\\%_]/g, (c) => `\\${c}`)}%`,
+          },
+        );
+      });
+    }
+    const descending = query.sort.startsWith('-');
+    const column = SORT_COLUMNS[query.sort.replace(/^-/, '')] ?? 'calculation.updated_at';
+    builder.orderBy(column, descending ? 'DESC' : 'ASC').addOrderBy('calculation.id', 'ASC');
+    const [items, total] = await builder
+      .skip((query.page - 1) * query.pageSize)
+      .take(query.pageSize)
+      .getManyAndCount();
+    const names = await this.names(items.map((item) => item.ownerId));
+    return {
+      items: items.map((item) => calculationSummary(item, names)),
+      total,
+      page: query.page,
+      pageSize: query.pageSize,
+    };
+  }
+
+  async detail(user: AuthUser, id: string) {
+    const calculation = await this.findReadable(user, id);
+    const versions = await this.versions.find({
+      where: { calculationId: id },
+      order: { number: 'ASC' },
+    });
+    const latest = versions.at(-1);
+    const names = await this.names([
+      calculation.ownerId,
+      ...versions.flatMap((v) => [v.authorId, v.reviewerId]),
+    ]);
+    return {
+      ...calculationSummary(calculation, names),
+      versions: versions.map((version) => versionSummary(version, names)),
+      latest: latest ? versionDetail(latest, names) : null,
+      permissions: { edit: canEdit(user, calculation), archive: canArchive(user, calculation) },
+    };
+  }
+
+  async version(user: AuthUser, id: string, number: number) {
+    await this.findReadable(user, id);
+    const version = await this.findVersion(id, number);
+    const names = await this.names([version.authorId, version.reviewerId]);
+    return versionDetail(version, names);
+  }
+
+  async saveVersion(user: AuthUser, id: string, dto: SaveVersionDto) {
+    const calculation = await this.findReadable(user, id);
+    if (!canEdit(user, calculation)) {
+      throw new ForbiddenException({
+        message: 'Only the owner of a calculation saves new versions of it.',
+      });
+    }
+    const content = computeVersionContent(calculation.kind, dto.inputs);
+    const number = dto.baseVersion + 1;
+    const conflict = await this.writeLock.run(() =>
+      this.dataSource.transaction(async (manager) => {
+        const current = await manager.getRepository(Calculation).findOneByOrFail({ id });
+        if (current.latestVersion !== dto.baseVersion) return current.latestVersion;
+        await insertRow(manager.getRepository(CalculationVersion), {
+          id: randomUUID(),
+          calculationId: id,
+          number,
+          ...content,
+          authorId: user.id,
+          note: dto.note ?? '',
+          status: 'draft',
+          reviewerId: null,
+          submittedAt: null,
+        });
+        await manager
+          .getRepository(Calculation)
+          .update({ id }, { latestVersion: number, latestStatus: 'draft' });
+        await this.audit.record(
+          {
+            actorId: user.id,
+            action: 'calculation.save',
+            targetType: 'calculation',
+            targetId: id,
+            detail: { version: number },
+          },
+          manager,
+        );
+        return null;
+      }),
+    );
+    if (conflict !== null) {
+      const latest = await this.version(user, id, conflict);
+      // Nothing is lost: the answer carries the version that landed first and the text sent.
+      throw new ConflictException({
+        message: `Version ${conflict} was saved while you were editing version ${dto.baseVersion}. Keep yours as a new version based on ${conflict}, or take version ${conflict}.`,
+        field: 'baseVersion',
+        latest,
+        yours: { baseVersion: dto.baseVersion, inputs: dto.inputs, note: dto.note ?? '' },
+      });
+    }
+    return this.version(user, id, number);
+  }
+
+  async update(user: AuthUser, id: string, dto: UpdateCalculationDto) {
+    const calculation = await this.findReadable(user, id);
+    if (!canEdit(user, calculation)) {
+      throw new ForbiddenException({
+        message: 'Only the owner of a calculation changes its details.',
+      });
+    }
+    const changes: Partial<Calculation> = {};
+    if (dto.title !== undefined) changes.title = dto.title.trim();
+    if (dto.visibility !== undefined) changes.visibility = dto.visibility;
+    if (dto.tags !== undefined) changes.tags = [...new Set(dto.tags)];
+    await this.writeLock.run(() =>
+      this.dataSource.transaction(async (manager) => {
+        await manager.getRepository(Calculation).update({ id }, changes);
+        await this.audit.record(
+          {
+            actorId: user.id,
+            action: 'calculation.update',
+            targetType: 'calculation',
+            targetId: id,
+            detail: { ...dto },
+          },
+          manager,
+        );
+      }),
+    );
+    return this.detail(user, id);
+  }
+
+  async archive(user: AuthUser, id: string): Promise<void> {
+    const calculation = await this.findReadable(user, id);
+    if (!canArchive(user, calculation)) {
+      throw new ForbiddenException({
+        message: 'Only the owner or an admin archives a calculation.',
+      });
+    }
+    if (calculation.archivedAt) return;
+    await this.writeLock.run(() =>
+      this.dataSource.transaction(async (manager) => {
+        await manager.getRepository(Calculation).update({ id }, { archivedAt: new Date() });
+        await this.audit.record(
+          {
+            actorId: user.id,
+            action: 'calculation.archive',
+            targetType: 'calculation',
+            targetId: id,
+          },
+          manager,
+        );
+      }),
+    );
+  }
+
+  async diff(user: AuthUser, id: string, a: number, b: number) {
+    await this.findReadable(user, id);
+    const [left, right] = await Promise.all([this.findVersion(id, a), this.findVersion(id, b)]);
+    type Outputs = Parameters<typeof diffOutputs>[0];
+    return {
+      from: a,
+      to: b,
+      inputs: diffInputs(left.inputs, right.inputs),
+      outputs: diffOutputs(left.outputs as Outputs, right.outputs as Outputs),
+      engineVersion: { from: left.engineVersion, to: right.engineVersion },
+    };
+  }
+}

@@ -1,0 +1,11 @@
+import { createParamDecorator, type ExecutionContext } from '@nestjs/common';
+import type { Request } from 'express';
+import type { AuthUser } from '../../auth/auth-user';
+
+/** The signed-in user of the request, as the JWT strategy loaded it. */
+export const CurrentUser = createParamDecorator(
+  (_data: unknown, context: ExecutionContext): AuthUser => {
+    const request = context.switchToHttp().getRequest<Request & { user: AuthUser }>();
+    return request.user;
+  },
+);

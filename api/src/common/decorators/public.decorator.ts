@@ -1,0 +1,6 @@
+import { SetMetadata } from '@nestjs/common';
+
+export const IS_PUBLIC_KEY = 'isPublic';
+
+/** Marks a route that answers without a signed-in user. */
+export const Public = () => SetMetadata(IS_PUBLIC_KEY, true);

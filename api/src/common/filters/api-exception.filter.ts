@@ -1,0 +1,90 @@
+import {
+  type ArgumentsHost,
+  Catch,
+  type ExceptionFilter,
+  HttpException,
+  HttpStatus,
+  Logger,
+} from '@nestjs/common';
+import { InputError } from '@loftwright/buoyancy';
+import type { Response } from 'express';
+
+/** Every error body the API sends: status, a message a person can read, and the field at fault. */
+export interface ApiErrorBody {
+  statusCode: number;
+  error: string;
+  message: string;
+  field?: string;
+  issues?: { field: string; reason: string; value?: unknown; range?: unknown }[];
+  [key: string]: unknown;
+}
+
+/**
+ * Shapes every error the same way. Engine input errors become 422 with their field and range;
+ * anything unexpected becomes a 500 with no stack trace or internals (they go to the log).
+ */
+@Catch()
+export class ApiExceptionFilter implements ExceptionFilter {
+  private readonly logger = new Logger('ApiExceptionFilter');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const response = host.switchToHttp().getResponse<Response>();
+    const body = this.toBody(exception);
+    if (body.statusCode >= 500) {
+      this.logger.error(
+        exception instanceof Error ? (exception.stack ?? exception.message) : String(exception),
+      );
+    }
+    response.status(body.statusCode).json(body);
+  }
+
+  private toBody(exception: unknown): ApiErrorBody {
+    if (exception instanceof InputError) {
+      return {
+        statusCode: HttpStatus.UNPROCESSABLE_ENTITY,
+        error: 'Unprocessable Entity',
+        message: exception.message,
+        field: exception.field,
+        issues: exception.issues.map((issue) => ({
+          field: issue.field,
+          reason: issue.reason,
+          value: issue.value,
+          ...(issue.range ? { range: issue.range } : {}),
+        })),
+      };
+    }
+    if (exception instanceof HttpException) {
+      const status = exception.getStatus();
+      const raw = exception.getResponse();
+      if (typeof raw === 'object' && raw !== null) {
+        const body = raw as Record<string, unknown>;
+        const message = Array.isArray(body.message)
+          ? body.message.join('; ')
+          : String(body.message ?? exception.message);
+        return {
+          ...body,
+          statusCode: status,
+          error: String(body.error ?? HttpStatus[status] ?? 'Error'),
+          message,
+        };
+      }
+      return { statusCode: status, error: HttpStatus[status] ?? 'Error', message: String(raw) };
+    }
+    // Errors raised by Express middleware (body parser: oversize or malformed bodies) carry a status.
+    const status = (exception as { status?: unknown; statusCode?: unknown })?.status;
+    if (typeof status === 'number' && status >= 400 && status < 500) {
+      const message =
+        status === 413
+          ? 'The request body is too large.'
+          : status === 400
+            ? 'The request body is not valid JSON.'
+            : 'Bad request.';
+      return { statusCode: status, error: HttpStatus[status] ?? 'Error', message };
+    }
+    return {
+      statusCode: 500,
+      error: 'Internal Server Error',
+      message: 'Something went wrong on the server; it has been logged.',
+    };
+  }
+}

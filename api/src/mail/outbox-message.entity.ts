@@ -1,0 +1,26 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+/** A message the local fake mail server received, kept so an admin can read it. */
+@Entity('outbox_message')
+export class OutboxMessage {
+  @PrimaryGeneratedColumn()
+  id: number;
+
+  @Column('varchar')
+  from: string;
+
+  @Column('simple-json')
+  to: string[];
+
+  @Column('varchar')
+  subject: string;
+
+  @Column('text')
+  text: string;
+
+  @Column('varchar', { name: 'message_id', nullable: true })
+  messageId: string | null;
+
+  @CreateDateColumn({ name: 'received_at', type: 'datetime' })
+  receivedAt: Date;
+}

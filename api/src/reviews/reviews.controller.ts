@@ -1,0 +1,64 @@
+import { Body, Controller, Get, HttpCode, HttpStatus, Param, Post } from '@nestjs/common';
+import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import type { AuthUser } from '../auth/auth-user';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { Roles } from '../common/decorators/roles.decorator';
+import { intParam } from '../common/pipes/int-param.pipe';
+import { uuidParam } from '../common/pipes/uuid-param.pipe';
+import { ApproveVersionDto, SendBackVersionDto, SubmitVersionDto } from './dto/review-decision.dto';
+import { ReviewsService } from './reviews.service';
+
+@ApiTags('reviews')
+@ApiBearerAuth()
+@Controller()
+export class ReviewsController {
+  constructor(private readonly reviewsService: ReviewsService) {}
+
+  @Post('calculations/:id/versions/:n/submit')
+  @HttpCode(HttpStatus.OK)
+  submit(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+    @Param('n', intParam('n')) n: number,
+    @Body() body: SubmitVersionDto,
+  ) {
+    return this.reviewsService.submit(user, id, n, body.reviewerId);
+  }
+
+  @Post('calculations/:id/versions/:n/approve')
+  @HttpCode(HttpStatus.OK)
+  approve(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+    @Param('n', intParam('n')) n: number,
+    @Body() body: ApproveVersionDto,
+  ) {
+    return this.reviewsService.approve(user, id, n, body.comment ?? '');
+  }
+
+  @Post('calculations/:id/versions/:n/send-back')
+  @HttpCode(HttpStatus.OK)
+  sendBack(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+    @Param('n', intParam('n')) n: number,
+    @Body() body: SendBackVersionDto,
+  ) {
+    return this.reviewsService.sendBack(user, id, n, body.comment);
+  }
+
+  @Get('calculations/:id/versions/:n/reviews')
+  reviews(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+    @Param('n', intParam('n')) n: number,
+  ) {
+    return this.reviewsService.versionWithReviews(user, id, n);
+  }
+
+  @Get('reviews/queue')
+  @Roles('reviewer')
+  queue(@CurrentUser() user: AuthUser) {
+    return this.reviewsService.queue(user);
+  }
+}

@@ -1,0 +1,88 @@
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { ENGINE_VERSION, evaluate, type OutputQuantity } from '@loftwright/buoyancy';
+import { Repository } from 'typeorm';
+import { CalculationVersion } from '../calculations/calculation-version.entity';
+import { Calculation } from '../calculations/calculation.entity';
+import { User } from '../users/user.entity';
+import { Review } from './review.entity';
+
+/** Relative difference under which a recomputed output counts as the same number. */
+const SAME_VALUE_RELATIVE = 1e-12;
+
+export interface OutputComparison {
+  name: string;
+  unit: string;
+  approved: number | null;
+  recomputed: number | null;
+}
+
+@Injectable()
+export class VerifyService {
+  constructor(
+    @InjectRepository(CalculationVersion) private readonly versions: Repository<CalculationVersion>,
+    @InjectRepository(Calculation) private readonly calculations: Repository<Calculation>,
+    @InjectRepository(Review) private readonly reviews: Repository<Review>,
+    @InjectRepository(User) private readonly users: Repository<User>,
+  ) {}
+
+  /**
+   * Whether a fingerprint belongs to an approved version, by whom and when it was approved, and
+   * whether the engine running now still gives the same outputs from the stored inputs.
+   */
+  async verify(fingerprint: string) {
+    const version = await this.versions.findOneBy({ fingerprint, status: 'approved' });
+    if (!version) {
+      return {
+        fingerprint,
+        match: false as const,
+        message: 'No approved version has this fingerprint.',
+      };
+    }
+    const [calculation, review] = await Promise.all([
+      this.calculations.findOneByOrFail({ id: version.calculationId }),
+      this.reviews.findOneOrFail({
+        where: { versionId: version.id, decision: 'approved' },
+        order: { createdAt: 'DESC' },
+      }),
+    ]);
+    const reviewer = await this.users.findOneBy({ id: review.reviewerId });
+    const stored = version.outputs as Record<string, OutputQuantity>;
+    let recomputed: Record<string, OutputQuantity> = {};
+    let recomputeError: string | null = null;
+    try {
+      recomputed = evaluate(calculation.kind, version.inputs).outputs;
+    } catch (error) {
+      recomputeError = error instanceof Error ? error.message : String(error);
+    }
+    const names = [...new Set([...Object.keys(stored), ...Object.keys(recomputed)])].sort();
+    const differences: OutputComparison[] = names
+      .filter((name) => !sameValue(stored[name]?.value, recomputed[name]?.value))
+      .map((name) => ({
+        name,
+        unit: (stored[name] ?? recomputed[name])?.unit ?? '',
+        approved: stored[name]?.value ?? null,
+        recomputed: recomputed[name]?.value ?? null,
+      }));
+    return {
+      fingerprint,
+      match: true as const,
+      calculation: { id: calculation.id, title: calculation.title, kind: calculation.kind },
+      version: version.number,
+      approvedBy: reviewer ? { id: reviewer.id, displayName: reviewer.displayName } : null,
+      approvedAt: new Date(review.createdAt).toISOString(),
+      comment: review.comment,
+      engineVersionAtApproval: version.engineVersion,
+      currentEngineVersion: ENGINE_VERSION,
+      reproduces: recomputeError === null && differences.length === 0,
+      differences,
+      recomputeError,
+    };
+  }
+}
+
+function sameValue(a: number | undefined, b: number | undefined): boolean {
+  if (a === undefined || b === undefined) return a === b;
+  if (a === b) return true;
+  return Math.abs(a - b) <= SAME_VALUE_RELATIVE * Math.max(Math.abs(a), Math.abs(b));
+}

@@ -1,0 +1,81 @@
+import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { AuthUser } from '../auth/auth-user';
+import { CalculationsService } from '../calculations/calculations.service';
+import type { EnvironmentVariables } from '../config/env.validation';
+import { ReviewsService } from '../reviews/reviews.service';
+import { UsersService } from '../users/users.service';
+import { DEMO_ACCOUNTS, DEMO_CALCULATIONS } from './demo-scenario';
+
+/**
+ * Fills an empty database with the demo accounts and scenario, through the same services the API
+ * uses, so every stored result is a real engine result. SEED_DEMO=0 turns it off.
+ */
+@Injectable()
+export class DemoSeedService implements OnApplicationBootstrap {
+  private readonly logger = new Logger('DemoSeed');
+
+  constructor(
+    private readonly config: ConfigService<EnvironmentVariables, true>,
+    private readonly usersService: UsersService,
+    private readonly calculationsService: CalculationsService,
+    private readonly reviewsService: ReviewsService,
+  ) {}
+
+  async onApplicationBootstrap(): Promise<void> {
+    if (this.config.get('SEED_DEMO', { infer: true }) !== '1') return;
+    if ((await this.usersService.count()) > 0) return;
+    await this.seed();
+  }
+
+  async seed(): Promise<void> {
+    const password = this.config.get('DEMO_PASSWORD', { infer: true });
+    const people = new Map<string, AuthUser>();
+    for (const account of DEMO_ACCOUNTS) {
+      const user = await this.usersService.create({ ...account, password });
+      people.set(account.key, {
+        id: user.id,
+        email: user.email,
+        displayName: user.displayName,
+        roles: user.roles,
+      });
+    }
+    const reviewer = people.get('reviewer') as AuthUser;
+    for (const demo of DEMO_CALCULATIONS) {
+      const owner = people.get(demo.owner) as AuthUser;
+      const [first, ...later] = demo.versions;
+      if (!first) continue;
+      const created = await this.calculationsService.create(owner, {
+        title: demo.title,
+        kind: demo.kind,
+        inputs: first.inputs,
+        visibility: demo.visibility,
+        tags: demo.tags,
+        note: first.note,
+      });
+      let number = 1;
+      for (const version of later) {
+        await this.calculationsService.saveVersion(owner, created.id, {
+          baseVersion: number,
+          inputs: version.inputs,
+          note: version.note,
+        });
+        number += 1;
+      }
+      if (demo.stage === 'draft') continue;
+      await this.reviewsService.submit(owner, created.id, number, undefined);
+      if (demo.stage === 'approved')
+        await this.reviewsService.approve(reviewer, created.id, number, demo.reviewComment ?? '');
+      if (demo.stage === 'changes_requested')
+        await this.reviewsService.sendBack(
+          reviewer,
+          created.id,
+          number,
+          demo.reviewComment ?? 'Please revise.',
+        );
+    }
+    this.logger.log(
+      `Demo data added: ${DEMO_ACCOUNTS.length} accounts (password from DEMO_PASSWORD), ${DEMO_CALCULATIONS.length} calculations`,
+    );
+  }
+}

@@ -1,0 +1,11 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { ArrayMaxSize, IsArray, IsIn } from 'class-validator';
+import { type Role, ROLES } from '../roles';
+
+export class UpdateRolesDto {
+  @ApiProperty({ enum: ROLES, isArray: true, example: ['designer', 'reviewer'] })
+  @IsArray()
+  @ArrayMaxSize(ROLES.length)
+  @IsIn(ROLES, { each: true })
+  roles: Role[];
+}

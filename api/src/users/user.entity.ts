@@ -1,0 +1,55 @@
+import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import type { Role } from './roles';
+
+@Entity('user')
+export class User {
+  @PrimaryColumn('varchar', { length: 36 })
+  id: string;
+
+  /** Stored lower-cased; unique. */
+  @Column('varchar', { unique: true })
+  email: string;
+
+  @Column('varchar', { name: 'display_name' })
+  displayName: string;
+
+  @Column('varchar', { name: 'password_hash' })
+  passwordHash: string;
+
+  @Column('simple-json')
+  roles: Role[];
+
+  @Column('varchar', { name: 'unit_system', default: 'si' })
+  unitSystem: 'si' | 'us';
+
+  /** Bumped on sign-out and password change: tokens carrying an older value stop working. */
+  @Column('integer', { name: 'token_version', default: 0 })
+  tokenVersion: number;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  updatedAt: Date;
+}
+
+/** A user as the API shows it: never the password hash or token version. */
+export interface PublicUser {
+  id: string;
+  email: string;
+  displayName: string;
+  roles: Role[];
+  unitSystem: 'si' | 'us';
+  createdAt: string;
+}
+
+export function toPublicUser(user: User): PublicUser {
+  return {
+    id: user.id,
+    email: user.email,
+    displayName: user.displayName,
+    roles: user.roles,
+    unitSystem: user.unitSystem,
+    createdAt: new Date(user.createdAt).toISOString(),
+  };
+}

@@ -1,0 +1,119 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
+import { WriteLock } from '../database/write-lock';
+import { PasswordHasher } from './password-hasher.service';
+import type { Role } from './roles';
+import { User } from './user.entity';
+
+@Injectable()
+export class UsersService {
+  constructor(
+    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly hasher: PasswordHasher,
+    private readonly audit: AuditService,
+    private readonly writeLock: WriteLock,
+  ) {}
+
+  count(): Promise<number> {
+    return this.users.count();
+  }
+
+  findById(id: string): Promise<User | null> {
+    return this.users.findOneBy({ id });
+  }
+
+  findByEmail(email: string): Promise<User | null> {
+    return this.users.findOneBy({ email: email.trim().toLowerCase() });
+  }
+
+  async create(input: {
+    email: string;
+    password: string;
+    displayName: string;
+    roles: Role[];
+  }): Promise<User> {
+    const email = input.email.trim().toLowerCase();
+    if (await this.findByEmail(email)) {
+      throw new ConflictException({
+        message: 'An account with this e-mail already exists.',
+        field: 'email',
+      });
+    }
+    const user = this.users.create({
+      id: randomUUID(),
+      email,
+      displayName: input.displayName.trim(),
+      passwordHash: await this.hasher.hash(input.password),
+      roles: [...new Set(input.roles)],
+      unitSystem: 'si',
+      tokenVersion: 0,
+    });
+    return this.writeLock.run(async () => {
+      // Checked again under the lock: two registrations of one address at once get one account.
+      if (await this.findByEmail(email)) {
+        throw new ConflictException({
+          message: 'An account with this e-mail already exists.',
+          field: 'email',
+        });
+      }
+      return this.users.save(user);
+    });
+  }
+
+  list(): Promise<User[]> {
+    return this.users.find({ order: { createdAt: 'ASC' } });
+  }
+
+  listByRole(role: Role): Promise<User[]> {
+    return this.users
+      .createQueryBuilder('user')
+      .where(`EXISTS (SELECT 1 FROM json_each(user.roles) WHERE json_each.value = :role)`, { role })
+      .getMany();
+  }
+
+  async updateRoles(actorId: string, id: string, roles: Role[]): Promise<User> {
+    const user = await this.findById(id);
+    if (!user) throw new NotFoundException({ message: 'No such user.', field: 'id' });
+    const unique = [...new Set(roles)];
+    if (user.roles.includes('admin') && !unique.includes('admin')) {
+      const admins = await this.listByRole('admin');
+      if (admins.length <= 1) {
+        throw new ConflictException({
+          message: 'The last admin cannot lose the admin role.',
+          field: 'roles',
+        });
+      }
+    }
+    const before = user.roles;
+    user.roles = unique;
+    // Tokens carry roles: make the user sign in again so the change takes effect everywhere.
+    user.tokenVersion += 1;
+    const saved = await this.writeLock.run(() => this.users.save(user));
+    await this.audit.record({
+      actorId,
+      action: 'user.roles-change',
+      targetType: 'user',
+      targetId: id,
+      detail: { before, after: unique },
+    });
+    return saved;
+  }
+
+  async setPassword(user: User, password: string): Promise<void> {
+    const passwordHash = await this.hasher.hash(password);
+    await this.writeLock.run(() =>
+      this.users.update({ id: user.id }, { passwordHash, tokenVersion: user.tokenVersion + 1 }),
+    );
+  }
+
+  async bumpTokenVersion(id: string): Promise<void> {
+    await this.writeLock.run(() => this.users.increment({ id }, 'tokenVersion', 1));
+  }
+
+  async setUnitSystem(id: string, unitSystem: 'si' | 'us'): Promise<void> {
+    await this.writeLock.run(() => this.users.update({ id }, { unitSystem }));
+  }
+}
