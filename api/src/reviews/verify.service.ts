@@ -31,22 +31,32 @@ export class VerifyService {
    * whether the engine running now still gives the same outputs from the stored inputs.
    */
   async verify(fingerprint: string) {
-    const version = await this.versions.findOneBy({ fingerprint, status: 'approved' });
-    if (!version) {
+    // Identical content has an identical fingerprint, so several approvals may share one.
+    const approvedVersions = await this.versions.findBy({ fingerprint, status: 'approved' });
+    if (approvedVersions.length === 0) {
       return {
         fingerprint,
         match: false as const,
         message: 'No approved version has this fingerprint.',
       };
     }
-    const [calculation, review] = await Promise.all([
-      this.calculations.findOneByOrFail({ id: version.calculationId }),
-      this.reviews.findOneOrFail({
-        where: { versionId: version.id, decision: 'approved' },
-        order: { createdAt: 'DESC' },
+    const approvals = await Promise.all(
+      approvedVersions.map(async (candidate) => {
+        const [calculation, review] = await Promise.all([
+          this.calculations.findOneByOrFail({ id: candidate.calculationId }),
+          this.reviews.findOneOrFail({
+            where: { versionId: candidate.id, decision: 'approved' },
+            order: { createdAt: 'DESC' },
+          }),
+        ]);
+        const reviewer = await this.users.findOneBy({ id: review.reviewerId });
+        return { version: candidate, calculation, review, reviewer };
       }),
-    ]);
-    const reviewer = await this.users.findOneBy({ id: review.reviewerId });
+    );
+    approvals.sort(
+      (a, b) => new Date(b.review.createdAt).getTime() - new Date(a.review.createdAt).getTime(),
+    );
+    const { version, calculation, review, reviewer } = approvals[0] as (typeof approvals)[number];
     const stored = version.outputs as Record<string, OutputQuantity>;
     let recomputed: Record<string, OutputQuantity> = {};
     let recomputeError: string | null = null;
@@ -77,6 +87,14 @@ export class VerifyService {
       reproduces: recomputeError === null && differences.length === 0,
       differences,
       recomputeError,
+      approvals: approvals.map((approval) => ({
+        calculation: { id: approval.calculation.id, title: approval.calculation.title },
+        version: approval.version.number,
+        approvedBy: approval.reviewer
+          ? { id: approval.reviewer.id, displayName: approval.reviewer.displayName }
+          : null,
+        approvedAt: new Date(approval.review.createdAt).toISOString(),
+      })),
     };
   }
 }
