@@ -16,13 +16,11 @@ describe('auth', () => {
 
   describe('POST /api/auth/register', () => {
     it('makes the first account on an empty database an admin, later ones designers', async () => {
-      const first = await http()
-        .post('/api/auth/register')
-        .send({
-          email: 'First@Example.org',
-          password: 'first-password',
-          displayName: 'First Person',
-        });
+      const first = await http().post('/api/auth/register').send({
+        email: 'First@Example.org',
+        password: 'first-password',
+        displayName: 'First Person',
+      });
       expect(first.status).toBe(201);
       expect(first.body.user).toMatchObject({
         email: 'first@example.org',
