@@ -206,24 +206,29 @@ export class CalculationsService {
     }
     const content = computeVersionContent(calculation.kind, dto.inputs);
     const number = dto.baseVersion + 1;
-    const conflict = await this.writeLock.run(() =>
+    const version = {
+      id: randomUUID(),
+      calculationId: id,
+      number,
+      ...content,
+      authorId: user.id,
+      note: dto.note ?? '',
+      status: 'draft' as const,
+      reviewerId: null,
+      submittedAt: null,
+      createdAt: new Date(),
+    };
+    const landed = await this.writeLock.run(() =>
       this.dataSource.transaction(async (manager) => {
-        const current = await manager.getRepository(Calculation).findOneByOrFail({ id });
-        if (current.latestVersion !== dto.baseVersion) return current.latestVersion;
-        await insertRow(manager.getRepository(CalculationVersion), {
-          id: randomUUID(),
-          calculationId: id,
-          number,
-          ...content,
-          authorId: user.id,
-          note: dto.note ?? '',
-          status: 'draft',
-          reviewerId: null,
-          submittedAt: null,
-        });
-        await manager
+        // Moves the head only if nobody else moved it since the base this edit started from.
+        const moved = await manager
           .getRepository(Calculation)
-          .update({ id }, { latestVersion: number, latestStatus: 'draft' });
+          .update(
+            { id, latestVersion: dto.baseVersion },
+            { latestVersion: number, latestStatus: 'draft' },
+          );
+        if (moved.affected !== 1) return false;
+        await insertRow(manager.getRepository(CalculationVersion), version);
         await this.audit.record(
           {
             actorId: user.id,
@@ -234,20 +239,22 @@ export class CalculationsService {
           },
           manager,
         );
-        return null;
+        return true;
       }),
     );
-    if (conflict !== null) {
-      const latest = await this.version(user, id, conflict);
+    if (!landed) {
+      const current = await this.calculations.findOneByOrFail({ id });
+      const latest = await this.version(user, id, current.latestVersion);
       // Nothing is lost: the answer carries the version that landed first and the text sent.
       throw new ConflictException({
-        message: `Version ${conflict} was saved while you were editing version ${dto.baseVersion}. Keep yours as a new version based on ${conflict}, or take version ${conflict}.`,
+        message: `Version ${current.latestVersion} was saved while you were editing version ${dto.baseVersion}. Keep yours as a new version based on ${current.latestVersion}, or take version ${current.latestVersion}.`,
         field: 'baseVersion',
         latest,
         yours: { baseVersion: dto.baseVersion, inputs: dto.inputs, note: dto.note ?? '' },
       });
     }
-    return this.version(user, id, number);
+    const names = await this.names([user.id]);
+    return versionDetail(version as CalculationVersion, names);
   }
 
   async update(user: AuthUser, id: string, dto: UpdateCalculationDto) {

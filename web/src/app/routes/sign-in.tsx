@@ -1,6 +1,6 @@
 import { Alert, Button, Card, Form, Input, Typography } from 'antd';
 
-/** The sign-in form. Accounts are not served yet, so it explains that instead of submitting. */
+/** The sign-in form, not yet connected to the API: it says so instead of submitting. */
 export function SignInRoute() {
   return (
     <Card style={{ maxWidth: 420 }}>
@@ -8,8 +8,8 @@ export function SignInRoute() {
       <Alert
         type="info"
         showIcon
-        title="Accounts are not set up on this server yet"
-        description="You can use the workbench without signing in until accounts arrive."
+        title="Signing in from this page is not ready yet"
+        description="Accounts exist on the server (the README lists the demo accounts) and the API signs them in at /api/auth/login; this page will follow."
         style={{ marginBottom: 16 }}
       />
       <Form layout="vertical" disabled requiredMark={false}>
