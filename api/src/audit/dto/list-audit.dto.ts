@@ -1,30 +1,8 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import {
-  IsISO8601,
-  IsInt,
-  IsOptional,
-  IsString,
-  IsUUID,
-  Max,
-  MaxLength,
-  Min,
-} from 'class-validator';
+import { IsISO8601, IsOptional, IsString, IsUUID, MaxLength } from 'class-validator';
+import { PageQueryDto } from '../../common/dto/page-query.dto';
 
-export class ListAuditDto {
-  @ApiPropertyOptional({ default: 1, minimum: 1 })
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  page = 1;
-
-  @ApiPropertyOptional({ default: 50, minimum: 1, maximum: 200 })
-  @Type(() => Number)
-  @IsInt()
-  @Min(1)
-  @Max(200)
-  pageSize = 50;
-
+export class ListAuditDto extends PageQueryDto {
   @ApiPropertyOptional({ example: 'version.approve' })
   @IsOptional()
   @IsString()

@@ -78,30 +78,21 @@ export function deriveLift(
     result: v('L_free', lift.freeLiftKg, 'kg'),
     source: SOURCES.liftDefinitions,
   });
-  d.step({
-    id: 'gross-lift-force',
-    label: 'Gross lift as a force',
-    formula: 'F_gross = L_gross·g₀',
-    values: [v('L_gross', lift.grossLiftKg, 'kg'), v('g₀', STANDARD_GRAVITY_M_PER_S2, 'm/s²')],
-    result: v('F_gross', lift.grossLiftKg * STANDARD_GRAVITY_M_PER_S2, 'N'),
-    source: SOURCES.standardGravity,
-  });
-  d.step({
-    id: 'net-lift-force',
-    label: 'Net lift as a force',
-    formula: 'F_net = L_net·g₀',
-    values: [v('L_net', lift.netLiftKg, 'kg'), v('g₀', STANDARD_GRAVITY_M_PER_S2, 'm/s²')],
-    result: v('F_net', lift.netLiftKg * STANDARD_GRAVITY_M_PER_S2, 'N'),
-    source: SOURCES.standardGravity,
-  });
-  d.step({
-    id: 'free-lift-force',
-    label: 'Free lift as a force',
-    formula: 'F_free = L_free·g₀',
-    values: [v('L_free', lift.freeLiftKg, 'kg'), v('g₀', STANDARD_GRAVITY_M_PER_S2, 'm/s²')],
-    result: v('F_free', lift.freeLiftKg * STANDARD_GRAVITY_M_PER_S2, 'N'),
-    source: SOURCES.standardGravity,
-  });
+  const forces = [
+    ['gross', 'Gross', lift.grossLiftKg],
+    ['net', 'Net', lift.netLiftKg],
+    ['free', 'Free', lift.freeLiftKg],
+  ] as const;
+  for (const [key, name, massKg] of forces) {
+    d.step({
+      id: `${key}-lift-force`,
+      label: `${name} lift as a force`,
+      formula: `F_${key} = L_${key}·g₀`,
+      values: [v(`L_${key}`, massKg, 'kg'), v('g₀', STANDARD_GRAVITY_M_PER_S2, 'm/s²')],
+      result: v(`F_${key}`, massKg * STANDARD_GRAVITY_M_PER_S2, 'N'),
+      source: SOURCES.standardGravity,
+    });
+  }
   d.step({
     id: 'lift-per-litre',
     label: 'Gross lift per litre of gas',
