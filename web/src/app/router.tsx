@@ -1,8 +1,9 @@
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
-import { AppLayout } from '@/components/layout/app-layout';
 import { RouteError } from '@/components/errors/route-error';
 import { PageLoading } from '@/components/layout/page-loading';
 import { paths } from '@/config/paths';
+import { AppLayout } from './app-layout';
+import { RequireSignIn } from './require-sign-in';
 
 /** Routes, each page loaded on demand so the first page stays small. */
 export const routes: RouteObject[] = [
@@ -19,6 +20,39 @@ export const routes: RouteObject[] = [
       {
         path: paths.signIn.path,
         lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInRoute })),
+      },
+      {
+        path: paths.register.path,
+        lazy: () => import('./routes/register').then((m) => ({ Component: m.RegisterRoute })),
+      },
+      {
+        path: paths.forgotPassword.path,
+        lazy: () =>
+          import('./routes/password-reset').then((m) => ({ Component: m.ForgotPasswordRoute })),
+      },
+      {
+        path: paths.resetPassword.path,
+        lazy: () =>
+          import('./routes/password-reset').then((m) => ({ Component: m.ResetPasswordRoute })),
+      },
+      {
+        element: <RequireSignIn />,
+        children: [
+          {
+            path: paths.calculations.path,
+            lazy: () =>
+              import('./routes/calculations/list').then((m) => ({
+                Component: m.CalculationsRoute,
+              })),
+          },
+          {
+            path: paths.calculation.path,
+            lazy: () =>
+              import('./routes/calculations/editor').then((m) => ({
+                Component: m.CalculationEditorRoute,
+              })),
+          },
+        ],
       },
       {
         path: '*',

@@ -1,5 +1,13 @@
 /** Every client-side URL, in one place; pages and links build their hrefs from here. */
 export const paths = {
   home: { path: '/', href: () => '/' },
-  signIn: { path: '/sign-in', href: () => '/sign-in' },
+  signIn: {
+    path: '/sign-in',
+    href: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
+  },
+  register: { path: '/register', href: () => '/register' },
+  forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
+  resetPassword: { path: '/reset-password', href: () => '/reset-password' },
+  calculations: { path: '/calculations', href: () => '/calculations' },
+  calculation: { path: '/calculations/:id', href: (id: string) => `/calculations/${id}` },
 } as const;

@@ -1,4 +1,12 @@
 import axios, { AxiosError } from 'axios';
+import { getToken, setToken } from './session';
+
+/** One problem the API found with a request field. */
+export interface ApiIssue {
+  field: string;
+  reason: string;
+  range?: { min?: number; max?: number; unit: string };
+}
 
 /** An API failure as the UI shows it: status, message and, where the API names one, the field. */
 export class ApiError extends Error {
@@ -8,6 +16,9 @@ export class ApiError extends Error {
     readonly status: number,
     message: string,
     readonly field?: string,
+    readonly issues: ApiIssue[] = [],
+    /** The whole error body, for answers that carry data (a 409 holds both versions). */
+    readonly body: Record<string, unknown> = {},
   ) {
     super(message);
   }
@@ -16,6 +27,7 @@ export class ApiError extends Error {
 interface ErrorBody {
   message?: string | string[];
   field?: string;
+  issues?: ApiIssue[];
 }
 
 function toApiError(error: unknown): ApiError {
@@ -24,7 +36,13 @@ function toApiError(error: unknown): ApiError {
     const body = error.response?.data as ErrorBody | undefined;
     const message = Array.isArray(body?.message) ? body.message.join('; ') : body?.message;
     if (status === 0) return new ApiError(0, 'The Loftwright server could not be reached.');
-    return new ApiError(status, message ?? error.message, body?.field);
+    return new ApiError(
+      status,
+      message ?? error.message,
+      body?.field,
+      body?.issues ?? [],
+      (body ?? {}) as Record<string, unknown>,
+    );
   }
   return new ApiError(0, error instanceof Error ? error.message : String(error));
 }
@@ -36,7 +54,18 @@ export const apiClient = axios.create({
   timeout: 30000,
 });
 
+apiClient.interceptors.request.use((config) => {
+  const token = getToken();
+  if (token) config.headers.set('Authorization', `Bearer ${token}`);
+  return config;
+});
+
 apiClient.interceptors.response.use(
   (response) => response,
-  (error: unknown) => Promise.reject(toApiError(error)),
+  (error: unknown) => {
+    const apiError = toApiError(error);
+    // An expired or revoked token: drop it, and the app shows the sign-in page.
+    if (apiError.status === 401 && getToken()) setToken(null);
+    return Promise.reject(apiError);
+  },
 );

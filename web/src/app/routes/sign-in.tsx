@@ -1,28 +1,23 @@
-import { Alert, Button, Card, Form, Input, Typography } from 'antd';
+import { Card, Space, Typography } from 'antd';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { SignInForm } from '@/features/auth/components/sign-in-form';
 
-/** The sign-in form, not yet connected to the API: it says so instead of submitting. */
 export function SignInRoute() {
+  const navigate = useNavigate();
+  const [search] = useSearchParams();
+  const next = search.get('next');
+  // Only return to a path of this site.
+  const target =
+    next && next.startsWith('/') && !next.startsWith('//') ? next : paths.calculations.href();
   return (
     <Card style={{ maxWidth: 420 }}>
       <Typography.Title level={2}>Sign in</Typography.Title>
-      <Alert
-        type="info"
-        showIcon
-        title="Signing in from this page is not ready yet"
-        description="Accounts exist on the server (the README lists the demo accounts) and the API signs them in at /api/auth/login; this page will follow."
-        style={{ marginBottom: 16 }}
-      />
-      <Form layout="vertical" disabled requiredMark={false}>
-        <Form.Item label="E-mail" name="email" htmlFor="sign-in-email">
-          <Input id="sign-in-email" type="email" autoComplete="username" />
-        </Form.Item>
-        <Form.Item label="Password" name="password" htmlFor="sign-in-password">
-          <Input.Password id="sign-in-password" autoComplete="current-password" />
-        </Form.Item>
-        <Button type="primary" htmlType="submit">
-          Sign in
-        </Button>
-      </Form>
+      <SignInForm onSignedIn={() => void navigate(target, { replace: true })} />
+      <Space style={{ marginTop: 16 }} wrap>
+        <Link to={paths.register.href()}>Create an account</Link>
+        <Link to={paths.forgotPassword.href()}>Forgot the password?</Link>
+      </Space>
     </Card>
   );
 }

@@ -1,30 +1,28 @@
 import { Menu } from 'antd';
-import type { MenuProps } from 'antd';
-import { ExperimentOutlined, LoginOutlined } from '@ant-design/icons';
+import type { ReactNode } from 'react';
 import { useLocation, useNavigate } from 'react-router-dom';
-import { paths } from '@/config/paths';
 
-const items: Required<MenuProps>['items'] = [
-  { key: paths.home.href(), icon: <ExperimentOutlined />, label: 'Workbench' },
-  { key: paths.signIn.href(), icon: <LoginOutlined />, label: 'Sign in' },
-];
+export interface NavItem {
+  href: string;
+  label: string;
+  icon: ReactNode;
+}
 
-/** The narrow rail on the left: one entry per area of the product. */
-export function NavRail() {
+/** The narrow rail on the left: one entry per area of the product the user may use. */
+export function NavRail({ items }: { items: readonly NavItem[] }) {
   const location = useLocation();
   const navigate = useNavigate();
   const selected = items
-    .map((item) => String(item?.key))
+    .map((item) => item.href)
     .filter(
-      (key) => key === location.pathname || (key !== '/' && location.pathname.startsWith(key)),
+      (href) => href === location.pathname || (href !== '/' && location.pathname.startsWith(href)),
     );
-
   return (
     <nav aria-label="Main">
       <Menu
         mode="inline"
         selectedKeys={selected}
-        items={items}
+        items={items.map((item) => ({ key: item.href, icon: item.icon, label: item.label }))}
         onClick={({ key }) => void navigate(key)}
       />
     </nav>

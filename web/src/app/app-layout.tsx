@@ -1,0 +1,41 @@
+import { Layout, Typography } from 'antd';
+import { ExperimentOutlined, LoginOutlined, TableOutlined } from '@ant-design/icons';
+import { Suspense } from 'react';
+import { Link, Outlet, useNavigate } from 'react-router-dom';
+import { NavRail, type NavItem } from '@/components/layout/nav-rail';
+import { PageLoading } from '@/components/layout/page-loading';
+import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/auth-api';
+import { UserMenu } from '@/features/auth/components/user-menu';
+
+/** Navigation rail on the left, the working area filling the rest. */
+export function AppLayout() {
+  const { signedIn } = useMe();
+  const navigate = useNavigate();
+  const items: NavItem[] = [
+    { href: paths.home.href(), icon: <ExperimentOutlined />, label: 'Workbench' },
+    ...(signedIn
+      ? [{ href: paths.calculations.href(), icon: <TableOutlined />, label: 'Calculations' }]
+      : [{ href: paths.signIn.href(), icon: <LoginOutlined />, label: 'Sign in' }]),
+  ];
+  return (
+    <Layout style={{ minHeight: '100vh' }}>
+      <Layout.Sider width={200} breakpoint="md" collapsedWidth={64} theme="light">
+        <div style={{ padding: '16px 20px' }}>
+          <Link to={paths.home.href()} aria-label="Loftwright home">
+            <Typography.Text strong style={{ fontSize: 18 }}>
+              Loftwright
+            </Typography.Text>
+          </Link>
+        </div>
+        <NavRail items={items} />
+        {signedIn ? <UserMenu onSignedOut={() => void navigate(paths.signIn.href())} /> : null}
+      </Layout.Sider>
+      <Layout.Content style={{ padding: 24 }}>
+        <Suspense fallback={<PageLoading />}>
+          <Outlet />
+        </Suspense>
+      </Layout.Content>
+    </Layout>
+  );
+}

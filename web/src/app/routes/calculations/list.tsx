@@ -1,0 +1,25 @@
+import { Space, Typography } from 'antd';
+import { useNavigate } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/auth-api';
+import { CalculationsTable } from '@/features/calculations/components/calculations-table';
+import { NewCalculationButton } from '@/features/calculations/components/new-calculation-button';
+
+export function CalculationsRoute() {
+  const navigate = useNavigate();
+  const { user } = useMe();
+  const mayCreate = user?.roles.some((role) => role === 'designer' || role === 'teacher') ?? false;
+  return (
+    <>
+      <Space style={{ width: '100%', justifyContent: 'space-between' }} wrap>
+        <Typography.Title level={1} style={{ margin: 0 }}>
+          Calculations
+        </Typography.Title>
+        {mayCreate ? (
+          <NewCalculationButton onCreated={(id) => void navigate(paths.calculation.href(id))} />
+        ) : null}
+      </Space>
+      <CalculationsTable calculationHref={paths.calculation.href} />
+    </>
+  );
+}

@@ -1,0 +1,90 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { apiClient } from '@/lib/api-client';
+import { setToken, useToken } from '@/lib/session';
+
+export type Role = 'admin' | 'designer' | 'reviewer' | 'teacher' | 'student';
+
+/** The account as GET /api/auth/me answers (api/src/users/user.entity.ts, PublicUser). */
+export interface CurrentUser {
+  id: string;
+  email: string;
+  displayName: string;
+  roles: Role[];
+  unitSystem: 'si' | 'us';
+}
+
+interface SignedIn {
+  accessToken: string;
+  user: CurrentUser;
+}
+
+export const getMe = async (): Promise<CurrentUser> =>
+  (await apiClient.get<CurrentUser>('/auth/me')).data;
+
+export const meQueryOptions = (signedIn: boolean) =>
+  queryOptions({ queryKey: ['auth', 'me'], queryFn: getMe, staleTime: 60_000, enabled: signedIn });
+
+/** The signed-in user, or undefined when nobody is signed in. */
+export function useMe() {
+  const token = useToken();
+  const query = useQuery(meQueryOptions(token !== null));
+  return { ...query, signedIn: token !== null, user: token ? query.data : undefined };
+}
+
+export function useSignIn() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (body: { email: string; password: string }) =>
+      (await apiClient.post<SignedIn>('/auth/login', body)).data,
+    onSuccess: (data) => {
+      setToken(data.accessToken);
+      queryClient.setQueryData(['auth', 'me'], data.user);
+    },
+  });
+}
+
+export function useRegister() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (body: { email: string; password: string; displayName: string }) =>
+      (await apiClient.post<SignedIn>('/auth/register', body)).data,
+    onSuccess: (data) => {
+      setToken(data.accessToken);
+      queryClient.setQueryData(['auth', 'me'], data.user);
+    },
+  });
+}
+
+export function useSignOut() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async () => {
+      await apiClient.post('/auth/logout').catch(() => undefined);
+    },
+    onSettled: () => {
+      setToken(null);
+      queryClient.clear();
+    },
+  });
+}
+
+export const useRequestReset = () =>
+  useMutation({
+    mutationFn: async (body: { email: string }) =>
+      (await apiClient.post<{ message: string }>('/auth/password-reset/request', body)).data,
+  });
+
+export const useConfirmReset = () =>
+  useMutation({
+    mutationFn: async (body: { token: string; password: string }) =>
+      apiClient.post('/auth/password-reset/confirm', body),
+  });
+
+export function useSetUnitSystem() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (unitSystem: 'si' | 'us') =>
+      (await apiClient.patch<CurrentUser>('/auth/me/preferences', { unitSystem })).data,
+    onSuccess: (user) => queryClient.setQueryData(['auth', 'me'], user),
+  });
+}

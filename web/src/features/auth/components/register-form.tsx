@@ -1,0 +1,50 @@
+import { Alert, Button, Form, Input } from 'antd';
+import { useRegister } from '../api/auth-api';
+
+export function RegisterForm({ onRegistered }: { onRegistered: () => void }) {
+  const register = useRegister();
+  return (
+    <Form
+      layout="vertical"
+      requiredMark={false}
+      onFinish={(values: { email: string; password: string; displayName: string }) =>
+        register.mutate(values, { onSuccess: onRegistered })
+      }
+    >
+      {register.error ? (
+        <Alert
+          type="error"
+          showIcon
+          title={register.error.message}
+          style={{ marginBottom: 16 }}
+          role="alert"
+        />
+      ) : null}
+      <Form.Item
+        label="Name"
+        name="displayName"
+        rules={[{ required: true, message: 'Enter the name others will see.' }]}
+      >
+        <Input autoComplete="name" maxLength={80} />
+      </Form.Item>
+      <Form.Item
+        label="E-mail"
+        name="email"
+        rules={[{ required: true, type: 'email', message: 'Enter an e-mail address.' }]}
+      >
+        <Input type="email" autoComplete="username" />
+      </Form.Item>
+      <Form.Item
+        label="Password"
+        name="password"
+        extra="At least 10 characters."
+        rules={[{ required: true, min: 10, message: 'Use at least 10 characters.' }]}
+      >
+        <Input.Password autoComplete="new-password" />
+      </Form.Item>
+      <Button type="primary" htmlType="submit" loading={register.isPending} block>
+        Create account
+      </Button>
+    </Form>
+  );
+}

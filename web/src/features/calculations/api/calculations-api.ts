@@ -1,0 +1,126 @@
+import {
+  keepPreviousData,
+  queryOptions,
+  useMutation,
+  useQuery,
+  useQueryClient,
+} from '@tanstack/react-query';
+import type { CalculationResult } from '@loftwright/buoyancy';
+import { apiClient } from '@/lib/api-client';
+
+export type VersionStatus = 'draft' | 'in_review' | 'approved' | 'changes_requested';
+
+interface UserRef {
+  id: string;
+  displayName: string;
+}
+
+/** Shapes of api/src/calculations/calculation-views.ts. */
+export interface CalculationSummary {
+  id: string;
+  title: string;
+  kind: string;
+  owner: UserRef | null;
+  visibility: 'private' | 'team' | 'published';
+  tags: string[];
+  latestVersion: number;
+  status: VersionStatus;
+  archived: boolean;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface VersionSummary {
+  number: number;
+  status: VersionStatus;
+  note: string;
+  author: UserRef | null;
+  reviewer: UserRef | null;
+  engineVersion: string;
+  fingerprint: string;
+  createdAt: string;
+  submittedAt: string | null;
+}
+
+export interface VersionDetail extends VersionSummary {
+  inputs: Record<string, unknown>;
+  outputs: CalculationResult['outputs'];
+  steps: CalculationResult['steps'];
+  warnings: CalculationResult['warnings'];
+  series: CalculationResult['series'] | null;
+}
+
+export interface CalculationDetail extends CalculationSummary {
+  versions: VersionSummary[];
+  latest: VersionDetail | null;
+  permissions: { edit: boolean; archive: boolean };
+}
+
+export interface CalculationPage {
+  items: CalculationSummary[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface ListParams {
+  page: number;
+  pageSize: number;
+  sort?: string;
+  kind?: string;
+  status?: string;
+  owner?: string;
+  tag?: string;
+  q?: string;
+}
+
+export const getCalculations = async (params: ListParams) =>
+  (await apiClient.get<CalculationPage>('/calculations', { params })).data;
+
+export const useCalculations = (params: ListParams) =>
+  useQuery({
+    queryKey: ['calculations', 'list', params],
+    queryFn: () => getCalculations(params),
+    placeholderData: keepPreviousData,
+  });
+
+export const calculationQueryOptions = (id: string) =>
+  queryOptions({
+    queryKey: ['calculations', 'detail', id],
+    queryFn: async () => (await apiClient.get<CalculationDetail>(`/calculations/${id}`)).data,
+  });
+
+export const useCalculation = (id: string) => useQuery(calculationQueryOptions(id));
+
+export function useCreateCalculation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (body: {
+      title: string;
+      kind: string;
+      inputs: unknown;
+      visibility?: string;
+      tags?: string[];
+    }) => (await apiClient.post<CalculationDetail>('/calculations', body)).data,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations', 'list'] }),
+  });
+}
+
+export function useSaveVersion(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (body: { baseVersion: number; inputs: unknown; note: string }) =>
+      (await apiClient.post<VersionDetail>(`/calculations/${id}/versions`, body)).data,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations'] }),
+  });
+}
+
+export function useSubmitVersion(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (number: number) =>
+      (await apiClient.post<VersionDetail>(`/calculations/${id}/versions/${number}/submit`, {}))
+        .data,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations'] }),
+  });
+}

@@ -1,0 +1,286 @@
+import { Alert, App, Button, Col, Input, Modal, Row, Space, Spin, Typography } from 'antd';
+import {
+  evaluate,
+  InputError,
+  KINDS,
+  type CalculationResult,
+  type UnitSystem,
+} from '@loftwright/buoyancy';
+import { useDeferredValue, useEffect, useMemo, useState } from 'react';
+import { useBlocker } from 'react-router-dom';
+import { ApiError } from '@/lib/api-client';
+import {
+  type CalculationDetail,
+  useCalculation,
+  useSaveVersion,
+  useSubmitVersion,
+  type VersionDetail,
+} from '../api/calculations-api';
+import { DerivationPanel } from './derivation-panel';
+import { ResultsPanel } from './results-panel';
+import { SchemaField } from './schema-form';
+import { StatusTag } from './status-tag';
+
+interface LiveResult {
+  result?: CalculationResult;
+  errors: Record<string, string>;
+  problem?: string;
+}
+
+/** The engine, run in the browser on every change of the inputs (no request per keystroke). */
+function evaluateLive(kind: string, inputs: unknown): LiveResult {
+  try {
+    return { result: evaluate(kind, inputs), errors: {} };
+  } catch (error) {
+    if (!(error instanceof InputError))
+      return { errors: {}, problem: error instanceof Error ? error.message : String(error) };
+    const errors: Record<string, string> = {};
+    for (const issue of error.issues) errors[issue.field] ??= issue.reason;
+    return {
+      errors,
+      problem: `Check ${error.issues.length === 1 ? 'the marked input' : `${error.issues.length} inputs`}: ${error.message}`,
+    };
+  }
+}
+
+const sameNumbers = (a: CalculationResult['outputs'], b: CalculationResult['outputs']) =>
+  Object.keys(a).length === Object.keys(b).length &&
+  Object.entries(a).every(
+    ([name, output]) =>
+      Math.abs(output.value - (b[name]?.value ?? Number.NaN)) <=
+      1e-9 * Math.max(1, Math.abs(output.value)),
+  );
+
+/** Inputs, live results and derivation of one calculation, with saving, conflicts and submission. */
+export function CalculationEditor({ id, unitSystem }: { id: string; unitSystem: UnitSystem }) {
+  const calculation = useCalculation(id);
+  if (calculation.isPending) return <Spin description="Loading the calculation…" />;
+  if (calculation.error) return <Alert type="error" showIcon title={calculation.error.message} />;
+  return (
+    <EditorBody
+      detail={calculation.data}
+      refetch={() => void calculation.refetch()}
+      unitSystem={unitSystem}
+    />
+  );
+}
+
+function EditorBody({
+  detail,
+  refetch,
+  unitSystem,
+}: {
+  detail: CalculationDetail;
+  refetch: () => void;
+  unitSystem: UnitSystem;
+}) {
+  const { message } = App.useApp();
+  const id = detail.id;
+  const save = useSaveVersion(id);
+  const submit = useSubmitVersion(id);
+  const latest = detail.latest;
+  const [inputs, setInputs] = useState<unknown>(() => latest?.inputs);
+  const [savedInputs, setSavedInputs] = useState<string>(() => JSON.stringify(latest?.inputs));
+  const [note, setNote] = useState('');
+  const [conflict, setConflict] = useState<{ latest: VersionDetail; mine: unknown } | null>(null);
+
+  const deferredInputs = useDeferredValue(inputs);
+  const kind = detail.kind;
+  const live = useMemo(
+    () =>
+      deferredInputs === undefined || !kind ? { errors: {} } : evaluateLive(kind, deferredInputs),
+    [kind, deferredInputs],
+  );
+  const dirty = inputs !== undefined && JSON.stringify(inputs) !== savedInputs;
+
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) =>
+      dirty && currentLocation.pathname !== nextLocation.pathname,
+  );
+  useEffect(() => {
+    const warn = (event: BeforeUnloadEvent) => {
+      if (dirty) event.preventDefault();
+    };
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty]);
+
+  const schema = KINDS.find((candidate) => candidate.id === detail.kind)?.inputSchema ?? {};
+  const editable = detail.permissions.edit;
+
+  const doSave = (baseVersion: number, toSave: unknown) =>
+    save.mutate(
+      { baseVersion, inputs: toSave, note },
+      {
+        onSuccess: (version) => {
+          setSavedInputs(JSON.stringify(version.inputs));
+          setInputs(version.inputs);
+          setNote('');
+          setConflict(null);
+          void message.success(`Saved as version ${version.number}.`);
+        },
+        onError: (error) => {
+          if (error instanceof ApiError && error.status === 409) {
+            setConflict({ latest: error.body.latest as VersionDetail, mine: toSave });
+          } else {
+            void message.error(error.message);
+          }
+        },
+      },
+    );
+
+  const serverDiffers =
+    !dirty && latest && live.result && !sameNumbers(latest.outputs, live.result.outputs);
+  return (
+    <>
+      <Space align="center" wrap style={{ marginBottom: 8 }}>
+        <Typography.Title level={2} style={{ margin: 0 }}>
+          {detail.title}
+        </Typography.Title>
+        <Typography.Text className="lw-mono">v{detail.latestVersion}</Typography.Text>
+        <StatusTag status={detail.status} />
+      </Space>
+      {detail.status === 'approved' ? (
+        <Alert
+          type="success"
+          showIcon
+          title={`Version ${detail.latestVersion} is approved and locked.`}
+          description="Saving a change makes a new draft version; the approved one stays as it is."
+          style={{ marginBottom: 12 }}
+        />
+      ) : null}
+      {serverDiffers ? (
+        <Alert
+          type="warning"
+          showIcon
+          title="The saved version's numbers differ from what this browser computes"
+          description="The server's recomputed results are the ones stored; reload to get the engine the server runs."
+          style={{ marginBottom: 12 }}
+        />
+      ) : null}
+      <Row gutter={[16, 16]}>
+        <Col xs={24} lg={8}>
+          <section aria-label="Inputs">
+            <Typography.Title level={4}>Inputs</Typography.Title>
+            <SchemaField
+              name=""
+              path=""
+              schema={schema}
+              value={inputs}
+              onChange={setInputs}
+              unitSystem={unitSystem}
+              errors={live.errors}
+              disabled={!editable}
+            />
+            {editable ? (
+              <Space orientation="vertical" style={{ width: '100%' }}>
+                <Input
+                  aria-label="Change note"
+                  placeholder="What changed (change note)"
+                  value={note}
+                  onChange={(event) => setNote(event.target.value)}
+                  maxLength={2000}
+                />
+                <Space wrap>
+                  <Button
+                    type="primary"
+                    disabled={!dirty || !live.result}
+                    loading={save.isPending}
+                    onClick={() => doSave(detail.latestVersion, inputs)}
+                  >
+                    Save as version {detail.latestVersion + 1}
+                  </Button>
+                  {detail.status === 'draft' && !dirty ? (
+                    <Button
+                      loading={submit.isPending}
+                      onClick={() =>
+                        submit.mutate(detail.latestVersion, {
+                          onSuccess: () => void message.success('Submitted for review.'),
+                          onError: (error) => void message.error(error.message),
+                        })
+                      }
+                    >
+                      Submit version {detail.latestVersion} for review
+                    </Button>
+                  ) : null}
+                </Space>
+              </Space>
+            ) : (
+              <Alert
+                type="info"
+                showIcon
+                title="You can read this calculation; only its owner saves versions."
+              />
+            )}
+          </section>
+        </Col>
+        <Col xs={24} lg={8}>
+          <div style={{ position: 'sticky', top: 16 }}>
+            <ResultsPanel
+              result={live.result}
+              unitSystem={unitSystem}
+              title={dirty ? 'Results (live, not saved)' : 'Results'}
+              problem={live.problem}
+            />
+          </div>
+        </Col>
+        <Col xs={24} lg={8}>
+          <DerivationPanel steps={live.result?.steps ?? latest?.steps ?? []} />
+        </Col>
+      </Row>
+      <Modal
+        open={conflict !== null}
+        title="Someone saved a newer version while you were editing"
+        onCancel={() => setConflict(null)}
+        footer={
+          conflict
+            ? [
+                <Button
+                  key="theirs"
+                  onClick={() => {
+                    setInputs(conflict.latest.inputs);
+                    setSavedInputs(JSON.stringify(conflict.latest.inputs));
+                    setConflict(null);
+                    refetch();
+                  }}
+                >
+                  Take version {conflict.latest.number}
+                </Button>,
+                <Button
+                  key="mine"
+                  type="primary"
+                  onClick={() => doSave(conflict.latest.number, conflict.mine)}
+                >
+                  Keep mine as version {conflict.latest.number + 1}
+                </Button>,
+              ]
+            : null
+        }
+      >
+        {conflict ? (
+          <>
+            <Typography.Paragraph>
+              Version {conflict.latest.number} by {conflict.latest.author?.displayName ?? 'someone'}{' '}
+              landed first. Your inputs are kept: save them on top of it, or take theirs.
+            </Typography.Paragraph>
+            <Typography.Text strong>Their free lift or first result: </Typography.Text>
+            <Typography.Text className="lw-mono">
+              {Object.values(conflict.latest.outputs)[0]?.value.toPrecision(5)}{' '}
+              {Object.values(conflict.latest.outputs)[0]?.unit}
+            </Typography.Text>
+          </>
+        ) : null}
+      </Modal>
+      <Modal
+        open={blocker.state === 'blocked'}
+        title="Leave without saving?"
+        okText="Leave"
+        cancelText="Stay"
+        onOk={() => blocker.proceed?.()}
+        onCancel={() => blocker.reset?.()}
+      >
+        Your changes to the inputs are not saved yet.
+      </Modal>
+    </>
+  );
+}

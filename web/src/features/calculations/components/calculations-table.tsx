@@ -1,0 +1,152 @@
+import { Input, Select, Space, Table, Tag, Typography } from 'antd';
+import type { TablePaginationConfig } from 'antd';
+import type { SorterResult } from 'antd/es/table/interface';
+import { KINDS } from '@loftwright/buoyancy';
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { type CalculationSummary, type ListParams, useCalculations } from '../api/calculations-api';
+import { StatusTag } from './status-tag';
+
+const KIND_TITLES = new Map(KINDS.map((kind) => [kind.id, kind.title]));
+const STATUS_OPTIONS = [
+  { value: 'draft', label: 'Draft' },
+  { value: 'in_review', label: 'In review' },
+  { value: 'approved', label: 'Approved' },
+  { value: 'changes_requested', label: 'Changes requested' },
+];
+
+/** Server-side paged, sorted and filtered list of the calculations the user may see. */
+export function CalculationsTable({
+  calculationHref,
+}: {
+  calculationHref: (id: string) => string;
+}) {
+  const [params, setParams] = useState<ListParams>({ page: 1, pageSize: 20, sort: '-updatedAt' });
+  const { data, isFetching, error } = useCalculations(params);
+  const set = (changes: Partial<ListParams>) =>
+    setParams((current) => ({ ...current, page: 1, ...changes }));
+
+  const onTableChange = (
+    pagination: TablePaginationConfig,
+    _filters: unknown,
+    sorter: SorterResult<CalculationSummary> | SorterResult<CalculationSummary>[],
+  ) => {
+    const single = Array.isArray(sorter) ? sorter[0] : sorter;
+    const field = typeof single?.field === 'string' ? single.field : undefined;
+    const sort =
+      field && single?.order ? `${single.order === 'descend' ? '-' : ''}${field}` : '-updatedAt';
+    setParams((current) => ({
+      ...current,
+      page: pagination.current ?? 1,
+      pageSize: pagination.pageSize ?? 20,
+      sort,
+    }));
+  };
+
+  return (
+    <>
+      <Space wrap style={{ marginBottom: 12 }}>
+        <Input.Search
+          aria-label="Search titles and tags"
+          placeholder="Search titles and tags"
+          allowClear
+          onSearch={(q) => set({ q: q || undefined })}
+          style={{ width: 260 }}
+        />
+        <Select
+          aria-label="Kind"
+          placeholder="Any kind"
+          allowClear
+          style={{ width: 200 }}
+          options={KINDS.map((kind) => ({ value: kind.id, label: kind.title }))}
+          onChange={(kind?: string) => set({ kind })}
+        />
+        <Select
+          aria-label="Status"
+          placeholder="Any status"
+          allowClear
+          style={{ width: 180 }}
+          options={STATUS_OPTIONS}
+          onChange={(status?: string) => set({ status })}
+        />
+        <Select
+          aria-label="Owner"
+          style={{ width: 150 }}
+          value={params.owner ?? 'anyone'}
+          options={[
+            { value: 'anyone', label: 'Anyone' },
+            { value: 'me', label: 'Mine' },
+          ]}
+          onChange={(owner: string) => set({ owner: owner === 'anyone' ? undefined : owner })}
+        />
+        <Input
+          aria-label="Tag"
+          placeholder="Tag"
+          allowClear
+          style={{ width: 140 }}
+          onPressEnter={(event) =>
+            set({ tag: (event.target as HTMLInputElement).value || undefined })
+          }
+          onChange={(event) => (event.target.value === '' ? set({ tag: undefined }) : undefined)}
+        />
+      </Space>
+      {error ? <Typography.Text type="danger">{error.message}</Typography.Text> : null}
+      <Table<CalculationSummary>
+        rowKey="id"
+        size="middle"
+        loading={isFetching}
+        dataSource={data?.items ?? []}
+        onChange={onTableChange}
+        pagination={{
+          current: params.page,
+          pageSize: params.pageSize,
+          total: data?.total ?? 0,
+          showSizeChanger: true,
+          showTotal: (total) => `${total} calculations`,
+        }}
+        columns={[
+          {
+            title: 'Title',
+            dataIndex: 'title',
+            sorter: true,
+            render: (title: string, row) => <Link to={calculationHref(row.id)}>{title}</Link>,
+          },
+          {
+            title: 'Kind',
+            dataIndex: 'kind',
+            sorter: true,
+            render: (kind: string) => KIND_TITLES.get(kind) ?? kind,
+          },
+          {
+            title: 'Status',
+            dataIndex: 'status',
+            sorter: true,
+            render: (status: CalculationSummary['status']) => <StatusTag status={status} />,
+          },
+          {
+            title: 'Version',
+            dataIndex: 'latestVersion',
+            render: (version: number) => <span className="lw-mono">v{version}</span>,
+          },
+          {
+            title: 'Owner',
+            dataIndex: 'owner',
+            render: (owner: CalculationSummary['owner']) => owner?.displayName ?? '',
+          },
+          {
+            title: 'Tags',
+            dataIndex: 'tags',
+            render: (tags: string[]) => tags.map((tag) => <Tag key={tag}>{tag}</Tag>),
+          },
+          {
+            title: 'Updated',
+            dataIndex: 'updatedAt',
+            sorter: true,
+            defaultSortOrder: 'descend',
+            render: (at: string) => new Date(at).toLocaleString(),
+          },
+        ]}
+      />
+    </>
+  );
+}
