@@ -10,5 +10,7 @@ export default defineProject({
     testTimeout: 60000,
     hookTimeout: 90000,
     fileParallelism: false,
+    // Pages load lazily split chunks; on a busy 2-core machine the first paint can take seconds.
+    expect: { poll: { timeout: 15000, interval: 100 } },
   },
 });

@@ -1,4 +1,4 @@
-import { Alert, App, Button, Col, Input, Modal, Row, Space, Spin, Typography } from 'antd';
+import { Alert, App, Button, Col, Form, Input, Modal, Row, Space, Spin, Typography } from 'antd';
 import {
   evaluate,
   InputError,
@@ -162,16 +162,18 @@ function EditorBody({
         <Col xs={24} lg={8}>
           <section aria-label="Inputs">
             <Typography.Title level={4}>Inputs</Typography.Title>
-            <SchemaField
-              name=""
-              path=""
-              schema={schema}
-              value={inputs}
-              onChange={setInputs}
-              unitSystem={unitSystem}
-              errors={live.errors}
-              disabled={!editable}
-            />
+            <Form layout="vertical" component="div" requiredMark={false}>
+              <SchemaField
+                name=""
+                path=""
+                schema={schema}
+                value={inputs}
+                onChange={setInputs}
+                unitSystem={unitSystem}
+                errors={live.errors}
+                disabled={!editable}
+              />
+            </Form>
             {editable ? (
               <Space orientation="vertical" style={{ width: '100%' }}>
                 <Input

@@ -1,0 +1,90 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchBrowser, type Browser } from './support/browser.js';
+import { collectConsoleErrors } from './support/console-errors.js';
+import { screenshotOnFailure } from './support/screenshot-on-failure.js';
+import { startProduct, type RunningProduct } from './support/start-product.js';
+
+const DEMO_PASSWORD = 'loftwright-demo';
+
+describe('a designer sizes and saves a lift check in the browser', () => {
+  let product: RunningProduct;
+  let browser: Browser;
+  let page: Page;
+  let consoleErrors: string[];
+
+  beforeAll(async () => {
+    product = await startProduct();
+    browser = await launchBrowser();
+    page = await browser.context.newPage();
+    consoleErrors = collectConsoleErrors(page);
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await product?.stop();
+  });
+
+  async function signIn(email: string) {
+    await page.goto(`${product.baseUrl}/sign-in`);
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect.poll(() => page.url()).toBe(`${product.baseUrl}/calculations`);
+  }
+
+  const netLift = () => page.locator('[data-output="netLift"]').textContent();
+
+  it('signs in and sees the team’s calculations', async () => {
+    screenshotOnFailure(() => page, 'designer-sign-in');
+    await signIn('designer@demo.test');
+    await expect
+      .poll(() => page.getByRole('link', { name: /Curlew air-sampling pod/ }).isVisible())
+      .toBe(true);
+    // The session survives a reload.
+    await page.reload();
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'Calculations' }).isVisible())
+      .toBe(true);
+  });
+
+  it('creates a lift check, types a size with its unit and sees the net lift change, then saves and submits', async () => {
+    screenshotOnFailure(() => page, 'designer-create-save');
+    await page.getByRole('button', { name: 'New calculation' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Title').fill('Browser check sphere');
+    await dialog.getByRole('button', { name: 'Create' }).click();
+    await expect.poll(() => page.url()).toMatch(/\/calculations\/[0-9a-f-]{36}$/);
+    await expect.poll(() => netLift()).toMatch(/Net lift/);
+    const before = await netLift();
+
+    const diameter = page.getByLabel('Diameter', { exact: true });
+    await diameter.fill('150 cm');
+    await expect.poll(() => page.getByText(/read as 1\.50* m/).isVisible()).toBe(true);
+    await expect.poll(() => netLift()).not.toBe(before);
+    const after = await netLift();
+    expect(after).toMatch(/Net lift/);
+
+    await page.getByLabel('Change note').fill('Bigger envelope');
+    await page.getByRole('button', { name: 'Save as version 2' }).click();
+    await expect.poll(() => page.getByText('Saved as version 2.').isVisible()).toBe(true);
+    await page.getByRole('button', { name: 'Submit version 2 for review' }).click();
+    await expect.poll(() => page.getByText('In review').first().isVisible()).toBe(true);
+  });
+
+  it('refuses a value of the wrong kind and says why, next to the field', async () => {
+    screenshotOnFailure(() => page, 'designer-bad-unit');
+    await page.getByRole('menuitem', { name: 'Calculations' }).click();
+    await page.getByRole('button', { name: 'New calculation' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Title').fill('Unit check');
+    await dialog.getByRole('button', { name: 'Create' }).click();
+    await expect.poll(() => page.url()).toMatch(/\/calculations\/[0-9a-f-]{36}$/);
+    await page.getByLabel('Diameter', { exact: true }).fill('5 kg');
+    await expect.poll(() => page.getByText(/is not a length/).isVisible()).toBe(true);
+  });
+
+  it('logged no errors in the browser console', () => {
+    expect(consoleErrors).toEqual([]);
+  });
+});
