@@ -7,7 +7,7 @@ import { startProduct, type RunningProduct } from './support/start-product.js';
 
 const DEMO_PASSWORD = 'loftwright-demo';
 
-describe('a designer sizes and saves a lift check in the browser', () => {
+describe('designer, reviewer and student in the browser', () => {
   let product: RunningProduct;
   let browser: Browser;
   let page: Page;
@@ -34,6 +34,12 @@ describe('a designer sizes and saves a lift check in the browser', () => {
   }
 
   const netLift = () => page.locator('[data-output="netLift"]').textContent();
+  let submittedUrl = '';
+
+  async function signOut() {
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await expect.poll(() => page.url()).toMatch(/\/sign-in/);
+  }
 
   it('signs in and sees the team’s calculations', async () => {
     screenshotOnFailure(() => page, 'designer-sign-in');
@@ -70,6 +76,7 @@ describe('a designer sizes and saves a lift check in the browser', () => {
     await expect.poll(() => page.getByText('Saved as version 2.').isVisible()).toBe(true);
     await page.getByRole('button', { name: 'Submit version 2 for review' }).click();
     await expect.poll(() => page.getByText('In review').first().isVisible()).toBe(true);
+    submittedUrl = page.url();
   });
 
   it('refuses a value of the wrong kind and says why, next to the field', async () => {
@@ -82,6 +89,37 @@ describe('a designer sizes and saves a lift check in the browser', () => {
     await expect.poll(() => page.url()).toMatch(/\/calculations\/[0-9a-f-]{36}$/);
     await page.getByLabel('Diameter', { exact: true }).fill('5 kg');
     await expect.poll(() => page.getByText(/is not a length/).isVisible()).toBe(true);
+  });
+
+  it('lets a reviewer find it in the queue and approve it; the designer then sees it locked', async () => {
+    screenshotOnFailure(() => page, 'reviewer-approve');
+    await signOut();
+    await signIn('reviewer@demo.test');
+    await page.getByRole('menuitem', { name: 'Review queue' }).click();
+    await page.getByRole('link', { name: 'Browser check sphere' }).click();
+    await expect.poll(() => page.url()).toBe(submittedUrl);
+    await page.getByLabel('Review comment').fill('Size checked against the envelope drawing.');
+    await page.getByRole('button', { name: 'Approve' }).click();
+    await expect.poll(() => page.getByText('Version 2 approved.').isVisible()).toBe(true);
+
+    await signOut();
+    await signIn('designer@demo.test');
+    await page.goto(submittedUrl);
+    await expect
+      .poll(() => page.getByText('Version 2 is approved and locked.').isVisible())
+      .toBe(true);
+  });
+
+  it('keeps a private calculation from a student, without saying whether it exists', async () => {
+    screenshotOnFailure(() => page, 'student-private');
+    await signOut();
+    await signIn('student@demo.test');
+    await page.goto(submittedUrl);
+    await expect
+      .poll(() =>
+        page.getByText('This calculation does not exist, or you may not see it.').isVisible(),
+      )
+      .toBe(true);
   });
 
   it('logged no errors in the browser console', () => {

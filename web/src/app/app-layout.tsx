@@ -1,5 +1,5 @@
 import { Layout, Typography } from 'antd';
-import { ExperimentOutlined, LoginOutlined, TableOutlined } from '@ant-design/icons';
+import { AuditOutlined, ExperimentOutlined, LoginOutlined, TableOutlined } from '@ant-design/icons';
 import { Suspense } from 'react';
 import { Link, Outlet, useNavigate } from 'react-router-dom';
 import { NavRail, type NavItem } from '@/components/layout/nav-rail';
@@ -10,12 +10,17 @@ import { UserMenu } from '@/features/auth/components/user-menu';
 
 /** Navigation rail on the left, the working area filling the rest. */
 export function AppLayout() {
-  const { signedIn } = useMe();
+  const { signedIn, user } = useMe();
   const navigate = useNavigate();
   const items: NavItem[] = [
     { href: paths.home.href(), icon: <ExperimentOutlined />, label: 'Workbench' },
     ...(signedIn
-      ? [{ href: paths.calculations.href(), icon: <TableOutlined />, label: 'Calculations' }]
+      ? [
+          { href: paths.calculations.href(), icon: <TableOutlined />, label: 'Calculations' },
+          ...(user?.roles.includes('reviewer')
+            ? [{ href: paths.reviews.href(), icon: <AuditOutlined />, label: 'Review queue' }]
+            : []),
+        ]
       : [{ href: paths.signIn.href(), icon: <LoginOutlined />, label: 'Sign in' }]),
   ];
   return (

@@ -46,6 +46,10 @@ export const routes: RouteObject[] = [
               })),
           },
           {
+            path: paths.reviews.path,
+            lazy: () => import('./routes/reviews').then((m) => ({ Component: m.ReviewsRoute })),
+          },
+          {
             path: paths.calculation.path,
             lazy: () =>
               import('./routes/calculations/editor').then((m) => ({

@@ -10,4 +10,5 @@ export const paths = {
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   calculations: { path: '/calculations', href: () => '/calculations' },
   calculation: { path: '/calculations/:id', href: (id: string) => `/calculations/${id}` },
+  reviews: { path: '/reviews', href: () => '/reviews' },
 } as const;

@@ -1,9 +1,34 @@
+import { Typography } from 'antd';
 import { useParams } from 'react-router-dom';
 import { useMe } from '@/features/auth/api/auth-api';
+import { useCalculation } from '@/features/calculations/api/calculations-api';
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
+import { VersionHistory } from '@/features/calculations/components/version-history';
+import { ReviewDecision } from '@/features/reviews/components/review-decision';
 
 export function CalculationEditorRoute() {
   const { id = '' } = useParams();
   const { user } = useMe();
-  return <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />;
+  const calculation = useCalculation(id);
+  const latest = calculation.data?.latest;
+  const mayReview =
+    user !== undefined &&
+    latest !== null &&
+    latest !== undefined &&
+    user.roles.includes('reviewer') &&
+    latest.status === 'in_review' &&
+    latest.author?.id !== user.id &&
+    (latest.reviewer === null || latest.reviewer.id === user.id);
+  return (
+    <>
+      {mayReview ? <ReviewDecision calculationId={id} number={latest.number} /> : null}
+      <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />
+      {calculation.data ? (
+        <section aria-label="Versions" style={{ marginTop: 24 }}>
+          <Typography.Title level={4}>Versions</Typography.Title>
+          <VersionHistory versions={calculation.data.versions} />
+        </section>
+      ) : null}
+    </>
+  );
 }

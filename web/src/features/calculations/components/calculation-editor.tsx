@@ -55,7 +55,25 @@ const sameNumbers = (a: CalculationResult['outputs'], b: CalculationResult['outp
 export function CalculationEditor({ id, unitSystem }: { id: string; unitSystem: UnitSystem }) {
   const calculation = useCalculation(id);
   if (calculation.isPending) return <Spin description="Loading the calculation…" />;
-  if (calculation.error) return <Alert type="error" showIcon title={calculation.error.message} />;
+  if (calculation.error) {
+    const hidden = calculation.error instanceof ApiError && calculation.error.status === 404;
+    return (
+      <Alert
+        type={hidden ? 'warning' : 'error'}
+        showIcon
+        title={
+          hidden
+            ? 'This calculation does not exist, or you may not see it.'
+            : calculation.error.message
+        }
+        description={
+          hidden
+            ? 'Private calculations are open to their owner, admins and, once submitted, reviewers.'
+            : undefined
+        }
+      />
+    );
+  }
   return (
     <EditorBody
       detail={calculation.data}
