@@ -20,3 +20,13 @@ export function renderApp(url: string) {
 export function renderWithProviders(ui: ReactElement) {
   return render(<AppProvider>{ui}</AppProvider>);
 }
+
+/** Renders one element as the only route of a memory data router, in the real providers. */
+export function renderInRouter(element: ReactElement) {
+  const router = createMemoryRouter([{ path: '/', element }]);
+  return render(
+    <AppProvider>
+      <RouterProvider router={router} />
+    </AppProvider>,
+  );
+}

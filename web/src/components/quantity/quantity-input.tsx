@@ -46,8 +46,10 @@ export function QuantityInput({
   const [text, setText] = useState(() => display(value, dimension, unitSystem));
   const [problem, setProblem] = useState<string | undefined>();
   const hintId = useId();
-  // A bare number is read in the unit the field shows (or would show for a value of 1).
-  const defaultUnit = formatQuantity(value ?? 1, dimension, unitSystem).unitName;
+  // A bare number is read in the unit the field showed when it was last filled in (or would show
+  // for a value of 1); it does not change while the user types.
+  const unitShown = (system: UnitSystem) => formatQuantity(value ?? 1, dimension, system).unitName;
+  const [defaultUnit, setDefaultUnit] = useState(() => unitShown(unitSystem));
 
   // Show the value in the other unit system when the user switches (adjusting state while
   // rendering, as React recommends, rather than in an effect).
@@ -55,6 +57,7 @@ export function QuantityInput({
   if (shownIn !== unitSystem) {
     setShownIn(unitSystem);
     setText(display(value, dimension, unitSystem));
+    setDefaultUnit(unitShown(unitSystem));
   }
 
   const read = (next: string) => {

@@ -3,6 +3,7 @@ import { useParams } from 'react-router-dom';
 import { useMe } from '@/features/auth/api/auth-api';
 import { useCalculation } from '@/features/calculations/api/calculations-api';
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
+import { VersionCompare } from '@/features/calculations/components/version-compare';
 import { VersionHistory } from '@/features/calculations/components/version-history';
 import { ReviewDecision } from '@/features/reviews/components/review-decision';
 
@@ -27,6 +28,14 @@ export function CalculationEditorRoute() {
         <section aria-label="Versions" style={{ marginTop: 24 }}>
           <Typography.Title level={4}>Versions</Typography.Title>
           <VersionHistory versions={calculation.data.versions} />
+          <Typography.Title level={4} style={{ marginTop: 24 }}>
+            Compare versions
+          </Typography.Title>
+          <VersionCompare
+            calculationId={id}
+            versions={calculation.data.versions}
+            unitSystem={user?.unitSystem ?? 'si'}
+          />
         </section>
       ) : null}
     </>

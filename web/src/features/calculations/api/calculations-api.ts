@@ -124,3 +124,20 @@ export function useSubmitVersion(id: string) {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations'] }),
   });
 }
+
+/** GET .../versions/:a/diff/:b (api/src/calculations/version-diff.ts). */
+export interface VersionDiff {
+  from: number;
+  to: number;
+  inputs: { path: string; from: unknown; to: unknown }[];
+  outputs: { name: string; label: string; unit: string; from: number | null; to: number | null }[];
+  engineVersion: { from: string; to: string };
+}
+
+export const useVersionDiff = (id: string, a: number | undefined, b: number | undefined) =>
+  useQuery({
+    queryKey: ['calculations', 'diff', id, a, b],
+    queryFn: async () =>
+      (await apiClient.get<VersionDiff>(`/calculations/${id}/versions/${a}/diff/${b}`)).data,
+    enabled: a !== undefined && b !== undefined && a !== b,
+  });

@@ -51,7 +51,7 @@ const sameNumbers = (a: CalculationResult['outputs'], b: CalculationResult['outp
       1e-9 * Math.max(1, Math.abs(output.value)),
   );
 
-/** Inputs, live results and derivation of one calculation, with saving, conflicts and submission. */
+/** Loads a calculation and shows its editor (inputs, live results, derivation). */
 export function CalculationEditor({ id, unitSystem }: { id: string; unitSystem: UnitSystem }) {
   const calculation = useCalculation(id);
   if (calculation.isPending) return <Spin description="Loading the calculation…" />;
@@ -83,7 +83,8 @@ export function CalculationEditor({ id, unitSystem }: { id: string; unitSystem: 
   );
 }
 
-function EditorBody({
+/** Inputs, live results and derivation of one loaded calculation, with saving, conflicts and submission. */
+export function EditorBody({
   detail,
   refetch,
   unitSystem,

@@ -1,0 +1,47 @@
+import { screen, within } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { renderWithProviders } from '@/testing/test-utils';
+import { VersionDiffView } from './version-diff-view';
+
+describe('VersionDiffView', () => {
+  it('shows each changed input and result with both versions side by side', () => {
+    renderWithProviders(
+      <VersionDiffView
+        unitSystem="si"
+        diff={{
+          from: 1,
+          to: 2,
+          inputs: [{ path: 'payloadMassKg', from: 0.2, to: 0.35 }],
+          outputs: [{ name: 'freeLift', label: 'Free lift', unit: 'kg', from: 0.42, to: 0.27 }],
+          engineVersion: { from: '0.1.0', to: '0.1.0' },
+        }}
+      />,
+    );
+    const inputs = screen.getByRole('table', { name: 'Changed inputs' });
+    expect(within(inputs).getByText('payloadMassKg')).toBeInTheDocument();
+    expect(within(inputs).getByText('0.35')).toBeInTheDocument();
+    const results = screen.getByRole('table', { name: 'Changed results' });
+    expect(within(results).getByText('Free lift')).toBeInTheDocument();
+    // Small masses show in grams: 0.42 kg -> 420.0 g.
+    expect(within(results).getByText('420.0 g')).toBeInTheDocument();
+    expect(within(results).getByText('270.0 g')).toBeInTheDocument();
+  });
+
+  it('says so when two versions are the same', () => {
+    renderWithProviders(
+      <VersionDiffView
+        unitSystem="si"
+        diff={{
+          from: 1,
+          to: 3,
+          inputs: [],
+          outputs: [],
+          engineVersion: { from: '0.1.0', to: '0.1.0' },
+        }}
+      />,
+    );
+    expect(
+      screen.getByText('Versions 1 and 3 have the same inputs and results.'),
+    ).toBeInTheDocument();
+  });
+});

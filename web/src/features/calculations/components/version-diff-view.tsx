@@ -1,0 +1,116 @@
+import { Empty, Table, Typography, theme } from 'antd';
+import type { UnitSystem } from '@loftwright/buoyancy';
+import { formatOutput } from '@/components/quantity/format-output';
+import type { VersionDiff } from '../api/calculations-api';
+
+const show = (value: unknown) =>
+  value === null || value === undefined
+    ? '—'
+    : typeof value === 'object'
+      ? JSON.stringify(value)
+      : String(value);
+
+/** Inputs and outputs that changed between two versions, side by side, the new value marked. */
+export function VersionDiffView({
+  diff,
+  unitSystem,
+}: {
+  diff: VersionDiff;
+  unitSystem: UnitSystem;
+}) {
+  const { token } = theme.useToken();
+  const changed = { background: token.colorWarningBg, fontWeight: 600 };
+  if (diff.inputs.length === 0 && diff.outputs.length === 0) {
+    return (
+      <Empty
+        description={`Versions ${diff.from} and ${diff.to} have the same inputs and results.`}
+      />
+    );
+  }
+  return (
+    <>
+      <Typography.Title level={5}>Inputs that changed</Typography.Title>
+      <Table
+        size="small"
+        pagination={false}
+        rowKey="path"
+        dataSource={diff.inputs}
+        aria-label="Changed inputs"
+        columns={[
+          {
+            title: 'Input',
+            dataIndex: 'path',
+            render: (path: string) => <span className="lw-mono">{path}</span>,
+          },
+          {
+            title: `Version ${diff.from}`,
+            dataIndex: 'from',
+            render: (value: unknown) => <span className="lw-mono">{show(value)}</span>,
+          },
+          {
+            title: `Version ${diff.to}`,
+            dataIndex: 'to',
+            render: (value: unknown) => (
+              <span className="lw-mono" style={changed}>
+                {show(value)}
+              </span>
+            ),
+          },
+        ]}
+      />
+      <Typography.Title level={5} style={{ marginTop: 16 }}>
+        Results that changed
+      </Typography.Title>
+      <Table
+        size="small"
+        pagination={false}
+        rowKey="name"
+        dataSource={diff.outputs}
+        aria-label="Changed results"
+        columns={[
+          { title: 'Result', dataIndex: 'label' },
+          {
+            title: `Version ${diff.from}`,
+            dataIndex: 'from',
+            render: (value: number | null, row) => (
+              <Value value={value} unit={row.unit} unitSystem={unitSystem} />
+            ),
+          },
+          {
+            title: `Version ${diff.to}`,
+            dataIndex: 'to',
+            render: (value: number | null, row) => (
+              <span style={changed}>
+                <Value value={value} unit={row.unit} unitSystem={unitSystem} />
+              </span>
+            ),
+          },
+        ]}
+      />
+      {diff.engineVersion.from !== diff.engineVersion.to ? (
+        <Typography.Paragraph type="secondary" style={{ marginTop: 8 }}>
+          Computed by engine {diff.engineVersion.from} and {diff.engineVersion.to}: part of the
+          change may come from the engine.
+        </Typography.Paragraph>
+      ) : null}
+    </>
+  );
+}
+
+function Value({
+  value,
+  unit,
+  unitSystem,
+}: {
+  value: number | null;
+  unit: string;
+  unitSystem: UnitSystem;
+}) {
+  if (value === null) return <>—</>;
+  const shown = formatOutput(value, unit, unitSystem);
+  return (
+    <span className="lw-mono">
+      {shown.value} {shown.unit}
+    </span>
+  );
+}
