@@ -36,6 +36,10 @@ export const routes: RouteObject[] = [
           import('./routes/password-reset').then((m) => ({ Component: m.ResetPasswordRoute })),
       },
       {
+        path: paths.verify.path,
+        lazy: () => import('./routes/verify').then((m) => ({ Component: m.VerifyRoute })),
+      },
+      {
         element: <RequireSignIn />,
         children: [
           {
@@ -43,6 +47,13 @@ export const routes: RouteObject[] = [
             lazy: () =>
               import('./routes/calculations/list').then((m) => ({
                 Component: m.CalculationsRoute,
+              })),
+          },
+          {
+            path: paths.sheet.path,
+            lazy: () =>
+              import('./routes/calculations/sheet').then((m) => ({
+                Component: m.SignOffSheetRoute,
               })),
           },
           {

@@ -11,4 +11,9 @@ export const paths = {
   calculations: { path: '/calculations', href: () => '/calculations' },
   calculation: { path: '/calculations/:id', href: (id: string) => `/calculations/${id}` },
   reviews: { path: '/reviews', href: () => '/reviews' },
+  sheet: {
+    path: '/calculations/:id/versions/:n/sheet',
+    href: (id: string, n: number) => `/calculations/${id}/versions/${n}/sheet`,
+  },
+  verify: { path: '/verify/:fingerprint', href: (fingerprint: string) => `/verify/${fingerprint}` },
 } as const;

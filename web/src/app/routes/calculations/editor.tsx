@@ -1,5 +1,6 @@
 import { Typography } from 'antd';
 import { useParams } from 'react-router-dom';
+import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/auth-api';
 import { useCalculation } from '@/features/calculations/api/calculations-api';
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
@@ -27,7 +28,10 @@ export function CalculationEditorRoute() {
       {calculation.data ? (
         <section aria-label="Versions" style={{ marginTop: 24 }}>
           <Typography.Title level={4}>Versions</Typography.Title>
-          <VersionHistory versions={calculation.data.versions} />
+          <VersionHistory
+            versions={calculation.data.versions}
+            sheetHref={(n) => paths.sheet.href(id, n)}
+          />
           <Typography.Title level={4} style={{ marginTop: 24 }}>
             Compare versions
           </Typography.Title>

@@ -1,9 +1,16 @@
 import { Table, Typography } from 'antd';
+import { Link } from 'react-router-dom';
 import type { VersionSummary } from '../api/calculations-api';
 import { StatusTag } from './status-tag';
 
 /** Every saved version, newest first, with its author, note, time, status and fingerprint. */
-export function VersionHistory({ versions }: { versions: readonly VersionSummary[] }) {
+export function VersionHistory({
+  versions,
+  sheetHref,
+}: {
+  versions: readonly VersionSummary[];
+  sheetHref: (number: number) => string;
+}) {
   return (
     <Table<VersionSummary>
       size="small"
@@ -11,6 +18,12 @@ export function VersionHistory({ versions }: { versions: readonly VersionSummary
       pagination={false}
       dataSource={[...versions].reverse()}
       columns={[
+        {
+          title: 'Sheet',
+          key: 'sheet',
+          dataIndex: 'number',
+          render: (number: number) => <Link to={sheetHref(number)}>Sign-off sheet</Link>,
+        },
         {
           title: 'Version',
           dataIndex: 'number',

@@ -1,0 +1,83 @@
+import { Alert, Descriptions, Spin, Table, Typography } from 'antd';
+import { useVerification } from '../api/sign-off-api';
+
+/** What the API says of a fingerprint: approved or not, by whom and when, and reproduced today. */
+export function VerifyResult({ fingerprint }: { fingerprint: string }) {
+  const verification = useVerification(fingerprint);
+  if (verification.isPending) return <Spin description="Checking the fingerprint…" />;
+  if (verification.error) return <Alert type="error" showIcon title={verification.error.message} />;
+  const answer = verification.data;
+  if (!answer.match) {
+    return (
+      <Alert
+        type="warning"
+        showIcon
+        title="No approved version has this fingerprint"
+        description="The sheet may be of a draft, altered, or from another installation."
+      />
+    );
+  }
+  return (
+    <>
+      <Alert
+        type={answer.reproduces ? 'success' : 'warning'}
+        showIcon
+        title={
+          answer.reproduces
+            ? 'Approved, and today’s engine gives the same results'
+            : 'Approved, but today’s engine gives different results'
+        }
+        style={{ marginBottom: 16 }}
+      />
+      <Descriptions column={1} bordered size="small">
+        <Descriptions.Item label="Calculation">{answer.calculation.title}</Descriptions.Item>
+        <Descriptions.Item label="Version">
+          <span className="lw-mono">v{answer.version}</span>
+        </Descriptions.Item>
+        <Descriptions.Item label="Approved by">
+          {answer.approvedBy?.displayName ?? 'unknown'}
+        </Descriptions.Item>
+        <Descriptions.Item label="Approved at">
+          {new Date(answer.approvedAt).toLocaleString()}
+        </Descriptions.Item>
+        <Descriptions.Item label="Comment">{answer.comment || '—'}</Descriptions.Item>
+        <Descriptions.Item label="Engine at approval / now">
+          <span className="lw-mono">
+            {answer.engineVersionAtApproval} / {answer.currentEngineVersion}
+          </span>
+        </Descriptions.Item>
+      </Descriptions>
+      {answer.differences.length > 0 ? (
+        <Table
+          style={{ marginTop: 16 }}
+          size="small"
+          rowKey="name"
+          pagination={false}
+          dataSource={answer.differences}
+          columns={[
+            { title: 'Result', dataIndex: 'name' },
+            {
+              title: 'Approved',
+              dataIndex: 'approved',
+              render: (value: number | null, row) => `${value ?? '—'} ${row.unit}`,
+            },
+            {
+              title: 'Recomputed now',
+              dataIndex: 'recomputed',
+              render: (value: number | null, row) => `${value ?? '—'} ${row.unit}`,
+            },
+          ]}
+        />
+      ) : null}
+      {answer.approvals.length > 1 ? (
+        <Typography.Paragraph style={{ marginTop: 16 }}>
+          The same content was approved {answer.approvals.length} times:{' '}
+          {answer.approvals
+            .map((approval) => `${approval.calculation.title} v${approval.version}`)
+            .join('; ')}
+          .
+        </Typography.Paragraph>
+      ) : null}
+    </>
+  );
+}
