@@ -17,6 +17,8 @@ import {
   type VersionDetail,
 } from '../api/calculations-api';
 import { DerivationPanel } from './derivation-panel';
+import { FlightChart } from './flight-chart';
+import { LiftChart } from './lift-chart';
 import { ResultsPanel } from './results-panel';
 import { SchemaField } from './schema-form';
 import { StatusTag } from './status-tag';
@@ -243,6 +245,14 @@ export function EditorBody({
               title={dirty ? 'Results (live, not saved)' : 'Results'}
               problem={live.problem}
             />
+            {live.result && deferredInputs ? (
+              <LiftChart
+                kind={kind}
+                inputs={deferredInputs as Record<string, unknown>}
+                unitSystem={unitSystem}
+              />
+            ) : null}
+            {live.result?.series ? <FlightChart series={live.result.series} /> : null}
           </div>
         </Col>
         <Col xs={24} lg={8}>
