@@ -122,6 +122,22 @@ describe('designer, reviewer and student in the browser', () => {
       .toBe(true);
   });
 
+  it('lets the admin see the users, the audit trail and the review mail in the outbox', async () => {
+    screenshotOnFailure(() => page, 'admin-pages');
+    await signOut();
+    await signIn('admin@demo.test');
+    await page.getByRole('menuitem', { name: 'Admin' }).click();
+    await expect
+      .poll(() => page.getByRole('cell', { name: 'designer@demo.test' }).isVisible())
+      .toBe(true);
+    await page.getByRole('tab', { name: 'Audit trail' }).click();
+    await expect.poll(() => page.getByText('version.approve').first().isVisible()).toBe(true);
+    await page.getByRole('tab', { name: 'Mail outbox' }).click();
+    await expect
+      .poll(() => page.getByText(/Review requested: Browser check sphere, version 2/).isVisible())
+      .toBe(true);
+  });
+
   it('logged no errors in the browser console', () => {
     expect(consoleErrors).toEqual([]);
   });

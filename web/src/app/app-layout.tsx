@@ -1,5 +1,11 @@
 import { Layout, Typography } from 'antd';
-import { AuditOutlined, ExperimentOutlined, LoginOutlined, TableOutlined } from '@ant-design/icons';
+import {
+  AuditOutlined,
+  ExperimentOutlined,
+  LoginOutlined,
+  SettingOutlined,
+  TableOutlined,
+} from '@ant-design/icons';
 import { Suspense } from 'react';
 import { Link, Outlet, useNavigate } from 'react-router-dom';
 import { NavRail, type NavItem } from '@/components/layout/nav-rail';
@@ -19,6 +25,9 @@ export function AppLayout() {
           { href: paths.calculations.href(), icon: <TableOutlined />, label: 'Calculations' },
           ...(user?.roles.includes('reviewer')
             ? [{ href: paths.reviews.href(), icon: <AuditOutlined />, label: 'Review queue' }]
+            : []),
+          ...(user?.roles.includes('admin')
+            ? [{ href: paths.admin.href(), icon: <SettingOutlined />, label: 'Admin' }]
             : []),
         ]
       : [{ href: paths.signIn.href(), icon: <LoginOutlined />, label: 'Sign in' }]),

@@ -57,6 +57,10 @@ export const routes: RouteObject[] = [
               })),
           },
           {
+            path: paths.admin.path,
+            lazy: () => import('./routes/admin').then((m) => ({ Component: m.AdminRoute })),
+          },
+          {
             path: paths.reviews.path,
             lazy: () => import('./routes/reviews').then((m) => ({ Component: m.ReviewsRoute })),
           },

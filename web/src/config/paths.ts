@@ -11,6 +11,7 @@ export const paths = {
   calculations: { path: '/calculations', href: () => '/calculations' },
   calculation: { path: '/calculations/:id', href: (id: string) => `/calculations/${id}` },
   reviews: { path: '/reviews', href: () => '/reviews' },
+  admin: { path: '/admin', href: () => '/admin' },
   sheet: {
     path: '/calculations/:id/versions/:n/sheet',
     href: (id: string, n: number) => `/calculations/${id}/versions/${n}/sheet`,
