@@ -1,4 +1,5 @@
 import { Alert, Button, Form, Input } from 'antd';
+import { FormError } from '@/components/errors/form-error';
 import { useConfirmReset, useRequestReset } from '../api/auth-api';
 
 export function ResetRequestForm() {
@@ -11,15 +12,7 @@ export function ResetRequestForm() {
       requiredMark={false}
       onFinish={(values: { email: string }) => request.mutate(values)}
     >
-      {request.error ? (
-        <Alert
-          type="error"
-          showIcon
-          title={request.error.message}
-          style={{ marginBottom: 16 }}
-          role="alert"
-        />
-      ) : null}
+      <FormError error={request.error} />
       <Form.Item
         label="E-mail"
         name="email"
@@ -44,15 +37,7 @@ export function ResetConfirmForm({ token, onDone }: { token: string; onDone: () 
         confirm.mutate({ token, password: values.password }, { onSuccess: onDone })
       }
     >
-      {confirm.error ? (
-        <Alert
-          type="error"
-          showIcon
-          title={confirm.error.message}
-          style={{ marginBottom: 16 }}
-          role="alert"
-        />
-      ) : null}
+      <FormError error={confirm.error} />
       <Form.Item
         label="New password"
         name="password"

@@ -1,4 +1,5 @@
-import { Alert, Button, Form, Input } from 'antd';
+import { Button, Form, Input } from 'antd';
+import { FormError } from '@/components/errors/form-error';
 import { useRegister } from '../api/auth-api';
 
 export function RegisterForm({ onRegistered }: { onRegistered: () => void }) {
@@ -11,15 +12,7 @@ export function RegisterForm({ onRegistered }: { onRegistered: () => void }) {
         register.mutate(values, { onSuccess: onRegistered })
       }
     >
-      {register.error ? (
-        <Alert
-          type="error"
-          showIcon
-          title={register.error.message}
-          style={{ marginBottom: 16 }}
-          role="alert"
-        />
-      ) : null}
+      <FormError error={register.error} />
       <Form.Item
         label="Name"
         name="displayName"

@@ -1,4 +1,5 @@
-import { Alert, Button, Form, Input } from 'antd';
+import { Button, Form, Input } from 'antd';
+import { FormError } from '@/components/errors/form-error';
 import { useSignIn } from '../api/auth-api';
 
 /** E-mail and password; on success the session starts and `onSignedIn` runs. */
@@ -12,15 +13,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         signIn.mutate(values, { onSuccess: onSignedIn })
       }
     >
-      {signIn.error ? (
-        <Alert
-          type="error"
-          showIcon
-          title={signIn.error.message}
-          style={{ marginBottom: 16 }}
-          role="alert"
-        />
-      ) : null}
+      <FormError error={signIn.error} />
       <Form.Item
         label="E-mail"
         name="email"
