@@ -1,6 +1,8 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { FIRST_ROUTE_BUDGET_BYTES, ROUTE_MODULES, routeJs } from '../web/scripts/route-js-size.mjs';
 import { launchBrowser, type Browser } from './support/browser.js';
+import { WEB_DIST } from './support/paths.js';
 import { startProduct, type RunningProduct } from './support/start-product.js';
 
 describe('the product, started as npm start starts it', () => {
@@ -82,5 +84,35 @@ describe('the product, started as npm start starts it', () => {
     await expect.poll(() => page.url()).toBe(`${product.baseUrl}/sign-in`);
     await page.reload();
     await expect.poll(() => page.getByRole('heading', { name: 'Sign in' }).isVisible()).toBe(true);
+  });
+
+  it('sends the first page in at most 350 kB of gzip JavaScript, as the build report says', async () => {
+    // A browser of its own: nothing cached from the tests before.
+    const own = await launchBrowser();
+    const fresh = await own.context.newPage();
+    const scripts: { url: string; bytes: Promise<number> }[] = [];
+    fresh.on('requestfinished', (request) => {
+      if (request.resourceType() !== 'script') return;
+      scripts.push({
+        url: request.url(),
+        bytes: request.sizes().then((sizes) => sizes.responseBodySize),
+      });
+    });
+    await fresh.goto(`${product.baseUrl}/`);
+    await expect.poll(() => fresh.getByText('Connected').isVisible()).toBe(true);
+    const sentBytes = (await Promise.all(scripts.map((script) => script.bytes))).reduce(
+      (sum, bytes) => sum + bytes,
+      0,
+    );
+    const home = ROUTE_MODULES['/ (home)'] ?? '';
+    const reported = routeJs(WEB_DIST, home);
+    expect(sentBytes).toBeLessThanOrEqual(FIRST_ROUTE_BUDGET_BYTES);
+    // The bench's figure is what the browser really fetched: the same files, the same size
+    // within what two gzip runs of the same level differ by.
+    expect(scripts.map((script) => new URL(script.url).pathname.slice(1)).sort()).toEqual(
+      [...reported.files].sort(),
+    );
+    expect(Math.abs(sentBytes / reported.gzipBytes - 1)).toBeLessThan(0.02);
+    await own.close();
   });
 });

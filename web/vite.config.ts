@@ -14,6 +14,8 @@ export default defineConfig({
   },
   server: { proxy: { '/api': apiTarget } },
   build: {
+    // dist/.vite/manifest.json: which chunks each route pulls in, for the first-route JS budget.
+    manifest: true,
     rolldownOptions: {
       output: {
         // React and the router change rarely: their own long-cached chunk. antd is left to the

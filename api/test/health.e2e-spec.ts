@@ -11,6 +11,10 @@ const apiManifest = JSON.parse(readFileSync(join(__dirname, '..', 'package.json'
   version: string;
 };
 
+// Well over compression's 1 kB threshold, and as repetitive as minified code.
+const BIG_ASSET =
+  'export const rows = [' + '{"altitudeM":1000,"pressurePa":89876},'.repeat(400) + '];';
+
 describe('GET /api/health', () => {
   let testApp: TestApp;
   let webDistDir: string;
@@ -20,6 +24,7 @@ describe('GET /api/health', () => {
     mkdirSync(join(webDistDir, 'assets'));
     writeFileSync(join(webDistDir, 'index.html'), '<!doctype html><title>web app fixture</title>');
     writeFileSync(join(webDistDir, 'assets', 'app-1234.js'), 'console.info("asset fixture");');
+    writeFileSync(join(webDistDir, 'assets', 'big-5678.js'), BIG_ASSET);
     testApp = await createTestApp({ webDistDir });
   });
 
@@ -76,6 +81,24 @@ describe('GET /api/health', () => {
       expect(response.status).toBe(200);
       expect(response.text).toContain('asset fixture');
       expect(response.headers['cache-control']).toContain('immutable');
+    });
+
+    it('sends assets gzip-compressed to a browser that accepts it', async () => {
+      const response = await request(testApp.app.getHttpServer())
+        .get('/assets/big-5678.js')
+        .set('Accept-Encoding', 'gzip');
+      expect(response.status).toBe(200);
+      expect(response.headers['content-encoding']).toBe('gzip');
+      // supertest inflates the body: what arrives is the file, byte for byte.
+      expect(response.text).toBe(BIG_ASSET);
+    });
+
+    it('sends assets as they are to a client that does not accept gzip', async () => {
+      const response = await request(testApp.app.getHttpServer())
+        .get('/assets/big-5678.js')
+        .set('Accept-Encoding', 'identity');
+      expect(response.headers['content-encoding']).toBeUndefined();
+      expect(Number(response.headers['content-length'])).toBe(BIG_ASSET.length);
     });
   });
 

@@ -6,7 +6,7 @@ import {
   type CalculationResult,
   type UnitSystem,
 } from '@loftwright/buoyancy';
-import { useDeferredValue, useEffect, useMemo, useState } from 'react';
+import { lazy, Suspense, useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { useBlocker } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client';
 import {
@@ -17,11 +17,15 @@ import {
   type VersionDetail,
 } from '../api/calculations-api';
 import { DerivationPanel } from './derivation-panel';
-import { FlightChart } from './flight-chart';
-import { LiftChart } from './lift-chart';
 import { ResultsPanel } from './results-panel';
 import { SchemaField } from './schema-form';
 import { StatusTag } from './status-tag';
+
+// The charting library is most of the editor's weight: the inputs and results come first, the
+// pictures a moment later.
+const CalculationCharts = lazy(() =>
+  import('../charts/calculation-charts').then((module) => ({ default: module.CalculationCharts })),
+);
 
 interface LiveResult {
   result?: CalculationResult;
@@ -238,22 +242,22 @@ export function EditorBody({
           </section>
         </Col>
         <Col xs={24} lg={8}>
-          <div style={{ position: 'sticky', top: 16 }}>
-            <ResultsPanel
-              result={live.result}
-              unitSystem={unitSystem}
-              title={dirty ? 'Results (live, not saved)' : 'Results'}
-              problem={live.problem}
-            />
-            {live.result && deferredInputs ? (
-              <LiftChart
+          <ResultsPanel
+            result={live.result}
+            unitSystem={unitSystem}
+            title={dirty ? 'Results (live, not saved)' : 'Results'}
+            problem={live.problem}
+          />
+          {live.result && deferredInputs ? (
+            <Suspense fallback={<Spin description="Drawing the charts…" />}>
+              <CalculationCharts
                 kind={kind}
                 inputs={deferredInputs as Record<string, unknown>}
+                result={live.result}
                 unitSystem={unitSystem}
               />
-            ) : null}
-            {live.result?.series ? <FlightChart series={live.result.series} /> : null}
-          </div>
+            </Suspense>
+          ) : null}
         </Col>
         <Col xs={24} lg={8}>
           <DerivationPanel steps={live.result?.steps ?? latest?.steps ?? []} />
