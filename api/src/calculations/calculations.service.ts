@@ -27,7 +27,7 @@ import type { ListCalculationsDto } from './dto/list-calculations.dto';
 import type { SaveVersionDto } from './dto/save-version.dto';
 import type { UpdateCalculationDto } from './dto/update-calculation.dto';
 import { computeVersionContent } from './version-content';
-import { diffInputs, diffOutputs } from './version-diff';
+import { diffInputs, diffOutputs } from '@loftwright/buoyancy';
 
 const SORT_COLUMNS: Record<string, string> = {
   updatedAt: 'calculation.updated_at',

@@ -80,3 +80,5 @@ export {
   DEFAULT_BALLOON_DRAG_COEFFICIENT,
   DEFAULT_PARACHUTE_DRAG_COEFFICIENT,
 } from './flight/drag-defaults.js';
+export { diffInputs, diffOutputs } from './compare/result-diff.js';
+export type { InputChange, OutputChange } from './compare/result-diff.js';

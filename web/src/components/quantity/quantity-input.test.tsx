@@ -18,6 +18,9 @@ function Harness({
   const [value, setValue] = useState<number | undefined>(initial);
   return (
     <>
+      <button type="button" onClick={() => setValue(2.5)}>
+        Replace from outside
+      </button>
       <QuantityInput
         label="Diameter"
         dimension={dimension}
@@ -72,5 +75,22 @@ describe('QuantityInput', () => {
     expect(screen.getByText(/is not a length/)).toBeInTheDocument();
     expect(field).toHaveAttribute('aria-invalid', 'true');
     expect(screen.getByLabelText('SI value')).toHaveTextContent('none');
+  });
+
+  it('shows a value set from outside (another version taken) instead of the old text', async () => {
+    const user = userEvent.setup();
+    renderWithProviders(<Harness dimension="length" initial={1} />);
+    const field = screen.getByLabelText('Diameter');
+    await user.clear(field);
+    await user.type(field, '150 cm');
+    expect(field).toHaveValue('150 cm');
+    await user.click(screen.getByRole('button', { name: 'Replace from outside' }));
+    expect(field).toHaveValue('2.5 m');
+    expect(screen.getByText('read as 2.500 m')).toBeInTheDocument();
+    // Typing again is read as before, and is not overwritten.
+    await user.clear(field);
+    await user.type(field, '90 cm');
+    expect(field).toHaveValue('90 cm');
+    expect(screen.getByLabelText('SI value')).toHaveTextContent('0.9');
   });
 });

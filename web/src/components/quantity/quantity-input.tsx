@@ -60,6 +60,20 @@ export function QuantityInput({
     setDefaultUnit(unitShown(unitSystem));
   }
 
+  // The value this field last reported. A different value arriving from outside (another
+  // version taken after a conflict, a reset) replaces the text; the user's own typing never does.
+  const [reported, setReported] = useState(value);
+  if (value !== reported) {
+    setReported(value);
+    setText(display(value, dimension, unitSystem));
+    setProblem(undefined);
+    setDefaultUnit(unitShown(unitSystem));
+  }
+  const report = (valueSI: number | undefined) => {
+    setReported(valueSI);
+    onChange(valueSI);
+  };
+
   const read = (next: string) => {
     setText(next);
     try {
@@ -70,11 +84,11 @@ export function QuantityInput({
           ? parseQuantity(bareNumber ? `${next} %` : next, dimension, { field: label })
           : parseQuantity(next, dimension, { field: label, defaultUnit });
       setProblem(undefined);
-      onChange(parsed);
+      report(parsed);
     } catch (error) {
       if (!(error instanceof InputError)) throw error;
       setProblem(error.reason);
-      onChange(undefined);
+      report(undefined);
     }
   };
 

@@ -16,6 +16,7 @@ import {
   useSubmitVersion,
   type VersionDetail,
 } from '../api/calculations-api';
+import { ConflictDialog, type SaveConflict } from './conflict-dialog';
 import { DerivationPanel } from './derivation-panel';
 import { ResultsPanel } from './results-panel';
 import { SchemaField } from './schema-form';
@@ -107,7 +108,7 @@ export function EditorBody({
   const [inputs, setInputs] = useState<unknown>(() => latest?.inputs);
   const [savedInputs, setSavedInputs] = useState<string>(() => JSON.stringify(latest?.inputs));
   const [note, setNote] = useState('');
-  const [conflict, setConflict] = useState<{ latest: VersionDetail; mine: unknown } | null>(null);
+  const [conflict, setConflict] = useState<SaveConflict | null>(null);
 
   const deferredInputs = useDeferredValue(inputs);
   const kind = detail.kind;
@@ -263,49 +264,23 @@ export function EditorBody({
           <DerivationPanel steps={live.result?.steps ?? latest?.steps ?? []} />
         </Col>
       </Row>
-      <Modal
-        open={conflict !== null}
-        title="Someone saved a newer version while you were editing"
-        onCancel={() => setConflict(null)}
-        footer={
-          conflict
-            ? [
-                <Button
-                  key="theirs"
-                  onClick={() => {
-                    setInputs(conflict.latest.inputs);
-                    setSavedInputs(JSON.stringify(conflict.latest.inputs));
-                    setConflict(null);
-                    refetch();
-                  }}
-                >
-                  Take version {conflict.latest.number}
-                </Button>,
-                <Button
-                  key="mine"
-                  type="primary"
-                  onClick={() => doSave(conflict.latest.number, conflict.mine)}
-                >
-                  Keep mine as version {conflict.latest.number + 1}
-                </Button>,
-              ]
-            : null
-        }
-      >
-        {conflict ? (
-          <>
-            <Typography.Paragraph>
-              Version {conflict.latest.number} by {conflict.latest.author?.displayName ?? 'someone'}{' '}
-              landed first. Your inputs are kept: save them on top of it, or take theirs.
-            </Typography.Paragraph>
-            <Typography.Text strong>Their free lift or first result: </Typography.Text>
-            <Typography.Text className="lw-mono">
-              {Object.values(conflict.latest.outputs)[0]?.value.toPrecision(5)}{' '}
-              {Object.values(conflict.latest.outputs)[0]?.unit}
-            </Typography.Text>
-          </>
-        ) : null}
-      </Modal>
+      <ConflictDialog
+        kind={kind}
+        conflict={conflict}
+        unitSystem={unitSystem}
+        saving={save.isPending}
+        onClose={() => setConflict(null)}
+        onTakeTheirs={() => {
+          if (!conflict) return;
+          setInputs(conflict.latest.inputs);
+          setSavedInputs(JSON.stringify(conflict.latest.inputs));
+          setConflict(null);
+          refetch();
+        }}
+        onKeepMine={() => {
+          if (conflict) doSave(conflict.latest.number, conflict.mine);
+        }}
+      />
       <Modal
         open={blocker.state === 'blocked'}
         title="Leave without saving?"

@@ -14,16 +14,20 @@ const show = (value: unknown) =>
 export function VersionDiffView({
   diff,
   unitSystem,
+  titles,
 }: {
   diff: VersionDiff;
   unitSystem: UnitSystem;
+  /** Column headings for the two sides; versions by number unless told otherwise. */
+  titles?: { from: string; to: string };
 }) {
   const { token } = theme.useToken();
+  const headings = titles ?? { from: `Version ${diff.from}`, to: `Version ${diff.to}` };
   const changed = { background: token.colorWarningBg, fontWeight: 600 };
   if (diff.inputs.length === 0 && diff.outputs.length === 0) {
     return (
       <Empty
-        description={`Versions ${diff.from} and ${diff.to} have the same inputs and results.`}
+        description={`${titles ? `${titles.from} and ${titles.to}` : `Versions ${diff.from} and ${diff.to}`} have the same inputs and results.`}
       />
     );
   }
@@ -43,12 +47,12 @@ export function VersionDiffView({
             render: (path: string) => <span className="lw-mono">{path}</span>,
           },
           {
-            title: `Version ${diff.from}`,
+            title: headings.from,
             dataIndex: 'from',
             render: (value: unknown) => <span className="lw-mono">{show(value)}</span>,
           },
           {
-            title: `Version ${diff.to}`,
+            title: headings.to,
             dataIndex: 'to',
             render: (value: unknown) => (
               <span className="lw-mono" style={changed}>
@@ -70,14 +74,14 @@ export function VersionDiffView({
         columns={[
           { title: 'Result', dataIndex: 'label' },
           {
-            title: `Version ${diff.from}`,
+            title: headings.from,
             dataIndex: 'from',
             render: (value: number | null, row) => (
               <Value value={value} unit={row.unit} unitSystem={unitSystem} />
             ),
           },
           {
-            title: `Version ${diff.to}`,
+            title: headings.to,
             dataIndex: 'to',
             render: (value: number | null, row) => (
               <span style={changed}>

@@ -1,3 +1,6 @@
+// Compares two calculations' inputs and results: the API's version diff and the editor's
+// conflict dialog show the same changes.
+
 export interface InputChange {
   path: string;
   from: unknown;
