@@ -19,7 +19,15 @@ export function CalculationsRoute() {
           <NewCalculationButton onCreated={(id) => void navigate(paths.calculation.href(id))} />
         ) : null}
       </Space>
-      <CalculationsTable calculationHref={paths.calculation.href} />
+      <CalculationsTable
+        calculationHref={paths.calculation.href}
+        sheetHref={paths.sheet.href}
+        mayArchive={(row) =>
+          Boolean(user && (user.roles.includes('admin') || row.owner?.id === user.id))
+        }
+        mayDuplicate={mayCreate}
+        onDuplicated={(id) => void navigate(paths.calculation.href(id))}
+      />
     </>
   );
 }

@@ -106,6 +106,36 @@ export function useCreateCalculation() {
   });
 }
 
+/** Archives (the API never deletes): the calculation leaves the lists, its versions stay. */
+export function useArchiveCalculation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (id: string) => {
+      await apiClient.delete(`/calculations/${id}`);
+    },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations'] }),
+  });
+}
+
+/** A new draft calculation of the same kind, starting from another one's latest inputs. */
+export function useDuplicateCalculation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (id: string) => {
+      const source = await queryClient.fetchQuery(calculationQueryOptions(id));
+      const body = {
+        title: `${source.title} (copy)`.slice(0, 200),
+        kind: source.kind,
+        inputs: source.latest?.inputs ?? {},
+        tags: source.tags,
+        note: `Copied from “${source.title}”, version ${source.latestVersion}`,
+      };
+      return (await apiClient.post<CalculationDetail>('/calculations', body)).data;
+    },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations', 'list'] }),
+  });
+}
+
 export function useSaveVersion(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
@@ -125,7 +155,7 @@ export function useSubmitVersion(id: string) {
   });
 }
 
-/** GET .../versions/:a/diff/:b (api/src/calculations/version-diff.ts). */
+/** GET .../versions/:a/diff/:b (diffInputs/diffOutputs of @loftwright/buoyancy). */
 export interface VersionDiff {
   from: number;
   to: number;

@@ -1,10 +1,16 @@
-import { Input, Select, Space, Table, Tag, Typography } from 'antd';
+import { App, Button, Input, Popconfirm, Select, Space, Table, Tag, Typography } from 'antd';
 import type { TablePaginationConfig } from 'antd';
 import type { SorterResult } from 'antd/es/table/interface';
 import { KINDS } from '@loftwright/buoyancy';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { type CalculationSummary, type ListParams, useCalculations } from '../api/calculations-api';
+import {
+  type CalculationSummary,
+  type ListParams,
+  useArchiveCalculation,
+  useCalculations,
+  useDuplicateCalculation,
+} from '../api/calculations-api';
 import { StatusTag } from './status-tag';
 
 const KIND_TITLES = new Map(KINDS.map((kind) => [kind.id, kind.title]));
@@ -18,9 +24,21 @@ const STATUS_OPTIONS = [
 /** Server-side paged, sorted and filtered list of the calculations the user may see. */
 export function CalculationsTable({
   calculationHref,
+  sheetHref,
+  mayArchive,
+  mayDuplicate,
+  onDuplicated,
 }: {
   calculationHref: (id: string) => string;
+  sheetHref: (id: string, version: number) => string;
+  /** Whether the signed-in user may archive this one (its owner, or an admin). */
+  mayArchive: (row: CalculationSummary) => boolean;
+  mayDuplicate: boolean;
+  onDuplicated: (id: string) => void;
 }) {
+  const { message } = App.useApp();
+  const archive = useArchiveCalculation();
+  const duplicate = useDuplicateCalculation();
   const [params, setParams] = useState<ListParams>({ page: 1, pageSize: 20, sort: '-updatedAt' });
   const { data, isFetching, error } = useCalculations(params);
   const set = (changes: Partial<ListParams>) =>
@@ -144,6 +162,54 @@ export function CalculationsTable({
             sorter: true,
             defaultSortOrder: 'descend',
             render: (at: string) => new Date(at).toLocaleString(),
+          },
+          {
+            title: 'Actions',
+            key: 'actions',
+            render: (_: unknown, row) => (
+              <Space size={0} wrap>
+                <Link
+                  to={sheetHref(row.id, row.latestVersion)}
+                  aria-label={`Sign-off sheet of ${row.title}`}
+                >
+                  Sheet
+                </Link>
+                {mayDuplicate ? (
+                  <Button
+                    type="link"
+                    size="small"
+                    aria-label={`Duplicate ${row.title}`}
+                    loading={duplicate.isPending && duplicate.variables === row.id}
+                    onClick={() =>
+                      duplicate.mutate(row.id, {
+                        onSuccess: (copy) => onDuplicated(copy.id),
+                        onError: (failure) => void message.error(failure.message),
+                      })
+                    }
+                  >
+                    Duplicate
+                  </Button>
+                ) : null}
+                {mayArchive(row) ? (
+                  <Popconfirm
+                    title={`Archive “${row.title}”?`}
+                    description="It leaves the lists; its versions and sign-offs stay verifiable."
+                    okText="Archive"
+                    cancelText="Keep"
+                    onConfirm={() =>
+                      archive.mutateAsync(row.id).then(
+                        () => void message.success(`Archived “${row.title}”.`),
+                        (failure: Error) => void message.error(failure.message),
+                      )
+                    }
+                  >
+                    <Button type="link" size="small" danger aria-label={`Archive ${row.title}`}>
+                      Archive
+                    </Button>
+                  </Popconfirm>
+                ) : null}
+              </Space>
+            ),
           },
         ]}
       />

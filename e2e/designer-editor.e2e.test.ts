@@ -21,7 +21,7 @@ interface Version {
   inputs: typeof FIRST_INPUTS;
 }
 
-describe('the editor when someone else saves first, and when leaving with unsaved changes', () => {
+describe('a designer’s editor and list: stale saves, unsaved changes, units, quick actions', () => {
   let product: RunningProduct;
   let browser: Browser;
   let page: Page;
@@ -163,6 +163,29 @@ describe('the editor when someone else saves first, and when leaving with unsave
     await expect
       .poll(() => page.locator('[data-output="netLift"]').textContent())
       .toMatch(/\d (kg|g)/);
+  });
+
+  it('duplicates a calculation from the list and archives the copy', async () => {
+    screenshotOnFailure(() => page, 'list-quick-actions');
+    await page.goto(`${product.baseUrl}/calculations`);
+    await page.getByRole('button', { name: 'Duplicate Conflict check sphere' }).click();
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'Conflict check sphere (copy)' }).isVisible())
+      .toBe(true);
+    expect(page.url()).not.toContain(calculationId);
+
+    await page.getByRole('menuitem', { name: 'Calculations' }).click();
+    await page.getByRole('button', { name: 'Archive Conflict check sphere (copy)' }).click();
+    await page.getByRole('tooltip').getByRole('button', { name: 'Archive' }).click();
+    await expect
+      .poll(() => page.getByText('Archived “Conflict check sphere (copy)”.').isVisible())
+      .toBe(true);
+    await expect
+      .poll(() => page.getByRole('link', { name: 'Conflict check sphere (copy)' }).count())
+      .toBe(0);
+    expect(
+      await page.getByRole('link', { name: 'Conflict check sphere', exact: true }).count(),
+    ).toBe(1);
   });
 
   it('logged no console errors', () => {
