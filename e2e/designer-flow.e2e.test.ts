@@ -45,7 +45,7 @@ describe('designer, reviewer and student in the browser', () => {
     screenshotOnFailure(() => page, 'designer-sign-in');
     await signIn('designer@demo.test');
     await expect
-      .poll(() => page.getByRole('link', { name: /Curlew air-sampling pod/ }).isVisible())
+      .poll(() => page.getByRole('link', { name: /^Curlew air-sampling pod/ }).isVisible())
       .toBe(true);
     // The session survives a reload.
     await page.reload();

@@ -86,6 +86,13 @@ export class EnvironmentVariables {
   @Max(10000)
   LOGIN_RATE_LIMIT: number = 10;
 
+  /** Largest upload accepted, in bytes (photos, logger CSV files, PDFs); 20 MB by default. */
+  @Type(() => Number)
+  @IsInt()
+  @Min(1024)
+  @Max(1024 * 1024 * 1024)
+  UPLOAD_MAX_BYTES: number = 20 * 1024 * 1024;
+
   /** Origins allowed to call the API from another site, comma-separated; none by default. */
   @IsOptional()
   @IsString()

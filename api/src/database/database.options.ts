@@ -1,6 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { DataSourceOptions } from 'typeorm';
+import { Attachment } from '../attachments/attachment.entity';
 import { AuditEntry } from '../audit/audit-entry.entity';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
 import { CalculationVersion } from '../calculations/calculation-version.entity';
@@ -11,6 +12,7 @@ import { Review } from '../reviews/review.entity';
 import { User } from '../users/user.entity';
 import { InitSchema1764633600000 } from './migrations/1764633600000-init-schema';
 import { AccountsCalculationsReviews1764640800000 } from './migrations/1764640800000-accounts-calculations-reviews';
+import { Attachments1764720000000 } from './migrations/1764720000000-attachments';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -23,8 +25,13 @@ export const ENTITIES = [
   Review,
   AuditEntry,
   OutboxMessage,
+  Attachment,
 ];
-export const MIGRATIONS = [InitSchema1764633600000, AccountsCalculationsReviews1764640800000];
+export const MIGRATIONS = [
+  InitSchema1764633600000,
+  AccountsCalculationsReviews1764640800000,
+  Attachments1764720000000,
+];
 
 /**
  * TypeORM options for the SQLite file under `dataDir`. Schema changes come only from migrations,

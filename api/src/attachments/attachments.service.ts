@@ -1,0 +1,189 @@
+import {
+  ForbiddenException,
+  Injectable,
+  NotFoundException,
+  UnsupportedMediaTypeException,
+  BadRequestException,
+} from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { randomUUID } from 'node:crypto';
+import { In, Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service';
+import { type AuthUser, hasRole } from '../auth/auth-user';
+import { canEdit } from '../calculations/calculation-access';
+import { CalculationsService } from '../calculations/calculations.service';
+import { insertRow } from '../database/insert-row';
+import { WriteLock } from '../database/write-lock';
+import { User } from '../users/user.entity';
+import { Attachment } from './attachment.entity';
+import { attachmentView, type AttachmentView } from './attachment-views';
+import { cleanFileName } from './file-name';
+import { sniffMediaType } from './media-type';
+import { UploadStore } from './upload-store';
+
+export interface UploadedFileLike {
+  buffer: Buffer;
+  originalname?: string;
+  size: number;
+}
+
+@Injectable()
+export class AttachmentsService {
+  constructor(
+    @InjectRepository(Attachment) private readonly attachments: Repository<Attachment>,
+    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly calculations: CalculationsService,
+    private readonly store: UploadStore,
+    private readonly audit: AuditService,
+    private readonly writeLock: WriteLock,
+  ) {}
+
+  private async views(rows: Attachment[]): Promise<AttachmentView[]> {
+    const ids = [...new Set(rows.map((row) => row.uploadedBy).filter((id) => id !== null))];
+    const people = ids.length > 0 ? await this.users.findBy({ id: In(ids) }) : [];
+    const byId = new Map(
+      people.map((user) => [user.id, { id: user.id, displayName: user.displayName }]),
+    );
+    return rows.map((row) =>
+      attachmentView(row, row.uploadedBy ? (byId.get(row.uploadedBy) ?? null) : null),
+    );
+  }
+
+  async upload(
+    user: AuthUser,
+    calculationId: string,
+    file: UploadedFileLike | undefined,
+    fillLogId: string | null = null,
+  ): Promise<AttachmentView> {
+    const calculation = await this.calculations.findReadable(user, calculationId);
+    if (!canEdit(user, calculation) && !hasRole(user, 'admin')) {
+      throw new ForbiddenException({
+        message: 'Only the calculation’s owner or an admin adds files to it.',
+      });
+    }
+    if (!file || file.size === 0) {
+      throw new BadRequestException({
+        message: 'file is required: send it as multipart/form-data in the field "file".',
+        field: 'file',
+      });
+    }
+    const sniffed = await sniffMediaType(file.buffer);
+    if (!sniffed.ok) {
+      throw new UnsupportedMediaTypeException({
+        message: `file ${sniffed.reason}.`,
+        field: 'file',
+      });
+    }
+    return this.store_(user, calculationId, file.buffer, {
+      fileName: cleanFileName(file.originalname),
+      mediaType: sniffed.mediaType,
+      fillLogId,
+      versionNumber: null,
+    });
+  }
+
+  /** Stores bytes the server made itself (the archived sign-off PDF). */
+  async storeGenerated(
+    actorId: string | null,
+    calculationId: string,
+    bytes: Buffer,
+    meta: { fileName: string; mediaType: string; versionNumber: number },
+  ): Promise<AttachmentView> {
+    return this.store_(actorId ? ({ id: actorId } as AuthUser) : null, calculationId, bytes, {
+      ...meta,
+      fillLogId: null,
+    });
+  }
+
+  private async store_(
+    user: Pick<AuthUser, 'id'> | null,
+    calculationId: string,
+    bytes: Buffer,
+    meta: {
+      fileName: string;
+      mediaType: string;
+      fillLogId: string | null;
+      versionNumber: number | null;
+    },
+  ): Promise<AttachmentView> {
+    // The file goes down first: a crash in between leaves an unreferenced file, never a row
+    // pointing at nothing.
+    const sha256 = await this.store.put(bytes);
+    const id = randomUUID();
+    await this.writeLock.run(() =>
+      insertRow(this.attachments, {
+        id,
+        calculationId,
+        fillLogId: meta.fillLogId,
+        versionNumber: meta.versionNumber,
+        sha256,
+        sizeBytes: bytes.length,
+        mediaType: meta.mediaType,
+        fileName: meta.fileName,
+        uploadedBy: user?.id ?? null,
+      }),
+    );
+    await this.audit.record({
+      actorId: user?.id ?? null,
+      action: 'attachment.add',
+      targetType: 'calculation',
+      targetId: calculationId,
+      detail: { attachmentId: id, fileName: meta.fileName, mediaType: meta.mediaType, sha256 },
+    });
+    const found = await this.attachments.findOneByOrFail({ id });
+    return (await this.views([found]))[0] as AttachmentView;
+  }
+
+  async list(user: AuthUser, calculationId: string, fillLogId?: string): Promise<AttachmentView[]> {
+    await this.calculations.findReadable(user, calculationId);
+    const rows = await this.attachments.find({
+      where: { calculationId, ...(fillLogId ? { fillLogId } : {}) },
+      order: { createdAt: 'ASC' },
+    });
+    return this.views(rows);
+  }
+
+  /** The attachment if its calculation is readable by the user; otherwise 404. */
+  async findReadable(user: AuthUser, id: string): Promise<Attachment> {
+    const attachment = await this.attachments.findOneBy({ id });
+    if (!attachment) throw new NotFoundException({ message: 'No such file.', field: 'id' });
+    try {
+      await this.calculations.findReadable(user, attachment.calculationId);
+    } catch {
+      throw new NotFoundException({ message: 'No such file.', field: 'id' });
+    }
+    return attachment;
+  }
+
+  async content(user: AuthUser, id: string) {
+    const attachment = await this.findReadable(user, id);
+    if (!this.store.exists(attachment.sha256)) {
+      throw new NotFoundException({ message: 'The stored file is missing.', field: 'id' });
+    }
+    return { attachment, stream: this.store.read(attachment.sha256) };
+  }
+
+  async remove(user: AuthUser, id: string): Promise<void> {
+    const attachment = await this.findReadable(user, id);
+    if (attachment.uploadedBy !== user.id && !hasRole(user, 'admin')) {
+      throw new ForbiddenException({ message: 'Only the uploader or an admin removes a file.' });
+    }
+    if (attachment.versionNumber !== null && !hasRole(user, 'admin')) {
+      throw new ForbiddenException({
+        message: 'The archived sign-off of an approved version stays; only an admin removes it.',
+      });
+    }
+    const stillUsed = await this.writeLock.run(async () => {
+      await this.attachments.delete({ id });
+      return this.attachments.countBy({ sha256: attachment.sha256 });
+    });
+    if (stillUsed === 0) await this.store.remove(attachment.sha256);
+    await this.audit.record({
+      actorId: user.id,
+      action: 'attachment.remove',
+      targetType: 'calculation',
+      targetId: attachment.calculationId,
+      detail: { attachmentId: id, fileName: attachment.fileName },
+    });
+  }
+}
