@@ -4,8 +4,11 @@
  */
 export function cleanFileName(original: string | undefined): string {
   const base = (original ?? '').split(/[/\\]/).pop() ?? '';
-  const cleaned = base
-    .replace(/[\u0000-\u001f\u007f"]/g, '')
+  const cleaned = [...base]
+    .filter(
+      (character) => character.charCodeAt(0) >= 32 && character !== '\u007f' && character !== '"',
+    )
+    .join('')
     .replace(/^\.+/, '')
     .trim()
     .slice(0, 200);
