@@ -96,7 +96,7 @@ describe('designer, reviewer and student in the browser', () => {
     await signOut();
     await signIn('reviewer@demo.test');
     await page.getByRole('menuitem', { name: 'Review queue' }).click();
-    await page.getByRole('link', { name: 'Browser check sphere' }).click();
+    await page.getByRole('link', { name: 'Browser check sphere', exact: true }).click();
     await expect.poll(() => page.url()).toBe(submittedUrl);
     await page.getByLabel('Review comment').fill('Size checked against the envelope drawing.');
     await page.getByRole('button', { name: 'Approve' }).click();

@@ -1,6 +1,7 @@
 import { Typography } from 'antd';
 import { useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
+import { AttachmentsPanel } from '@/features/attachments/components/attachments-panel';
 import { useMe } from '@/features/auth/api/auth-api';
 import { useCalculation } from '@/features/calculations/api/calculations-api';
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
@@ -25,6 +26,16 @@ export function CalculationEditorRoute() {
     <>
       {mayReview ? <ReviewDecision calculationId={id} number={latest.number} /> : null}
       <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />
+      {calculation.data && user ? (
+        <AttachmentsPanel
+          calculationId={id}
+          canUpload={calculation.data.permissions.edit || user.roles.includes('admin')}
+          canRemove={(file) =>
+            user.roles.includes('admin') ||
+            (file.uploadedBy?.id === user.id && file.versionNumber === null)
+          }
+        />
+      ) : null}
       {calculation.data ? (
         <section aria-label="Versions" style={{ marginTop: 24 }}>
           <Typography.Title level={4}>Versions</Typography.Title>
