@@ -9,6 +9,7 @@ import { EnvironmentVariables, validateEnvironment } from './config/env.validati
 import { DatabaseModule } from './database/database.module';
 import { buildDataSourceOptions } from './database/database.options';
 import { EvaluateModule } from './evaluate/evaluate.module';
+import { FillLogsModule } from './fill-logs/fill-logs.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { ReviewsModule } from './reviews/reviews.module';
@@ -31,6 +32,7 @@ import { UsersModule } from './users/users.module';
     CalculationsModule,
     ReviewsModule,
     AttachmentsModule,
+    FillLogsModule,
     EvaluateModule,
     HealthModule,
     SeedModule,

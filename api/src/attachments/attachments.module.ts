@@ -5,6 +5,7 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { memoryStorage } from 'multer';
 import { CalculationsModule } from '../calculations/calculations.module';
 import type { EnvironmentVariables } from '../config/env.validation';
+import { FillLog } from '../fill-logs/fill-log.entity';
 import { User } from '../users/user.entity';
 import { Attachment } from './attachment.entity';
 import { AttachmentsController } from './attachments.controller';
@@ -14,7 +15,7 @@ import { UploadStore } from './upload-store';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Attachment, User]),
+    TypeOrmModule.forFeature([Attachment, User, FillLog]),
     CalculationsModule,
     // Uploads are held in memory while their content is checked and hashed; the size limit
     // keeps that bounded.

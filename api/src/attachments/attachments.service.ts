@@ -14,6 +14,7 @@ import { canEdit } from '../calculations/calculation-access';
 import { CalculationsService } from '../calculations/calculations.service';
 import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
+import { FillLog } from '../fill-logs/fill-log.entity';
 import { User } from '../users/user.entity';
 import { Attachment } from './attachment.entity';
 import { attachmentView, type AttachmentView } from './attachment-views';
@@ -32,6 +33,7 @@ export class AttachmentsService {
   constructor(
     @InjectRepository(Attachment) private readonly attachments: Repository<Attachment>,
     @InjectRepository(User) private readonly users: Repository<User>,
+    @InjectRepository(FillLog) private readonly fillLogs: Repository<FillLog>,
     private readonly calculations: CalculationsService,
     private readonly store: UploadStore,
     private readonly audit: AuditService,
@@ -65,6 +67,12 @@ export class AttachmentsService {
       throw new BadRequestException({
         message: 'file is required: send it as multipart/form-data in the field "file".',
         field: 'file',
+      });
+    }
+    if (fillLogId && !(await this.fillLogs.existsBy({ id: fillLogId, calculationId }))) {
+      throw new NotFoundException({
+        message: 'fillLogId is not a fill log of this calculation.',
+        field: 'fillLogId',
       });
     }
     const sniffed = await sniffMediaType(file.buffer);
@@ -185,5 +193,17 @@ export class AttachmentsService {
       targetId: attachment.calculationId,
       detail: { attachmentId: id, fileName: attachment.fileName },
     });
+  }
+
+  /** A fill log's files go with it; stored bytes stay while another record uses them. */
+  async removeForFillLog(fillLogId: string): Promise<void> {
+    const rows = await this.attachments.findBy({ fillLogId });
+    for (const row of rows) {
+      const stillUsed = await this.writeLock.run(async () => {
+        await this.attachments.delete({ id: row.id });
+        return this.attachments.countBy({ sha256: row.sha256 });
+      });
+      if (stillUsed === 0) await this.store.remove(row.sha256);
+    }
   }
 }

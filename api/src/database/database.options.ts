@@ -6,6 +6,7 @@ import { AuditEntry } from '../audit/audit-entry.entity';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
 import { CalculationVersion } from '../calculations/calculation-version.entity';
 import { Calculation } from '../calculations/calculation.entity';
+import { FillLog } from '../fill-logs/fill-log.entity';
 import { Installation } from '../health/installation.entity';
 import { OutboxMessage } from '../mail/outbox-message.entity';
 import { Review } from '../reviews/review.entity';
@@ -13,6 +14,7 @@ import { User } from '../users/user.entity';
 import { InitSchema1764633600000 } from './migrations/1764633600000-init-schema';
 import { AccountsCalculationsReviews1764640800000 } from './migrations/1764640800000-accounts-calculations-reviews';
 import { Attachments1764720000000 } from './migrations/1764720000000-attachments';
+import { FillLogs1764723600000 } from './migrations/1764723600000-fill-logs';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -26,11 +28,13 @@ export const ENTITIES = [
   AuditEntry,
   OutboxMessage,
   Attachment,
+  FillLog,
 ];
 export const MIGRATIONS = [
   InitSchema1764633600000,
   AccountsCalculationsReviews1764640800000,
   Attachments1764720000000,
+  FillLogs1764723600000,
 ];
 
 /**

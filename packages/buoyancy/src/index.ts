@@ -82,3 +82,10 @@ export {
 } from './flight/drag-defaults.js';
 export { diffInputs, diffOutputs } from './compare/result-diff.js';
 export type { InputChange, OutputChange } from './compare/result-diff.js';
+export { fillDesignFromVersion, reduceFillLog } from './measurement/fill-log.js';
+export type {
+  FillAmbient,
+  FillDesign,
+  FillLogReduction,
+  FillReading,
+} from './measurement/fill-log.js';

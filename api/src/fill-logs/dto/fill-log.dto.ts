@@ -1,0 +1,91 @@
+import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsIn,
+  IsISO8601,
+  IsNumber,
+  IsObject,
+  IsOptional,
+  IsString,
+  MaxLength,
+  ValidateNested,
+} from 'class-validator';
+
+export const GAS_SOURCES = ['electrolysis', 'cylinder', 'delivered', 'other'] as const;
+
+export class FillAmbientDto {
+  @ApiProperty({ description: 'air temperature at the fill [K]', example: 287.2 })
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  temperatureK: number;
+
+  @ApiProperty({ description: 'absolute air pressure [Pa]', example: 100900 })
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  pressurePa: number;
+
+  @ApiPropertyOptional({ description: 'relative humidity, 0 to 1', example: 0.72 })
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  relativeHumidity?: number;
+}
+
+export class CreateFillLogDto {
+  @ApiProperty({ example: '2026-11-28T09:40:00Z' })
+  @IsISO8601({ strict: true }, { message: 'filledAt must be a date and time (ISO 8601)' })
+  filledAt: string;
+
+  @ApiPropertyOptional({ example: 'Saltmarsh dyke, north hut' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(200)
+  place?: string;
+
+  @ApiPropertyOptional({ example: 'Envelope 3 (orange)' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(200)
+  envelopeLabel?: string;
+
+  @ApiProperty({ enum: GAS_SOURCES })
+  @IsIn(GAS_SOURCES, { message: `gasSource must be one of: ${GAS_SOURCES.join(', ')}` })
+  gasSource: string;
+
+  @ApiProperty({ type: FillAmbientDto })
+  @ValidateNested()
+  @Type(() => FillAmbientDto)
+  ambient: FillAmbientDto;
+
+  @ApiProperty({
+    description:
+      'lift readings: { kind: "ballast", timeS, ballastMassKg, scaleReadingKg } or { kind: "direct", timeS, netLiftKg }, each with optional airTemperatureK and pressurePa',
+  })
+  @IsArray()
+  @ArrayMinSize(1, { message: 'readings needs at least one reading' })
+  @ArrayMaxSize(1000)
+  @IsObject({ each: true, message: 'each reading must be an object' })
+  readings: Record<string, unknown>[];
+
+  @ApiPropertyOptional()
+  @IsOptional()
+  @IsString()
+  @MaxLength(2000)
+  note?: string;
+}
+
+export class UpdateFillLogDto extends PartialType(CreateFillLogDto) {}
+
+/** Readings from an import, checked all together and stored in one write, or not at all. */
+export class AddReadingsDto {
+  @ApiProperty({ enum: ['append', 'replace'] })
+  @IsIn(['append', 'replace'])
+  mode: 'append' | 'replace';
+
+  @ApiProperty()
+  @IsArray()
+  @ArrayMinSize(1, { message: 'readings needs at least one reading' })
+  @ArrayMaxSize(1000)
+  @IsObject({ each: true, message: 'each reading must be an object' })
+  readings: Record<string, unknown>[];
+}

@@ -1,0 +1,64 @@
+import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+
+/**
+ * A real fill of the envelope a calculation version describes: where and when, the air, the lift
+ * readings, and the engine's reduction of them (computed on the server, like a version's results).
+ */
+@Entity('fill_log')
+export class FillLog {
+  @PrimaryColumn('varchar', { length: 36 })
+  id: string;
+
+  @Column('varchar', { name: 'calculation_id', length: 36 })
+  calculationId: string;
+
+  @Column('integer', { name: 'version_number' })
+  versionNumber: number;
+
+  @Column('varchar', { name: 'created_by', length: 36 })
+  createdBy: string;
+
+  /** When the envelope was filled (ISO 8601, as logged). */
+  @Column('varchar', { name: 'filled_at' })
+  filledAt: string;
+
+  @Column('varchar', { default: '' })
+  place: string;
+
+  /** Which envelope was filled (a serial number, a colour), as the team names it. */
+  @Column('varchar', { name: 'envelope_label', default: '' })
+  envelopeLabel: string;
+
+  @Column('varchar', { name: 'gas_source' })
+  gasSource: string;
+
+  @Column('simple-json')
+  ambient: unknown;
+
+  @Column('simple-json')
+  readings: unknown[];
+
+  @Column('varchar', { default: '' })
+  note: string;
+
+  @Column('simple-json')
+  outputs: unknown;
+
+  @Column('simple-json')
+  steps: unknown;
+
+  @Column('simple-json')
+  warnings: unknown;
+
+  @Column('simple-json')
+  points: unknown;
+
+  @Column('varchar', { name: 'engine_version' })
+  engineVersion: string;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  updatedAt: Date;
+}
