@@ -13,7 +13,7 @@ const PNG = Buffer.from(
 );
 const LOGGER_CSV = 'time_s,scale_kg,air_c\n0,0.210,14.5\n3600,0.214,14.1\n7200,0.219,13.8\n';
 
-describe('field records in the browser: files kept with a calculation', () => {
+describe('field records in the browser: files, fill logs and reading imports', () => {
   let product: RunningProduct;
   let browser: Browser;
   let page: Page;
@@ -93,6 +93,68 @@ describe('field records in the browser: files kept with a calculation', () => {
     await expect
       .poll(() => files().getByRole('button', { name: 'rig-photo.png', exact: true }).count())
       .toBe(0);
+  });
+
+  it('logs a fill with a ballast reading and sees measured against predicted lift', async () => {
+    screenshotOnFailure(() => page, 'fill-log-create');
+    await page.goto(calculationUrl);
+    await page.getByRole('button', { name: 'Log a fill' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Place').fill('North hut');
+    await dialog.getByLabel('Envelope', { exact: true }).fill('Capsule B');
+    await dialog.getByLabel('Air temperature', { exact: true }).fill('11 degC');
+    await dialog.getByLabel('Air pressure (absolute)', { exact: true }).fill('1008 hPa');
+    await dialog.getByLabel('Reading 1 ballast mass').fill('3 kg');
+    await dialog.getByLabel('Reading 1 scale reading').fill('1.05 kg');
+    await dialog.getByRole('button', { name: 'Save fill log' }).click();
+    await expect.poll(() => dialog.isVisible()).toBe(false);
+
+    const log = page.getByRole('region', { name: /^Fill log of / });
+    // Measured: 3 kg − 1.05 kg = 1.95 kg, computed by the server.
+    await expect
+      .poll(() => log.locator('[data-output="measuredNetLift"]').textContent())
+      .toContain('1.950 kg');
+    expect(await log.locator('[data-output="predictedNetLift"]').textContent()).toMatch(
+      /Predicted net lift at the logged conditions[\d.]+ kg/,
+    );
+    expect(
+      await log
+        .getByRole('img', { name: /^Measured and predicted net lift over 1 readings/ })
+        .isVisible(),
+    ).toBe(true);
+  });
+
+  it('imports readings from a CSV, listing the bad row by its line before storing anything', async () => {
+    screenshotOnFailure(() => page, 'fill-log-import');
+    const log = page.getByRole('region', { name: /^Fill log of / });
+    await log.getByRole('button', { name: 'Import readings from CSV' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Import lift readings from a CSV file' });
+    const csv = 'hours,scale_kg,air_c\n2,1.07,10.5\n4,heavy,10.1\n6,1.11,9.8\n';
+    await dialog
+      .getByLabel('CSV file')
+      .setInputFiles({ name: 'logger.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await dialog.getByRole('combobox', { name: 'Time unit' }).click();
+    // antd draws its options outside the listbox it exposes; pick the visible one by its title.
+    await page.locator('.ant-select-item-option[title="h"]').click();
+    const check = dialog.getByRole('status', { name: 'Import check' });
+    await expect
+      .poll(() => check.textContent())
+      .toContain('2 readings ready, 1 row cannot be read');
+    expect(await check.textContent()).toMatch(/Line 3: scale reading .*not a number/);
+    // Nothing stored yet.
+    expect(await log.getByRole('table', { name: 'Lift readings' }).getByRole('row').count()).toBe(
+      2,
+    );
+
+    await dialog.getByRole('button', { name: 'Import 2 readings, leave out 1 bad row' }).click();
+    await expect.poll(() => dialog.isVisible()).toBe(false);
+    await expect
+      .poll(() => log.getByRole('table', { name: 'Lift readings' }).getByRole('row').count())
+      .toBe(4);
+    await expect
+      .poll(() => log.getByRole('img', { name: /over 3 readings/ }).isVisible())
+      .toBe(true);
+    expect(await log.locator('[data-output="lossRate"]').count()).toBe(1);
   });
 
   it('logged no console errors', () => {

@@ -1,12 +1,14 @@
 import { Typography } from 'antd';
 import { useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
+import type { Attachment } from '@/features/attachments/api/attachments-api';
 import { AttachmentsPanel } from '@/features/attachments/components/attachments-panel';
 import { useMe } from '@/features/auth/api/auth-api';
 import { useCalculation } from '@/features/calculations/api/calculations-api';
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
 import { VersionCompare } from '@/features/calculations/components/version-compare';
 import { VersionHistory } from '@/features/calculations/components/version-history';
+import { FillLogsPanel } from '@/features/fill-logs/components/fill-logs-panel';
 import { ReviewDecision } from '@/features/reviews/components/review-decision';
 
 export function CalculationEditorRoute() {
@@ -22,19 +24,39 @@ export function CalculationEditorRoute() {
     latest.status === 'in_review' &&
     latest.author?.id !== user.id &&
     (latest.reviewer === null || latest.reviewer.id === user.id);
+  const mayWrite = Boolean(
+    user && calculation.data && (calculation.data.permissions.edit || user.roles.includes('admin')),
+  );
+  const mayRemove = (file: Attachment) =>
+    Boolean(
+      user &&
+      (user.roles.includes('admin') ||
+        (file.uploadedBy?.id === user.id && file.versionNumber === null)),
+    );
   return (
     <>
       {mayReview ? <ReviewDecision calculationId={id} number={latest.number} /> : null}
       <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />
       {calculation.data && user ? (
-        <AttachmentsPanel
-          calculationId={id}
-          canUpload={calculation.data.permissions.edit || user.roles.includes('admin')}
-          canRemove={(file) =>
-            user.roles.includes('admin') ||
-            (file.uploadedBy?.id === user.id && file.versionNumber === null)
-          }
-        />
+        <>
+          <FillLogsPanel
+            calculationId={id}
+            latestVersion={calculation.data.latestVersion}
+            predicts={calculation.data.kind === 'lift-check'}
+            canEdit={mayWrite}
+            unitSystem={user.unitSystem}
+            filesFor={(log) => (
+              <AttachmentsPanel
+                calculationId={id}
+                fillLogId={log.id}
+                title="Files of this fill"
+                canUpload={mayWrite}
+                canRemove={mayRemove}
+              />
+            )}
+          />
+          <AttachmentsPanel calculationId={id} canUpload={mayWrite} canRemove={mayRemove} />
+        </>
       ) : null}
       {calculation.data ? (
         <section aria-label="Versions" style={{ marginTop: 24 }}>

@@ -17,8 +17,8 @@ import {
   type VersionDetail,
 } from '../api/calculations-api';
 import { ConflictDialog, type SaveConflict } from './conflict-dialog';
-import { DerivationPanel } from './derivation-panel';
-import { ResultsPanel } from './results-panel';
+import { DerivationPanel } from '@/components/results/derivation-panel';
+import { ResultsPanel } from '@/components/results/results-panel';
 import { SchemaField } from './schema-form';
 import { StatusTag } from './status-tag';
 

@@ -1,0 +1,120 @@
+import { Button, Card, Table, Typography } from 'antd';
+import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
+import { type ReactNode, useState } from 'react';
+import { type FillLog, useFillLogs } from '../api/fill-logs-api';
+import { FillLogDetail } from './fill-log-detail';
+import { FillLogForm } from './fill-log-form';
+
+const mass = (value: number | undefined, unitSystem: UnitSystem) =>
+  value === undefined ? '—' : formatQuantity(value, 'mass', unitSystem).text;
+
+/**
+ * The fills logged against a calculation's versions, newest first; each opens to its reduction,
+ * its measured-against-predicted chart, its readings and files.
+ */
+export function FillLogsPanel({
+  calculationId,
+  latestVersion,
+  predicts,
+  canEdit,
+  unitSystem,
+  filesFor,
+}: {
+  calculationId: string;
+  latestVersion: number;
+  /** Whether the kind has a design to predict from (lift checks do). */
+  predicts: boolean;
+  canEdit: boolean;
+  unitSystem: UnitSystem;
+  filesFor?: (log: FillLog) => ReactNode;
+}) {
+  const logs = useFillLogs(calculationId);
+  const [logging, setLogging] = useState(false);
+  const [expanded, setExpanded] = useState<string[]>([]);
+  return (
+    <Card
+      title="Fill logs"
+      size="small"
+      style={{ marginTop: 16 }}
+      extra={
+        canEdit ? (
+          <Button type="primary" onClick={() => setLogging(true)}>
+            Log a fill
+          </Button>
+        ) : null
+      }
+    >
+      {!predicts ? (
+        <Typography.Paragraph type="secondary">
+          Fills of this kind record measured lift only; a lift check also predicts it at the logged
+          air.
+        </Typography.Paragraph>
+      ) : null}
+      <Table<FillLog>
+        size="small"
+        rowKey="id"
+        aria-label="Fill logs"
+        loading={logs.isPending}
+        dataSource={logs.data ?? []}
+        pagination={{ pageSize: 10, hideOnSinglePage: true }}
+        locale={{ emptyText: 'No fills logged yet' }}
+        expandable={{
+          expandedRowKeys: expanded,
+          onExpandedRowsChange: (keys) => setExpanded(keys.map(String)),
+          expandRowByClick: true,
+          expandedRowRender: (log) => (
+            <FillLogDetail
+              log={log}
+              unitSystem={unitSystem}
+              canEdit={canEdit}
+              files={filesFor?.(log)}
+            />
+          ),
+        }}
+        columns={[
+          {
+            title: 'Filled at',
+            dataIndex: 'filledAt',
+            render: (at: string) => new Date(at).toLocaleString(),
+          },
+          { title: 'Place', dataIndex: 'place' },
+          { title: 'Envelope', dataIndex: 'envelopeLabel' },
+          {
+            title: 'Version',
+            dataIndex: 'versionNumber',
+            render: (n: number) => <span className="lw-mono">v{n}</span>,
+          },
+          { title: 'Readings', key: 'readings', render: (_: unknown, log) => log.readings.length },
+          {
+            title: 'Measured net lift',
+            key: 'measured',
+            render: (_: unknown, log) => mass(log.outputs.measuredNetLift?.value, unitSystem),
+          },
+          {
+            title: 'Predicted',
+            key: 'predicted',
+            render: (_: unknown, log) => mass(log.outputs.predictedNetLift?.value, unitSystem),
+          },
+          {
+            title: 'Difference',
+            key: 'difference',
+            render: (_: unknown, log) =>
+              log.outputs.differencePercent
+                ? `${log.outputs.differencePercent.value.toFixed(1)} %`
+                : '—',
+          },
+        ]}
+      />
+      {logging ? (
+        <FillLogForm
+          calculationId={calculationId}
+          versionNumber={latestVersion}
+          unitSystem={unitSystem}
+          open={logging}
+          onClose={() => setLogging(false)}
+          onCreated={(id) => setExpanded((current) => [...current, id])}
+        />
+      ) : null}
+    </Card>
+  );
+}

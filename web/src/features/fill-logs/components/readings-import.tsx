@@ -1,0 +1,315 @@
+import { Alert, Button, Form, List, Modal, Radio, Select, Space, Table, Typography } from 'antd';
+import type { UnitSystem } from '@loftwright/buoyancy';
+import { useMemo, useState } from 'react';
+import { QuantityInput } from '@/components/quantity/quantity-input';
+import { FormError } from '@/components/errors/form-error';
+import { type FillLog, useAddReadings } from '../api/fill-logs-api';
+import {
+  MASS_UNITS,
+  parseCsv,
+  type ParsedCsv,
+  PRESSURE_UNITS,
+  type ReadingColumns,
+  readingsFromCsv,
+  TEMPERATURE_UNITS,
+  TIME_UNITS,
+} from '../lib/readings-from-csv';
+
+const UNIT_LABELS: Record<string, string> = { degC: '°C', degF: '°F', day: 'days' };
+const unitOptions = (units: readonly string[]) =>
+  units.map((unit) => ({ value: unit, label: UNIT_LABELS[unit] ?? unit }));
+
+/** The column whose header looks like it, for a first guess the user can change. */
+const guess = (columns: string[], pattern: RegExp) =>
+  columns.find((column) => pattern.test(column));
+
+/**
+ * A series of lift readings from a logger's CSV file: preview, column mapping and units, the bad
+ * rows listed by line, and only then, on confirmation, one all-or-nothing import.
+ */
+export function ReadingsImport({
+  log,
+  unitSystem,
+  open,
+  onClose,
+}: {
+  log: FillLog;
+  unitSystem: UnitSystem;
+  open: boolean;
+  onClose: () => void;
+}) {
+  const addReadings = useAddReadings(log.calculationId);
+  const [fileName, setFileName] = useState<string>();
+  const [parsed, setParsed] = useState<ParsedCsv>();
+  const [time, setTime] = useState<ReadingColumns['time']>({ column: '', unit: 's' });
+  const [liftKind, setLiftKind] = useState<'ballast' | 'direct'>('ballast');
+  const [liftColumn, setLiftColumn] = useState('');
+  const [massUnit, setMassUnit] = useState<(typeof MASS_UNITS)[number]>('kg');
+  const first = log.readings[0];
+  const [ballastMassKg, setBallastMassKg] = useState<number | undefined>(
+    first?.kind === 'ballast' ? first.ballastMassKg : undefined,
+  );
+  const [temperature, setTemperature] = useState<ReadingColumns['temperature']>();
+  const [pressure, setPressure] = useState<ReadingColumns['pressure']>();
+  const [mode, setMode] = useState<'append' | 'replace'>('append');
+
+  const read = async (file: File) => {
+    const next = parseCsv(await file.text());
+    setFileName(file.name);
+    setParsed(next);
+    setTime({
+      column: guess(next.columns, /time|^t\b|^t_|min|hour|sec/i) ?? next.columns[0] ?? '',
+      unit: 's',
+    });
+    setLiftColumn(guess(next.columns, /scale|lift|kg|mass|weight/i) ?? next.columns[1] ?? '');
+    const air = guess(next.columns, /temp|air/i);
+    setTemperature(air ? { column: air, unit: 'degC' } : undefined);
+    const baro = guess(next.columns, /press|baro|hpa/i);
+    setPressure(baro ? { column: baro, unit: 'hPa' } : undefined);
+  };
+
+  const mapped = useMemo(() => {
+    if (!parsed || !time.column || !liftColumn) return undefined;
+    if (liftKind === 'ballast' && ballastMassKg === undefined) return undefined;
+    const columns: ReadingColumns = {
+      time,
+      lift:
+        liftKind === 'ballast'
+          ? {
+              kind: 'ballast',
+              column: liftColumn,
+              unit: massUnit,
+              ballastMassKg: ballastMassKg ?? 0,
+            }
+          : { kind: 'direct', column: liftColumn, unit: massUnit },
+      ...(temperature ? { temperature } : {}),
+      ...(pressure ? { pressure } : {}),
+    };
+    return readingsFromCsv(parsed, columns, log.ambient);
+  }, [
+    parsed,
+    time,
+    liftKind,
+    liftColumn,
+    massUnit,
+    ballastMassKg,
+    temperature,
+    pressure,
+    log.ambient,
+  ]);
+
+  const columnOptions = (parsed?.columns ?? []).map((column) => ({ value: column, label: column }));
+  const count = mapped?.readings.length ?? 0;
+  const badCount = mapped?.bad.length ?? 0;
+
+  return (
+    <Modal
+      open={open}
+      title="Import lift readings from a CSV file"
+      width={820}
+      onCancel={onClose}
+      destroyOnHidden
+      footer={[
+        <Button key="cancel" onClick={onClose}>
+          Cancel
+        </Button>,
+        <Button
+          key="import"
+          type="primary"
+          disabled={count === 0}
+          loading={addReadings.isPending}
+          onClick={() =>
+            mapped &&
+            addReadings.mutate(
+              { id: log.id, mode, readings: mapped.readings },
+              { onSuccess: onClose },
+            )
+          }
+        >
+          {badCount > 0
+            ? `Import ${count} readings, leave out ${badCount} bad ${badCount === 1 ? 'row' : 'rows'}`
+            : `Import ${count} readings`}
+        </Button>,
+      ]}
+    >
+      <Form layout="vertical" component="div">
+        <Form.Item label="CSV file with a header row">
+          <input
+            type="file"
+            accept=".csv,text/csv,text/plain"
+            aria-label="CSV file"
+            onChange={(event) => {
+              const file = event.target.files?.[0];
+              if (file) void read(file);
+            }}
+          />
+          {fileName ? <Typography.Text type="secondary"> {fileName}</Typography.Text> : null}
+        </Form.Item>
+        {parsed ? (
+          <>
+            <Table
+              size="small"
+              aria-label="First rows of the file"
+              pagination={false}
+              scroll={{ x: true }}
+              dataSource={parsed.rows
+                .slice(0, 5)
+                .map((row) => ({ key: row.line, line: row.line, ...row.cells }))}
+              columns={[
+                { title: 'Line', dataIndex: 'line' },
+                ...parsed.columns.map((column) => ({
+                  title: column,
+                  dataIndex: column,
+                  key: column,
+                })),
+              ]}
+            />
+            <Space wrap align="start" style={{ marginTop: 12 }}>
+              <Form.Item label="Time column">
+                <Select
+                  aria-label="Time column"
+                  style={{ width: 160 }}
+                  value={time.column}
+                  options={columnOptions}
+                  onChange={(column: string) => setTime({ ...time, column })}
+                />
+              </Form.Item>
+              <Form.Item label="Time unit">
+                <Select
+                  aria-label="Time unit"
+                  style={{ width: 100 }}
+                  value={time.unit}
+                  options={unitOptions(TIME_UNITS)}
+                  onChange={(unit: ReadingColumns['time']['unit']) => setTime({ ...time, unit })}
+                />
+              </Form.Item>
+              <Form.Item label="The file holds">
+                <Radio.Group
+                  value={liftKind}
+                  onChange={(event) => setLiftKind(event.target.value as 'ballast' | 'direct')}
+                >
+                  <Radio value="ballast">scale readings under a ballast</Radio>
+                  <Radio value="direct">net lift</Radio>
+                </Radio.Group>
+              </Form.Item>
+              <Form.Item
+                label={liftKind === 'ballast' ? 'Scale reading column' : 'Net lift column'}
+              >
+                <Select
+                  aria-label="Lift column"
+                  style={{ width: 160 }}
+                  value={liftColumn}
+                  options={columnOptions}
+                  onChange={setLiftColumn}
+                />
+              </Form.Item>
+              <Form.Item label="Mass unit">
+                <Select
+                  aria-label="Mass unit"
+                  style={{ width: 90 }}
+                  value={massUnit}
+                  options={unitOptions(MASS_UNITS)}
+                  onChange={setMassUnit}
+                />
+              </Form.Item>
+              {liftKind === 'ballast' ? (
+                <Form.Item label="Ballast mass (the same for every row)">
+                  <QuantityInput
+                    label="Ballast mass"
+                    dimension="mass"
+                    value={ballastMassKg}
+                    onChange={setBallastMassKg}
+                    unitSystem={unitSystem}
+                  />
+                </Form.Item>
+              ) : null}
+              <Form.Item label="Air temperature column (optional)">
+                <Select
+                  aria-label="Air temperature column"
+                  allowClear
+                  style={{ width: 160 }}
+                  value={temperature?.column}
+                  options={columnOptions}
+                  onChange={(column?: string) =>
+                    setTemperature(
+                      column ? { column, unit: temperature?.unit ?? 'degC' } : undefined,
+                    )
+                  }
+                />
+              </Form.Item>
+              {temperature ? (
+                <Form.Item label="Temperature unit">
+                  <Select
+                    aria-label="Temperature unit"
+                    style={{ width: 90 }}
+                    value={temperature.unit}
+                    options={unitOptions(TEMPERATURE_UNITS)}
+                    onChange={(unit: NonNullable<ReadingColumns['temperature']>['unit']) =>
+                      setTemperature({ ...temperature, unit })
+                    }
+                  />
+                </Form.Item>
+              ) : null}
+              <Form.Item label="Pressure column (optional)">
+                <Select
+                  aria-label="Pressure column"
+                  allowClear
+                  style={{ width: 160 }}
+                  value={pressure?.column}
+                  options={columnOptions}
+                  onChange={(column?: string) =>
+                    setPressure(column ? { column, unit: pressure?.unit ?? 'hPa' } : undefined)
+                  }
+                />
+              </Form.Item>
+              {pressure ? (
+                <Form.Item label="Pressure unit">
+                  <Select
+                    aria-label="Pressure unit"
+                    style={{ width: 90 }}
+                    value={pressure.unit}
+                    options={unitOptions(PRESSURE_UNITS)}
+                    onChange={(unit: NonNullable<ReadingColumns['pressure']>['unit']) =>
+                      setPressure({ ...pressure, unit })
+                    }
+                  />
+                </Form.Item>
+              ) : null}
+            </Space>
+            <Form.Item label="The readings already logged">
+              <Radio.Group
+                value={mode}
+                onChange={(event) => setMode(event.target.value as 'append' | 'replace')}
+              >
+                <Radio value="append">keep them, add these</Radio>
+                <Radio value="replace">replace them with these</Radio>
+              </Radio.Group>
+            </Form.Item>
+            {mapped ? (
+              <div role="status" aria-label="Import check">
+                <Alert
+                  type={badCount > 0 ? 'warning' : 'success'}
+                  showIcon
+                  title={`${count} readings ready${badCount > 0 ? `, ${badCount} ${badCount === 1 ? 'row' : 'rows'} cannot be read` : ''}. Nothing is stored until you import.`}
+                />
+                {badCount > 0 ? (
+                  <List
+                    size="small"
+                    aria-label="Rows that cannot be read"
+                    dataSource={mapped.bad}
+                    renderItem={(row) => (
+                      <List.Item>
+                        Line {row.line}: {row.reason}
+                      </List.Item>
+                    )}
+                  />
+                ) : null}
+              </div>
+            ) : null}
+          </>
+        ) : null}
+        <FormError error={addReadings.error} />
+      </Form>
+    </Modal>
+  );
+}

@@ -1,0 +1,133 @@
+import {
+  type FillAmbient,
+  type FillReading,
+  InputError,
+  parseQuantity,
+  reduceFillLog,
+} from '@loftwright/buoyancy';
+import Papa from 'papaparse';
+
+export const TIME_UNITS = ['s', 'min', 'h', 'day'] as const;
+export const MASS_UNITS = ['kg', 'g', 'lb', 'oz'] as const;
+export const TEMPERATURE_UNITS = ['degC', 'degF', 'K'] as const;
+export const PRESSURE_UNITS = ['hPa', 'kPa', 'Pa', 'inHg'] as const;
+
+/** Which column holds what, and in which unit the file writes it. */
+export interface ReadingColumns {
+  time: { column: string; unit: (typeof TIME_UNITS)[number] };
+  lift:
+    | { kind: 'ballast'; column: string; unit: (typeof MASS_UNITS)[number]; ballastMassKg: number }
+    | { kind: 'direct'; column: string; unit: (typeof MASS_UNITS)[number] };
+  temperature?: { column: string; unit: (typeof TEMPERATURE_UNITS)[number] };
+  pressure?: { column: string; unit: (typeof PRESSURE_UNITS)[number] };
+}
+
+export interface ParsedCsv {
+  columns: string[];
+  /** Data rows with the file's line number of each (the header is line 1). */
+  rows: { line: number; cells: Record<string, string> }[];
+  problems: { line: number; reason: string }[];
+}
+
+/** A CSV file with a header row, blank lines left out but counted. */
+export function parseCsv(text: string): ParsedCsv {
+  const parsed = Papa.parse<Record<string, string>>(text, {
+    header: true,
+    skipEmptyLines: false,
+    transformHeader: (header) => header.trim(),
+  });
+  const rows: ParsedCsv['rows'] = [];
+  const blankRows = new Set<number>();
+  parsed.data.forEach((cells, index) => {
+    const blank = Object.values(cells).every((cell) => (cell ?? '').trim() === '');
+    if (blank) blankRows.add(index);
+    else rows.push({ line: index + 2, cells });
+  });
+  return {
+    columns: (parsed.meta.fields ?? []).filter((field) => field !== ''),
+    rows,
+    problems: parsed.errors
+      .filter(
+        (error) =>
+          error.code !== 'UndetectableDelimiter' && !blankRows.has(error.row ?? Number.NaN),
+      )
+      .map((error) => ({ line: (error.row ?? 0) + 2, reason: error.message })),
+  };
+}
+
+const cell = (row: Record<string, string>, column: string, what: string) => {
+  const value = (row[column] ?? '').trim();
+  if (value === '') throw new Error(`${what} (column "${column}") is empty`);
+  return value;
+};
+
+/**
+ * Readings from the mapped columns, each checked by the engine exactly as the server will check
+ * it; a row that fails is listed with its line and the reason, and left out.
+ */
+export function readingsFromCsv(
+  parsed: ParsedCsv,
+  columns: ReadingColumns,
+  ambient: FillAmbient,
+): { readings: FillReading[]; bad: { line: number; reason: string }[] } {
+  const readings: FillReading[] = [];
+  const bad: { line: number; reason: string }[] = [...parsed.problems];
+  for (const { line, cells } of parsed.rows) {
+    try {
+      const timeS = parseQuantity(
+        `${cell(cells, columns.time.column, 'time')} ${columns.time.unit}`,
+        'time',
+        { field: 'time' },
+      );
+      const mass = parseQuantity(
+        `${cell(cells, columns.lift.column, 'lift')} ${columns.lift.unit}`,
+        'mass',
+        { field: columns.lift.kind === 'ballast' ? 'scale reading' : 'net lift' },
+      );
+      const air = {
+        ...(columns.temperature
+          ? {
+              airTemperatureK: parseQuantity(
+                `${cell(cells, columns.temperature.column, 'temperature')} ${columns.temperature.unit}`,
+                'temperature',
+                { field: 'air temperature' },
+              ),
+            }
+          : {}),
+        ...(columns.pressure
+          ? {
+              pressurePa: parseQuantity(
+                `${cell(cells, columns.pressure.column, 'pressure')} ${columns.pressure.unit}`,
+                'pressure',
+                { field: 'pressure' },
+              ),
+            }
+          : {}),
+      };
+      const reading: FillReading =
+        columns.lift.kind === 'ballast'
+          ? {
+              kind: 'ballast',
+              timeS,
+              ballastMassKg: columns.lift.ballastMassKg,
+              scaleReadingKg: mass,
+              ...air,
+            }
+          : { kind: 'direct', timeS, netLiftKg: mass, ...air };
+      reduceFillLog({ ambient, readings: [reading] });
+      readings.push(reading);
+    } catch (error) {
+      const reason =
+        error instanceof InputError
+          ? error.issues
+              .map((issue) => `${issue.field.replace(/^readings\.0\./, '')} ${issue.reason}`)
+              .join('; ')
+          : error instanceof Error
+            ? error.message
+            : String(error);
+      bad.push({ line, reason });
+    }
+  }
+  bad.sort((a, b) => a.line - b.line);
+  return { readings, bad };
+}
