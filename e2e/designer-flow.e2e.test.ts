@@ -1,3 +1,7 @@
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, type Browser } from './support/browser.js';
@@ -110,6 +114,30 @@ describe('designer, reviewer and student in the browser', () => {
       .toBe(true);
   });
 
+  it('finds the sign-off PDF archived with the approval, and poppler renders its first page', async () => {
+    screenshotOnFailure(() => page, 'archived-sign-off');
+    const files = page.getByRole('table', { name: 'Files' });
+    const row = files.getByRole('row', { name: /Sign-off sheet of version 2/ });
+    await expect.poll(() => row.isVisible()).toBe(true);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      row.getByRole('button', { name: /^Download / }).click(),
+    ]);
+    const dir = mkdtempSync(join(tmpdir(), 'loftwright-sheet-'));
+    try {
+      const file = join(dir, download.suggestedFilename());
+      await download.saveAs(file);
+      expect(download.suggestedFilename()).toBe('Browser-check-sphere-v2-sign-off.pdf');
+      execFileSync('pdftoppm', ['-png', '-r', '30', '-f', '1', '-l', '1', file, join(dir, 'page')]);
+      expect(readFileSync(join(dir, 'page-1.png')).subarray(1, 4).toString()).toBe('PNG');
+      expect(execFileSync('pdftotext', [file, '-']).toString()).toContain(
+        'Size checked against the envelope drawing.',
+      );
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
   it('keeps a private calculation from a student, without saying whether it exists', async () => {
     screenshotOnFailure(() => page, 'student-private');
     await signOut();
@@ -135,6 +163,11 @@ describe('designer, reviewer and student in the browser', () => {
     await page.getByRole('tab', { name: 'Mail outbox' }).click();
     await expect
       .poll(() => page.getByText(/Review requested: Browser check sphere, version 2/).isVisible())
+      .toBe(true);
+    await expect
+      .poll(() =>
+        page.getByText(/Approved: Browser check sphere, version 2 .* 1 attached/).isVisible(),
+      )
       .toBe(true);
   });
 

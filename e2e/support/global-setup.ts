@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process';
 import { accessSync, constants, existsSync } from 'node:fs';
 import { API_ENTRY, CHROMIUM_PATH, WEB_INDEX } from './paths.js';
 
@@ -13,6 +14,14 @@ export default function checkPrerequisites(): void {
     problems.push(
       `Chromium was not found at ${CHROMIUM_PATH}. Install Debian's package with ` +
         '"sudo apt-get install -y chromium", or set CHROMIUM_PATH to a Chromium binary.',
+    );
+  }
+  try {
+    execFileSync('pdftoppm', ['-v'], { stdio: 'ignore' });
+  } catch {
+    problems.push(
+      "pdftoppm was not found; the sign-off PDF checks need it. Install Debian's package with " +
+        '"sudo apt-get install -y poppler-utils".',
     );
   }
   if (!existsSync(API_ENTRY) || !existsSync(WEB_INDEX)) {

@@ -15,6 +15,7 @@ import { InitSchema1764633600000 } from './migrations/1764633600000-init-schema'
 import { AccountsCalculationsReviews1764640800000 } from './migrations/1764640800000-accounts-calculations-reviews';
 import { Attachments1764720000000 } from './migrations/1764720000000-attachments';
 import { FillLogs1764723600000 } from './migrations/1764723600000-fill-logs';
+import { OutboxAttachments1764727200000 } from './migrations/1764727200000-outbox-attachments';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -35,6 +36,7 @@ export const MIGRATIONS = [
   AccountsCalculationsReviews1764640800000,
   Attachments1764720000000,
   FillLogs1764723600000,
+  OutboxAttachments1764727200000,
 ];
 
 /**

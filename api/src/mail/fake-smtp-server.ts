@@ -9,6 +9,8 @@ export interface ReceivedMail {
   subject: string;
   text: string;
   messageId: string | null;
+  /** What was attached: names, types and sizes (the bytes themselves are not kept). */
+  attachments: { filename: string; contentType: string; sizeBytes: number }[];
 }
 
 /**
@@ -24,7 +26,8 @@ export class FakeSmtpServer {
       authOptional: true,
       disabledCommands: ['STARTTLS', 'AUTH'],
       banner: 'Loftwright local mail',
-      size: 1024 * 1024,
+      // Room for an archived sign-off PDF attached to an approval.
+      size: 30 * 1024 * 1024,
       onData: (stream, session, callback) => {
         simpleParser(stream)
           .then((parsed) =>
@@ -34,6 +37,11 @@ export class FakeSmtpServer {
               subject: parsed.subject ?? '',
               text: parsed.text ?? '',
               messageId: parsed.messageId ?? null,
+              attachments: parsed.attachments.map((attachment) => ({
+                filename: attachment.filename ?? '',
+                contentType: attachment.contentType,
+                sizeBytes: attachment.size,
+              })),
             }),
           )
           .then(() => callback())

@@ -3,6 +3,7 @@ export interface MailMessage {
   to: string[];
   subject: string;
   text: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 }
 
 interface Person {

@@ -18,6 +18,9 @@ export class OutboxMessage {
   @Column('text')
   text: string;
 
+  @Column('simple-json', { default: '[]' })
+  attachments: { filename: string; contentType: string; sizeBytes: number }[];
+
   @Column('varchar', { name: 'message_id', nullable: true })
   messageId: string | null;
 

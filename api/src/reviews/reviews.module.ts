@@ -4,6 +4,7 @@ import { CalculationVersion } from '../calculations/calculation-version.entity';
 import { Calculation } from '../calculations/calculation.entity';
 import { CalculationsModule } from '../calculations/calculations.module';
 import { MailModule } from '../mail/mail.module';
+import { SignOffModule } from '../sign-off/sign-off.module';
 import { User } from '../users/user.entity';
 import { UsersModule } from '../users/users.module';
 import { Review } from './review.entity';
@@ -18,6 +19,7 @@ import { VerifyService } from './verify.service';
     CalculationsModule,
     UsersModule,
     MailModule,
+    SignOffModule,
   ],
   controllers: [ReviewsController, VerifyController],
   providers: [ReviewsService, VerifyService],

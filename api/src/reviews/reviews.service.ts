@@ -17,6 +17,7 @@ import type { EnvironmentVariables } from '../config/env.validation';
 import { WriteLock } from '../database/write-lock';
 import { decisionMail, submittedMail } from '../mail/mail-templates';
 import { MailService } from '../mail/mail.service';
+import { SignOffService } from '../sign-off/sign-off.service';
 import { UsersService } from '../users/users.service';
 import { Review, type ReviewDecision } from './review.entity';
 
@@ -32,6 +33,7 @@ export class ReviewsService {
     private readonly mail: MailService,
     private readonly writeLock: WriteLock,
     private readonly config: ConfigService<EnvironmentVariables, true>,
+    private readonly signOff: SignOffService,
   ) {}
 
   private link(calculationId: string, number: number): string {
@@ -183,15 +185,41 @@ export class ReviewsService {
       }),
     );
     const author = await this.usersService.findById(version.authorId);
+    const sheet =
+      decision === 'approved'
+        ? await this.signOff.archiveApproved(
+            calculation,
+            version,
+            {
+              author: author?.displayName ?? 'unknown',
+              reviewerId: user.id,
+              reviewer: user.displayName,
+            },
+            comment,
+            new Date(),
+          )
+        : undefined;
     if (author) {
+      const message = decisionMail(
+        author,
+        user,
+        { title: calculation.title, number, link: this.link(id, number) },
+        decision === 'approved',
+        comment || '(none)',
+      );
       this.mail.send(
-        decisionMail(
-          author,
-          user,
-          { title: calculation.title, number, link: this.link(id, number) },
-          decision === 'approved',
-          comment || '(none)',
-        ),
+        sheet
+          ? {
+              ...message,
+              attachments: [
+                {
+                  filename: sheet.attachment.fileName,
+                  content: sheet.bytes,
+                  contentType: 'application/pdf',
+                },
+              ],
+            }
+          : message,
       );
     }
     return this.versionWithReviews(user, id, number);

@@ -5,6 +5,7 @@ export interface OutboxItem {
   to: string[];
   subject: string;
   text: string;
+  attachments: { filename: string; contentType: string; sizeBytes: number }[];
 }
 
 /**

@@ -28,6 +28,8 @@ export interface OutboxRow {
   to: string[];
   subject: string;
   text: string;
+  /** Names, types and sizes of what was attached (the server keeps no bytes). */
+  attachments: { filename: string; contentType: string; sizeBytes: number }[];
   receivedAt: string;
 }
 

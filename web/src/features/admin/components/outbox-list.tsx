@@ -10,11 +10,19 @@ export function OutboxList() {
       aria-label="Mail outbox"
       items={(outbox.data?.items ?? []).map((mail) => ({
         key: mail.id,
-        label: `${mail.subject} — to ${mail.to.join(', ')} — ${new Date(mail.receivedAt).toLocaleString()}`,
+        label: `${mail.subject} — to ${mail.to.join(', ')} — ${new Date(mail.receivedAt).toLocaleString()}${mail.attachments.length > 0 ? ` — ${mail.attachments.length} attached` : ''}`,
         children: (
-          <Typography.Paragraph style={{ whiteSpace: 'pre-wrap' }} className="lw-mono">
-            {mail.text}
-          </Typography.Paragraph>
+          <>
+            <Typography.Paragraph style={{ whiteSpace: 'pre-wrap' }} className="lw-mono">
+              {mail.text}
+            </Typography.Paragraph>
+            {mail.attachments.map((file) => (
+              <Typography.Paragraph key={file.filename} type="secondary">
+                Attached: {file.filename} ({file.contentType}, {(file.sizeBytes / 1024).toFixed(1)}{' '}
+                kB)
+              </Typography.Paragraph>
+            ))}
+          </>
         ),
       }))}
     />

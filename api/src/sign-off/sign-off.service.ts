@@ -1,0 +1,73 @@
+import { Injectable, Logger } from '@nestjs/common';
+import { KINDS } from '@loftwright/buoyancy';
+import { AttachmentsService } from '../attachments/attachments.service';
+import type { AttachmentView } from '../attachments/attachment-views';
+import type { CalculationVersion } from '../calculations/calculation-version.entity';
+import type { Calculation } from '../calculations/calculation.entity';
+import { renderSignOffPdf, type SignOffContent } from './sign-off-pdf';
+
+/** File name of an archived sheet: the title's letters and digits, the version. */
+export const sheetFileName = (title: string, number: number) =>
+  `${
+    title
+      .replace(/[^\p{L}\p{N}]+/gu, '-')
+      .replace(/^-|-$/g, '')
+      .slice(0, 80) || 'calculation'
+  }-v${number}-sign-off.pdf`;
+
+/**
+ * Archives the sign-off sheet of an approved version as a PDF attachment of its calculation, so
+ * the signed record survives whatever the web page or engine later become.
+ */
+@Injectable()
+export class SignOffService {
+  private readonly logger = new Logger('SignOffService');
+
+  constructor(private readonly attachments: AttachmentsService) {}
+
+  async archiveApproved(
+    calculation: Calculation,
+    version: CalculationVersion,
+    people: { author: string; reviewerId: string; reviewer: string },
+    comment: string,
+    decidedAt: Date,
+  ): Promise<{ attachment: AttachmentView; bytes: Buffer } | undefined> {
+    const content: SignOffContent = {
+      title: calculation.title,
+      kindTitle: KINDS.find((kind) => kind.id === calculation.kind)?.title ?? calculation.kind,
+      versionNumber: version.number,
+      status: 'approved',
+      fingerprint: version.fingerprint,
+      engineVersion: version.engineVersion,
+      author: people.author,
+      savedAt: version.createdAt,
+      note: version.note,
+      inputs: version.inputs,
+      outputs: version.outputs as SignOffContent['outputs'],
+      steps: version.steps as SignOffContent['steps'],
+      warnings: version.warnings as SignOffContent['warnings'],
+      review: { reviewer: people.reviewer, decidedAt, comment },
+      verifyPath: `/verify/${version.fingerprint}`,
+    };
+    try {
+      const bytes = await renderSignOffPdf(content);
+      const attachment = await this.attachments.storeGenerated(
+        people.reviewerId,
+        calculation.id,
+        bytes,
+        {
+          fileName: sheetFileName(calculation.title, version.number),
+          mediaType: 'application/pdf',
+          versionNumber: version.number,
+        },
+      );
+      return { attachment, bytes };
+    } catch (error) {
+      // The approval has been recorded already; a sheet that failed to render must not undo it.
+      this.logger.error(
+        `Could not archive the sign-off sheet of ${calculation.id} v${version.number}: ${String(error)}`,
+      );
+      return undefined;
+    }
+  }
+}
