@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, type Browser } from './support/browser.js';
@@ -186,6 +187,52 @@ describe('a designer’s editor and list: stale saves, unsaved changes, units, q
     expect(
       await page.getByRole('link', { name: 'Conflict check sphere', exact: true }).count(),
     ).toBe(1);
+  });
+
+  it('exports a calculation to a file and imports it back as a new one', async () => {
+    screenshotOnFailure(() => page, 'export-import');
+    await page.goto(`${product.baseUrl}/calculations/${calculationId}`);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export file' }).click(),
+    ]);
+    expect(download.suggestedFilename()).toBe('Conflict-check-sphere.loftwright.json');
+    const path = await download.path();
+    const file = JSON.parse(readFileSync(path, 'utf8')) as { versions: unknown[] };
+    expect(file.versions.length).toBe((await latestVersion()).number);
+
+    await page.goto(`${product.baseUrl}/calculations`);
+    await page
+      .getByLabel('Loftwright file to import')
+      .setInputFiles({
+        name: 'sphere.loftwright.json',
+        mimeType: 'application/json',
+        buffer: readFileSync(path),
+      });
+    await expect
+      .poll(() =>
+        page.getByText(/^Imported “Conflict check sphere” with \d+ versions\.$/).isVisible(),
+      )
+      .toBe(true);
+    await expect.poll(() => page.url()).toMatch(/\/calculations\/[0-9a-f-]{36}$/);
+    expect(page.url()).not.toContain(calculationId);
+  });
+
+  it('says why a file that is not a Loftwright file cannot be imported', async () => {
+    screenshotOnFailure(() => page, 'import-refused');
+    await page.goto(`${product.baseUrl}/calculations`);
+    await page.getByLabel('Loftwright file to import').setInputFiles({
+      name: 'other.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from(JSON.stringify({ format: 'someone-else', formatVersion: 1 })),
+    });
+    await expect
+      .poll(() =>
+        page
+          .getByText(/other\.json could not be imported.*not a Loftwright calculation file/)
+          .isVisible(),
+      )
+      .toBe(true);
   });
 
   it('logged no console errors', () => {

@@ -9,13 +9,18 @@ import {
   Patch,
   Post,
   Query,
+  Header,
+  Res,
 } from '@nestjs/common';
 import { ApiBearerAuth, ApiConflictResponse, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { intParam } from '../common/pipes/int-param.pipe';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
+import { CalculationTransferService } from './calculation-transfer.service';
 import { CalculationsService } from './calculations.service';
+import { ImportCalculationDto } from './dto/import-calculation.dto';
 import { CreateCalculationDto } from './dto/create-calculation.dto';
 import { ListCalculationsDto } from './dto/list-calculations.dto';
 import { SaveVersionDto } from './dto/save-version.dto';
@@ -25,7 +30,32 @@ import { UpdateCalculationDto } from './dto/update-calculation.dto';
 @ApiBearerAuth()
 @Controller('calculations')
 export class CalculationsController {
-  constructor(private readonly calculationsService: CalculationsService) {}
+  constructor(
+    private readonly calculationsService: CalculationsService,
+    private readonly transfer: CalculationTransferService,
+  ) {}
+
+  /** A Loftwright calculation file (docs/file-format.md) becomes a new calculation of the caller's. */
+  @Post('import')
+  import(@CurrentUser() user: AuthUser, @Body() body: ImportCalculationDto) {
+    return this.transfer.import(user, body);
+  }
+
+  @Get(':id/export')
+  @Header('Content-Type', 'application/json; charset=utf-8')
+  async export(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+    @Res({ passthrough: true }) response: Response,
+  ) {
+    const file = await this.transfer.export(user, id);
+    const name = `${file.calculation.title.replace(/[^\p{L}\p{N}]+/gu, '-').replace(/^-|-$/g, '') || 'calculation'}.loftwright.json`;
+    response.setHeader(
+      'Content-Disposition',
+      `attachment; filename="${name.replace(/[^\x20-\x7e]/g, '_')}"; filename*=UTF-8''${encodeURIComponent(name)}`,
+    );
+    return file;
+  }
 
   @Get()
   list(@CurrentUser() user: AuthUser, @Query() query: ListCalculationsDto) {

@@ -4,12 +4,13 @@ import { User } from '../users/user.entity';
 import { CalculationVersion } from './calculation-version.entity';
 import { Calculation } from './calculation.entity';
 import { CalculationsController } from './calculations.controller';
+import { CalculationTransferService } from './calculation-transfer.service';
 import { CalculationsService } from './calculations.service';
 
 @Module({
   imports: [TypeOrmModule.forFeature([Calculation, CalculationVersion, User])],
   controllers: [CalculationsController],
-  providers: [CalculationsService],
+  providers: [CalculationsService, CalculationTransferService],
   exports: [CalculationsService],
 })
 export class CalculationsModule {}

@@ -1,10 +1,13 @@
-import { Typography } from 'antd';
+import { App, Button, Space, Typography } from 'antd';
 import { useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import type { Attachment } from '@/features/attachments/api/attachments-api';
 import { AttachmentsPanel } from '@/features/attachments/components/attachments-panel';
 import { useMe } from '@/features/auth/api/auth-api';
-import { useCalculation } from '@/features/calculations/api/calculations-api';
+import {
+  downloadCalculationFile,
+  useCalculation,
+} from '@/features/calculations/api/calculations-api';
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
 import { VersionCompare } from '@/features/calculations/components/version-compare';
 import { VersionHistory } from '@/features/calculations/components/version-history';
@@ -14,6 +17,7 @@ import { ReviewDecision } from '@/features/reviews/components/review-decision';
 export function CalculationEditorRoute() {
   const { id = '' } = useParams();
   const { user } = useMe();
+  const { message } = App.useApp();
   const calculation = useCalculation(id);
   const latest = calculation.data?.latest;
   const mayReview =
@@ -60,7 +64,18 @@ export function CalculationEditorRoute() {
       ) : null}
       {calculation.data ? (
         <section aria-label="Versions" style={{ marginTop: 24 }}>
-          <Typography.Title level={4}>Versions</Typography.Title>
+          <Space style={{ width: '100%', justifyContent: 'space-between' }}>
+            <Typography.Title level={4}>Versions</Typography.Title>
+            <Button
+              onClick={() =>
+                void downloadCalculationFile(id).catch(
+                  (error: Error) => void message.error(error.message),
+                )
+              }
+            >
+              Export file
+            </Button>
+          </Space>
           <VersionHistory
             versions={calculation.data.versions}
             sheetHref={(n) => paths.sheet.href(id, n)}

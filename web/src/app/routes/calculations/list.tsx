@@ -3,6 +3,7 @@ import { useNavigate } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/auth-api';
 import { CalculationsTable } from '@/features/calculations/components/calculations-table';
+import { ImportCalculationButton } from '@/features/calculations/components/import-calculation-button';
 import { NewCalculationButton } from '@/features/calculations/components/new-calculation-button';
 
 export function CalculationsRoute() {
@@ -16,7 +17,12 @@ export function CalculationsRoute() {
           Calculations
         </Typography.Title>
         {mayCreate ? (
-          <NewCalculationButton onCreated={(id) => void navigate(paths.calculation.href(id))} />
+          <Space>
+            <ImportCalculationButton
+              onImported={(id) => void navigate(paths.calculation.href(id))}
+            />
+            <NewCalculationButton onCreated={(id) => void navigate(paths.calculation.href(id))} />
+          </Space>
         ) : null}
       </Space>
       <CalculationsTable

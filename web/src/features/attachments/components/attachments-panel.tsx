@@ -19,6 +19,7 @@ import {
   useRemoveAttachment,
   useUploadAttachment,
 } from '../api/attachments-api';
+import { saveBlob } from '@/lib/save-blob';
 import { AttachmentPreview } from './attachment-preview';
 
 const TYPE_NAMES: Record<string, string> = {
@@ -40,16 +41,6 @@ const sizeText = (bytes: number) =>
 
 const previewable = (attachment: Attachment) =>
   attachment.mediaType.startsWith('image/') || attachment.mediaType.startsWith('text/');
-
-function saveBlob(blob: Blob, fileName: string) {
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = fileName;
-  link.click();
-  // The click has started the download; the URL is no longer needed after this turn.
-  setTimeout(() => URL.revokeObjectURL(url), 0);
-}
 
 /**
  * Files kept with a calculation (or one fill log of it): photos of the set-up and the scale,

@@ -7,6 +7,7 @@ import {
 } from '@tanstack/react-query';
 import type { CalculationResult } from '@loftwright/buoyancy';
 import { apiClient } from '@/lib/api-client';
+import { dispositionFileName, saveBlob } from '@/lib/save-blob';
 
 export type VersionStatus = 'draft' | 'in_review' | 'approved' | 'changes_requested';
 
@@ -102,6 +103,34 @@ export function useCreateCalculation() {
       visibility?: string;
       tags?: string[];
     }) => (await apiClient.post<CalculationDetail>('/calculations', body)).data,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations', 'list'] }),
+  });
+}
+
+/** Downloads the calculation as a Loftwright file (docs/file-format.md). */
+export async function downloadCalculationFile(id: string): Promise<void> {
+  const response = await apiClient.get<Blob>(`/calculations/${id}/export`, {
+    responseType: 'blob',
+  });
+  const header = response.headers['content-disposition'] as string | undefined;
+  saveBlob(response.data, dispositionFileName(header, 'calculation.loftwright.json'));
+}
+
+/** A Loftwright file read in the browser becomes a new calculation of the user's. */
+export function useImportCalculation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (file: File) => {
+      let body: unknown;
+      try {
+        body = JSON.parse(await file.text());
+      } catch {
+        throw new Error(
+          `${file.name} is not a JSON file; a Loftwright file ends in .loftwright.json.`,
+        );
+      }
+      return (await apiClient.post<CalculationDetail>('/calculations/import', body)).data;
+    },
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations', 'list'] }),
   });
 }
