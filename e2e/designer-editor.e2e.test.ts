@@ -202,13 +202,11 @@ describe('a designer’s editor and list: stale saves, unsaved changes, units, q
     expect(file.versions.length).toBe((await latestVersion()).number);
 
     await page.goto(`${product.baseUrl}/calculations`);
-    await page
-      .getByLabel('Loftwright file to import')
-      .setInputFiles({
-        name: 'sphere.loftwright.json',
-        mimeType: 'application/json',
-        buffer: readFileSync(path),
-      });
+    await page.getByLabel('Loftwright file to import').setInputFiles({
+      name: 'sphere.loftwright.json',
+      mimeType: 'application/json',
+      buffer: readFileSync(path),
+    });
     await expect
       .poll(() =>
         page.getByText(/^Imported “Conflict check sphere” with \d+ versions\.$/).isVisible(),
