@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, type Browser } from './support/browser.js';
@@ -155,6 +156,32 @@ describe('field records in the browser: files, fill logs and reading imports', (
       .poll(() => log.getByRole('img', { name: /over 3 readings/ }).isVisible())
       .toBe(true);
     expect(await log.locator('[data-output="lossRate"]').count()).toBe(1);
+  });
+
+  it('exports the fill logs and the calculations table as files', async () => {
+    screenshotOnFailure(() => page, 'table-exports');
+    const [fillLogs] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Export the fill logs as CSV' }).click(),
+    ]);
+    expect(fillLogs.suggestedFilename()).toBe('loftwright-fill-logs.csv');
+    const csv = readFileSync(await fillLogs.path(), 'utf8');
+    expect(csv).toContain('Measured net lift (kg)');
+    expect(csv).toContain('North hut');
+
+    await page.getByRole('menuitem', { name: 'Calculations' }).click();
+    await page.getByRole('button', { name: 'Other formats for the calculations' }).click();
+    const [workbook] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('menuitem', { name: 'Excel workbook (XLSX)' }).click(),
+    ]);
+    expect(workbook.suggestedFilename()).toBe('loftwright-calculations.xlsx');
+    // An XLSX file is a ZIP archive.
+    expect(
+      readFileSync(await workbook.path())
+        .subarray(0, 2)
+        .toString(),
+    ).toBe('PK');
   });
 
   it('logged no console errors', () => {

@@ -37,5 +37,7 @@ export default defineConfig({
     globals: true,
     include: ['src/**/*.test.{ts,tsx}'],
     setupFiles: ['./src/testing/setup-tests.ts'],
+    // antd under jsdom renders slowly on a busy two-core CI machine; 5 s was seen to be too short.
+    testTimeout: 20_000,
   },
 });

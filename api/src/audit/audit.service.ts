@@ -54,4 +54,15 @@ export class AuditService {
       .getManyAndCount();
     return { items, total, page: query.page, pageSize: query.pageSize };
   }
+
+  /** Every entry the filters match, newest first, at most `limit`. */
+  async listAll(query: ListAuditDto, limit: number): Promise<AuditEntry[]> {
+    const rows: AuditEntry[] = [];
+    for (let page = 1; rows.length < limit; page += 1) {
+      const { items } = await this.list({ ...query, page, pageSize: 500 });
+      rows.push(...items);
+      if (items.length < 500) break;
+    }
+    return rows.slice(0, limit);
+  }
 }

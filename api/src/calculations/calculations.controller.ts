@@ -13,16 +13,18 @@ import {
   Res,
 } from '@nestjs/common';
 import { ApiBearerAuth, ApiConflictResponse, ApiTags } from '@nestjs/swagger';
+import { KINDS } from '@loftwright/buoyancy';
 import type { Response } from 'express';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { sendTable } from '../common/export/table-export';
 import { intParam } from '../common/pipes/int-param.pipe';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
 import { CalculationTransferService } from './calculation-transfer.service';
 import { CalculationsService } from './calculations.service';
 import { ImportCalculationDto } from './dto/import-calculation.dto';
 import { CreateCalculationDto } from './dto/create-calculation.dto';
-import { ListCalculationsDto } from './dto/list-calculations.dto';
+import { ExportCalculationsDto, ListCalculationsDto } from './dto/list-calculations.dto';
 import { SaveVersionDto } from './dto/save-version.dto';
 import { UpdateCalculationDto } from './dto/update-calculation.dto';
 
@@ -39,6 +41,38 @@ export class CalculationsController {
   @Post('import')
   import(@CurrentUser() user: AuthUser, @Body() body: ImportCalculationDto) {
     return this.transfer.import(user, body);
+  }
+
+  /** The list as CSV or XLSX, with the same filters and order, up to 10,000 rows. */
+  @Get('export')
+  async exportTable(
+    @CurrentUser() user: AuthUser,
+    @Query() query: ExportCalculationsDto,
+    @Res() response: Response,
+  ): Promise<void> {
+    const rows = await this.calculationsService.listAll(user, query, 10_000);
+    await sendTable(
+      response,
+      query.format ?? 'csv',
+      'loftwright-calculations',
+      [
+        { header: 'Title', value: (row) => row.title, width: 40 },
+        {
+          header: 'Kind',
+          value: (row) => KINDS.find((kind) => kind.id === row.kind)?.title ?? row.kind,
+          width: 22,
+        },
+        { header: 'Status', value: (row) => row.status.replace('_', ' ') },
+        { header: 'Latest version', value: (row) => row.latestVersion, width: 10 },
+        { header: 'Owner', value: (row) => row.owner?.displayName ?? '' },
+        { header: 'Visibility', value: (row) => row.visibility },
+        { header: 'Tags', value: (row) => row.tags.join(', '), width: 24 },
+        { header: 'Created (UTC)', value: (row) => new Date(row.createdAt), width: 22 },
+        { header: 'Updated (UTC)', value: (row) => new Date(row.updatedAt), width: 22 },
+        { header: 'Id', value: (row) => row.id, width: 38 },
+      ],
+      rows,
+    );
   }
 
   @Get(':id/export')

@@ -1,5 +1,6 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiPropertyOptional, IntersectionType } from '@nestjs/swagger';
 import { IsISO8601, IsOptional, IsString, IsUUID, MaxLength } from 'class-validator';
+import { ExportFormatQuery } from '../../common/export/export-format.query';
 import { PageQueryDto } from '../../common/dto/page-query.dto';
 
 export class ListAuditDto extends PageQueryDto {
@@ -30,3 +31,6 @@ export class ListAuditDto extends PageQueryDto {
   @IsISO8601()
   to?: string;
 }
+
+/** The list's filters and order, and the file format. */
+export class ExportAuditDto extends IntersectionType(ListAuditDto, ExportFormatQuery) {}

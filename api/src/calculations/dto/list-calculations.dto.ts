@@ -1,5 +1,6 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiPropertyOptional, IntersectionType } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
+import { ExportFormatQuery } from '../../common/export/export-format.query';
 import { KIND_IDS } from '@loftwright/buoyancy';
 import { PageQueryDto } from '../../common/dto/page-query.dto';
 import { VERSION_STATUSES } from '../calculation-version.entity';
@@ -45,3 +46,9 @@ export class ListCalculationsDto extends PageQueryDto {
   @MaxLength(100)
   q?: string;
 }
+
+/** The list's filters and order, and the file format. */
+export class ExportCalculationsDto extends IntersectionType(
+  ListCalculationsDto,
+  ExportFormatQuery,
+) {}

@@ -1,4 +1,5 @@
-import { Input, Table } from 'antd';
+import { Input, Space, Table } from 'antd';
+import { ExportButton } from '@/components/export/export-button';
 import { useState } from 'react';
 import { type AuditRow, useAudit } from '../api/admin-api';
 
@@ -11,15 +12,22 @@ export function AuditTable() {
   const audit = useAudit(params);
   return (
     <>
-      <Input.Search
-        aria-label="Filter by action"
-        placeholder="Action, e.g. version.approve"
-        allowClear
-        style={{ width: 300, marginBottom: 12 }}
-        onSearch={(action) =>
-          setParams({ page: 1, pageSize: params.pageSize, ...(action ? { action } : {}) })
-        }
-      />
+      <Space wrap style={{ marginBottom: 12 }}>
+        <Input.Search
+          aria-label="Filter by action"
+          placeholder="Action, e.g. version.approve"
+          allowClear
+          style={{ width: 300 }}
+          onSearch={(action) =>
+            setParams({ page: 1, pageSize: params.pageSize, ...(action ? { action } : {}) })
+          }
+        />
+        <ExportButton
+          path="/admin/audit/export"
+          params={params.action ? { action: params.action } : {}}
+          what="the audit trail"
+        />
+      </Space>
       <Table<AuditRow>
         rowKey="id"
         size="small"

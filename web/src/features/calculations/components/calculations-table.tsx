@@ -11,6 +11,7 @@ import {
   useCalculations,
   useDuplicateCalculation,
 } from '../api/calculations-api';
+import { ExportButton } from '@/components/export/export-button';
 import { StatusTag } from './status-tag';
 
 const KIND_TITLES = new Map(KINDS.map((kind) => [kind.id, kind.title]));
@@ -107,6 +108,7 @@ export function CalculationsTable({
           }
           onChange={(event) => (event.target.value === '' ? set({ tag: undefined }) : undefined)}
         />
+        <ExportButton path="/calculations/export" params={{ ...params }} what="the calculations" />
       </Space>
       {error ? <Typography.Text type="danger">{error.message}</Typography.Text> : null}
       <Table<CalculationSummary>

@@ -1,6 +1,7 @@
-import { Button, Card, Table, Typography } from 'antd';
+import { Button, Card, Space, Table, Typography } from 'antd';
 import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
 import { type ReactNode, useState } from 'react';
+import { ExportButton } from '@/components/export/export-button';
 import { type FillLog, useFillLogs } from '../api/fill-logs-api';
 import { FillLogDetail } from './fill-log-detail';
 import { FillLogForm } from './fill-log-form';
@@ -37,11 +38,17 @@ export function FillLogsPanel({
       size="small"
       style={{ marginTop: 16 }}
       extra={
-        canEdit ? (
-          <Button type="primary" onClick={() => setLogging(true)}>
-            Log a fill
-          </Button>
-        ) : null
+        <Space>
+          <ExportButton
+            path={`/calculations/${calculationId}/fill-logs/export`}
+            what="the fill logs"
+          />
+          {canEdit ? (
+            <Button type="primary" onClick={() => setLogging(true)}>
+              Log a fill
+            </Button>
+          ) : null}
+        </Space>
       }
     >
       {!predicts ? (
