@@ -12,6 +12,7 @@ import { EvaluateModule } from './evaluate/evaluate.module';
 import { FillLogsModule } from './fill-logs/fill-logs.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
+import { PlansModule } from './plans/plans.module';
 import { ReviewsModule } from './reviews/reviews.module';
 import { SeedModule } from './seed/seed.module';
 import { UsersModule } from './users/users.module';
@@ -33,6 +34,7 @@ import { UsersModule } from './users/users.module';
     ReviewsModule,
     AttachmentsModule,
     FillLogsModule,
+    PlansModule,
     EvaluateModule,
     HealthModule,
     SeedModule,

@@ -7,6 +7,7 @@ import { PasswordResetToken } from '../auth/password-reset-token.entity';
 import { CalculationVersion } from '../calculations/calculation-version.entity';
 import { Calculation } from '../calculations/calculation.entity';
 import { FillLog } from '../fill-logs/fill-log.entity';
+import { GasPlanRecord } from '../plans/plan.entity';
 import { Installation } from '../health/installation.entity';
 import { OutboxMessage } from '../mail/outbox-message.entity';
 import { Review } from '../reviews/review.entity';
@@ -16,6 +17,7 @@ import { AccountsCalculationsReviews1764640800000 } from './migrations/176464080
 import { Attachments1764720000000 } from './migrations/1764720000000-attachments';
 import { FillLogs1764723600000 } from './migrations/1764723600000-fill-logs';
 import { OutboxAttachments1764727200000 } from './migrations/1764727200000-outbox-attachments';
+import { GasPlans1764730800000 } from './migrations/1764730800000-gas-plans';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -30,6 +32,7 @@ export const ENTITIES = [
   OutboxMessage,
   Attachment,
   FillLog,
+  GasPlanRecord,
 ];
 export const MIGRATIONS = [
   InitSchema1764633600000,
@@ -37,6 +40,7 @@ export const MIGRATIONS = [
   Attachments1764720000000,
   FillLogs1764723600000,
   OutboxAttachments1764727200000,
+  GasPlans1764730800000,
 ];
 
 /**

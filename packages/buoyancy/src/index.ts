@@ -89,3 +89,6 @@ export type {
   FillLogReduction,
   FillReading,
 } from './measurement/fill-log.js';
+export { planGas } from './plan/gas-plan.js';
+export type { GasPlan, GasPlanInput, GasPlanLine } from './plan/gas-plan.js';
+export type { GasSupplyInput } from './kinds/gas-supply.kind.js';

@@ -1,0 +1,38 @@
+import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+
+/**
+ * A gas and cost plan for an event or a launch campaign: envelopes times counts, the supply and
+ * the prices, and the server's computation of what it all takes.
+ */
+@Entity('gas_plan')
+export class GasPlanRecord {
+  @PrimaryColumn('varchar', { length: 36 })
+  id: string;
+
+  @Column('varchar', { name: 'owner_id', length: 36 })
+  ownerId: string;
+
+  @Column('varchar')
+  title: string;
+
+  /** The day of the event, as the planner entered it (ISO date), or empty. */
+  @Column('varchar', { name: 'event_date', default: '' })
+  eventDate: string;
+
+  /** What the planner entered: lines (calculation versions or volumes) and supply settings. */
+  @Column('simple-json')
+  inputs: unknown;
+
+  /** Lines with their volumes resolved, totals, and the gas-supply result. */
+  @Column('simple-json')
+  result: unknown;
+
+  @Column('varchar', { name: 'engine_version' })
+  engineVersion: string;
+
+  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  updatedAt: Date;
+}
