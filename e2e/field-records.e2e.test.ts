@@ -184,6 +184,44 @@ describe('field records in the browser: files, fill logs and reading imports', (
     ).toBe('PK');
   });
 
+  it('plans the gas for a launch weekend from a saved calculation and an entered volume', async () => {
+    screenshotOnFailure(() => page, 'gas-plan');
+    await page.getByRole('menuitem', { name: 'Gas plans' }).click();
+    await page.getByRole('button', { name: 'New gas plan' }).click();
+    await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
+
+    await page.getByRole('combobox', { name: 'Envelope 1 from' }).click();
+    await page.locator('.ant-select-item-option[title^="Shore anemometer"]').click();
+    await page.getByLabel('Envelope 1 count').fill('3');
+    await page.getByRole('button', { name: 'Add an envelope' }).click();
+    await page.getByLabel('Envelope 2 gas per envelope').fill('500 L');
+    await page.getByLabel('Envelope 2 count').fill('4');
+    await page.getByRole('switch', { name: 'Gas cylinders' }).click();
+    await page.getByLabel('One full cylinder (EUR)').fill('320');
+    await page.getByLabel('Delivered gas (EUR/normal m³)').fill('40');
+    await page.getByRole('button', { name: 'Save and compute' }).click();
+    await expect
+      .poll(() => page.getByText("Saved; the figures below are the server's.").isVisible())
+      .toBe(true);
+
+    const lines = page.getByRole('table', { name: 'Plan lines' });
+    expect(await lines.getByRole('row', { name: /Shore anemometer/ }).textContent()).toMatch(/3/);
+    // 4 × 0.5 m³ = 2 m³ for the entered line.
+    expect(await lines.getByRole('row', { name: /Envelope 2/ }).textContent()).toContain(
+      '2.000 m³',
+    );
+    await expect
+      .poll(() =>
+        page
+          .getByRole('img', {
+            name: /^Cost of the plan by source: Cylinders [\d.]+ EUR; Delivered gas [\d.]+ EUR$/,
+          })
+          .isVisible(),
+      )
+      .toBe(true);
+    expect(await page.locator('[data-warning="pressurised-cylinder"]').count()).toBe(1);
+  });
+
   it('logged no console errors', () => {
     expect(consoleErrors).toEqual([]);
   });

@@ -2,6 +2,7 @@ import { Layout, Typography } from 'antd';
 import {
   AuditOutlined,
   ExperimentOutlined,
+  FireOutlined,
   LoginOutlined,
   SettingOutlined,
   TableOutlined,
@@ -23,6 +24,11 @@ export function AppLayout() {
     ...(signedIn
       ? [
           { href: paths.calculations.href(), icon: <TableOutlined />, label: 'Calculations' },
+          ...(user?.roles.some(
+            (role) => role === 'designer' || role === 'teacher' || role === 'admin',
+          )
+            ? [{ href: paths.plans.href(), icon: <FireOutlined />, label: 'Gas plans' }]
+            : []),
           ...(user?.roles.includes('reviewer')
             ? [{ href: paths.reviews.href(), icon: <AuditOutlined />, label: 'Review queue' }]
             : []),

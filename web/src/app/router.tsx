@@ -61,6 +61,14 @@ export const routes: RouteObject[] = [
             lazy: () => import('./routes/admin').then((m) => ({ Component: m.AdminRoute })),
           },
           {
+            path: paths.plans.path,
+            lazy: () => import('./routes/plans').then((m) => ({ Component: m.PlansRoute })),
+          },
+          {
+            path: paths.plan.path,
+            lazy: () => import('./routes/plans').then((m) => ({ Component: m.PlanRoute })),
+          },
+          {
             path: paths.reviews.path,
             lazy: () => import('./routes/reviews').then((m) => ({ Component: m.ReviewsRoute })),
           },

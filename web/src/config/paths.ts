@@ -11,6 +11,8 @@ export const paths = {
   calculations: { path: '/calculations', href: () => '/calculations' },
   calculation: { path: '/calculations/:id', href: (id: string) => `/calculations/${id}` },
   reviews: { path: '/reviews', href: () => '/reviews' },
+  plans: { path: '/plans', href: () => '/plans' },
+  plan: { path: '/plans/:id', href: (id: string) => `/plans/${id}` },
   admin: { path: '/admin', href: () => '/admin' },
   sheet: {
     path: '/calculations/:id/versions/:n/sheet',

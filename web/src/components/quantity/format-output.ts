@@ -28,6 +28,8 @@ export function formatOutput(
       unit: formatted.unit,
     };
   }
+  // Counts (cylinders, cells) read as whole numbers.
+  if (Number.isInteger(value) && unit === '') return { value: String(value), unit };
   const magnitude = value === 0 ? 0 : Math.floor(Math.log10(Math.abs(value)));
   const decimals = Math.min(10, Math.max(0, 3 - magnitude));
   return { value: value.toFixed(decimals), unit };

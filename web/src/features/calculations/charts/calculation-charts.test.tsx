@@ -55,7 +55,7 @@ describe('CalculationCharts', () => {
   it('shows the cost of one fill by source for a gas supply', () => {
     renderCharts('gas-supply');
     expect(screen.getByRole('img').getAttribute('aria-label')).toMatch(
-      /^Cost per fill by gas source: Electrolysis [\d.]+ EUR; Cylinders [\d.]+ EUR; Delivered gas [\d.]+ EUR$/,
+      /^Cost per fill by source: Electrolysis [\d.]+ EUR; Cylinders [\d.]+ EUR; Delivered gas [\d.]+ EUR$/,
     );
   });
 

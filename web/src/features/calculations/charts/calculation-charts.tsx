@@ -2,7 +2,7 @@ import type { CalculationResult, UnitSystem } from '@loftwright/buoyancy';
 import { useMemo } from 'react';
 import { FlightChart } from './flight-chart';
 import { airTemperatureSweep, puritySweep, sizeSweep, sizingSweep } from './lift-sweeps';
-import { SupplyCostChart } from './supply-cost-chart';
+import { SupplyCostChart } from '@/components/charts/supply-cost-chart';
 import { SweepChart } from './sweep-chart';
 
 type Inputs = Record<string, unknown>;

@@ -12,7 +12,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import { ChartFrame } from './chart-frame';
+import { ChartFrame } from '@/components/charts/chart-frame';
 
 /** Altitude and ascent rate against time, the end of the ascent (burst or float) marked. */
 export function FlightChart({

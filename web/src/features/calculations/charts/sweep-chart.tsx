@@ -12,7 +12,7 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import { ChartFrame } from './chart-frame';
+import { ChartFrame } from '@/components/charts/chart-frame';
 import type { LiftSweep } from './lift-sweeps';
 import { niceAxis, tickDecimals } from './nice-axis';
 

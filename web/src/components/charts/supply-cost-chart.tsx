@@ -17,19 +17,23 @@ import { supplyCostsPerFill } from './supply-costs';
 export function SupplyCostChart({
   result,
   inputs,
+  title = 'Cost per fill by source',
+  axisLabel = 'Cost per fill',
 }: {
   result: CalculationResult;
   inputs: Parameters<typeof supplyCostsPerFill>[1];
+  title?: string;
+  axisLabel?: string;
 }) {
   const { token } = theme.useToken();
   const { currency, costs } = supplyCostsPerFill(result, inputs);
   if (costs.length === 0) return null;
   const money = (value: number) => `${value.toFixed(2)} ${currency}`;
-  const description = `Cost per fill by gas source: ${costs
+  const description = `${title}: ${costs
     .map((cost) => `${cost.source} ${money(cost.perFill)}`)
     .join('; ')}`;
   return (
-    <ChartFrame title="Cost per fill by source" description={description} testId="supply-cost">
+    <ChartFrame title={title} description={description} testId="supply-cost">
       <ResponsiveContainer>
         <BarChart data={costs} margin={{ top: 20, right: 16, bottom: 8, left: 16 }}>
           <CartesianGrid stroke={token.colorBorder} vertical={false} />
@@ -37,7 +41,7 @@ export function SupplyCostChart({
           <YAxis
             tickFormatter={(value: number) => value.toFixed(value < 10 ? 1 : 0)}
             label={{
-              value: `Cost per fill (${currency})`,
+              value: `${axisLabel} (${currency})`,
               angle: -90,
               position: 'insideLeft',
               offset: -4,

@@ -1,0 +1,403 @@
+import {
+  Alert,
+  Button,
+  Card,
+  Col,
+  Form,
+  Input,
+  InputNumber,
+  Row,
+  Select,
+  Space,
+  Switch,
+  Table,
+  Typography,
+} from 'antd';
+import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
+import { useId, useState } from 'react';
+import { SupplyCostChart } from '@/components/charts/supply-cost-chart';
+import { ExportButton } from '@/components/export/export-button';
+import { FormError } from '@/components/errors/form-error';
+import { QuantityInput } from '@/components/quantity/quantity-input';
+import { ResultsPanel } from '@/components/results/results-panel';
+import {
+  type Plan,
+  type PlanDraft,
+  type PlanLineResult,
+  useCalculationOptions,
+  useSavePlan,
+} from '../api/plans-api';
+
+const ENTERED = 'entered';
+const DEFAULT_ELECTROLYSER: NonNullable<PlanDraft['electrolyser']> = {
+  currentA: 30,
+  cellsInSeries: 6,
+  faradaicEfficiency: 0.95,
+  voltage: { kind: 'cell', cellVoltageV: 2.1 },
+  supplyEfficiency: 0.88,
+};
+const DEFAULT_CYLINDER: NonNullable<PlanDraft['cylinder']> = {
+  gasId: 'helium',
+  waterVolumeM3: 0.05,
+  fillPressurePa: 2e7,
+  temperatureK: 288.15,
+};
+
+/**
+ * A gas plan: the envelopes of an event times their counts, the air at filling, the supply and
+ * its prices; saved to the server, which computes the totals, running time and cost per source.
+ */
+export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitSystem }) {
+  const id = useId();
+  const save = useSavePlan(plan.id);
+  const options = useCalculationOptions();
+  const [draft, setDraft] = useState<PlanDraft>(plan.inputs);
+  const set = (change: Partial<PlanDraft>) => setDraft((current) => ({ ...current, ...change }));
+  const setLine = (index: number, change: Partial<PlanDraft['lines'][number]>) =>
+    set({
+      lines: draft.lines.map((line, i) => (i === index ? { ...line, ...change } : line)),
+    });
+  const result = save.data?.result ?? plan.result;
+  const currency = draft.prices?.currency ?? '';
+  const savedCurrency = (save.data ?? plan).inputs.prices?.currency ?? '';
+  const volume = (m3: number) => formatQuantity(m3, 'volume', unitSystem).text;
+
+  return (
+    <Row gutter={[16, 16]}>
+      <Col xs={24} xl={12}>
+        <Form layout="vertical" component="div" requiredMark={false}>
+          <Space wrap>
+            <Form.Item label="Plan" htmlFor={`${id}-title`}>
+              <Input
+                id={`${id}-title`}
+                value={draft.title}
+                maxLength={200}
+                style={{ width: 280 }}
+                onChange={(event) => set({ title: event.target.value })}
+              />
+            </Form.Item>
+            <Form.Item label="Event date" htmlFor={`${id}-date`}>
+              <Input
+                id={`${id}-date`}
+                type="date"
+                value={draft.eventDate ?? ''}
+                onChange={(event) => set({ eventDate: event.target.value || undefined })}
+              />
+            </Form.Item>
+          </Space>
+
+          <Typography.Title level={5}>Envelopes</Typography.Title>
+          {draft.lines.map((line, index) => (
+            <Space key={index} wrap align="start" role="group" aria-label={`Envelope ${index + 1}`}>
+              <Form.Item label="From">
+                <Select
+                  aria-label={`Envelope ${index + 1} from`}
+                  style={{ width: 260 }}
+                  loading={options.isPending}
+                  value={line.calculationId ?? ENTERED}
+                  options={[
+                    { value: ENTERED, label: 'A volume I enter' },
+                    ...(options.data ?? []).map((option) => ({
+                      value: option.id,
+                      label: `${option.title} (v${option.latestVersion})`,
+                    })),
+                  ]}
+                  onChange={(value: string) =>
+                    setLine(
+                      index,
+                      value === ENTERED
+                        ? { calculationId: undefined, volumeM3: line.volumeM3 ?? 1 }
+                        : { calculationId: value, volumeM3: undefined },
+                    )
+                  }
+                />
+              </Form.Item>
+              {line.calculationId ? null : (
+                <Form.Item label="Gas per envelope">
+                  <QuantityInput
+                    label={`Envelope ${index + 1} gas per envelope`}
+                    dimension="volume"
+                    value={line.volumeM3}
+                    onChange={(volumeM3) => setLine(index, { volumeM3 })}
+                    unitSystem={unitSystem}
+                  />
+                </Form.Item>
+              )}
+              <Form.Item label="How many">
+                <InputNumber
+                  aria-label={`Envelope ${index + 1} count`}
+                  min={1}
+                  max={100000}
+                  precision={0}
+                  value={line.count}
+                  onChange={(count) => setLine(index, { count: count ?? 1 })}
+                />
+              </Form.Item>
+              <Form.Item label="Name (optional)">
+                <Input
+                  aria-label={`Envelope ${index + 1} name`}
+                  value={line.label ?? ''}
+                  maxLength={200}
+                  onChange={(event) => setLine(index, { label: event.target.value || undefined })}
+                />
+              </Form.Item>
+            </Space>
+          ))}
+          <Space style={{ marginBottom: 16 }}>
+            <Button onClick={() => set({ lines: [...draft.lines, { volumeM3: 1, count: 1 }] })}>
+              Add an envelope
+            </Button>
+            {draft.lines.length > 1 ? (
+              <Button onClick={() => set({ lines: draft.lines.slice(0, -1) })}>
+                Remove the last envelope
+              </Button>
+            ) : null}
+          </Space>
+
+          <Typography.Title level={5}>Gas at filling</Typography.Title>
+          <Space wrap align="start">
+            <Form.Item label="Gas temperature">
+              <QuantityInput
+                label="Gas temperature at filling"
+                dimension="temperature"
+                value={draft.fill.temperatureK}
+                onChange={(temperatureK) =>
+                  temperatureK !== undefined && set({ fill: { ...draft.fill, temperatureK } })
+                }
+                unitSystem={unitSystem}
+              />
+            </Form.Item>
+            <Form.Item label="Gas pressure (absolute)">
+              <QuantityInput
+                label="Gas pressure at filling"
+                dimension="pressure"
+                value={draft.fill.pressurePa}
+                onChange={(pressurePa) =>
+                  pressurePa !== undefined && set({ fill: { ...draft.fill, pressurePa } })
+                }
+                unitSystem={unitSystem}
+              />
+            </Form.Item>
+          </Space>
+
+          <Typography.Title level={5}>Sources</Typography.Title>
+          <Space align="center" style={{ marginBottom: 8 }}>
+            <Switch
+              aria-label="Own electrolyser"
+              checked={draft.electrolyser !== undefined}
+              onChange={(on) => set({ electrolyser: on ? DEFAULT_ELECTROLYSER : undefined })}
+            />
+            <Typography.Text>Own electrolyser (hydrogen)</Typography.Text>
+          </Space>
+          {draft.electrolyser ? (
+            <Space wrap align="start">
+              <Form.Item label="Current">
+                <QuantityInput
+                  label="Electrolyser current"
+                  dimension="current"
+                  value={draft.electrolyser.currentA}
+                  onChange={(currentA) =>
+                    currentA !== undefined &&
+                    draft.electrolyser &&
+                    set({ electrolyser: { ...draft.electrolyser, currentA } })
+                  }
+                  unitSystem={unitSystem}
+                />
+              </Form.Item>
+              <Form.Item label="Cells in series">
+                <InputNumber
+                  aria-label="Cells in series"
+                  min={1}
+                  max={1000}
+                  precision={0}
+                  value={draft.electrolyser.cellsInSeries}
+                  onChange={(cellsInSeries) =>
+                    draft.electrolyser &&
+                    set({
+                      electrolyser: { ...draft.electrolyser, cellsInSeries: cellsInSeries ?? 1 },
+                    })
+                  }
+                />
+              </Form.Item>
+              <Form.Item label="Voltage per cell">
+                <QuantityInput
+                  label="Voltage per cell"
+                  dimension="voltage"
+                  value={draft.electrolyser.voltage.cellVoltageV}
+                  onChange={(cellVoltageV) =>
+                    cellVoltageV !== undefined &&
+                    draft.electrolyser &&
+                    set({
+                      electrolyser: {
+                        ...draft.electrolyser,
+                        voltage: { kind: 'cell', cellVoltageV },
+                      },
+                    })
+                  }
+                  unitSystem={unitSystem}
+                />
+              </Form.Item>
+            </Space>
+          ) : null}
+          <Space align="center" style={{ margin: '8px 0' }}>
+            <Switch
+              aria-label="Gas cylinders"
+              checked={draft.cylinder !== undefined}
+              onChange={(on) => set({ cylinder: on ? DEFAULT_CYLINDER : undefined })}
+            />
+            <Typography.Text>Gas cylinders</Typography.Text>
+          </Space>
+          {draft.cylinder ? (
+            <Space wrap align="start">
+              <Form.Item label="Gas">
+                <Select
+                  aria-label="Cylinder gas"
+                  style={{ width: 140 }}
+                  value={draft.cylinder.gasId}
+                  options={[
+                    { value: 'helium', label: 'Helium' },
+                    { value: 'hydrogen', label: 'Hydrogen' },
+                  ]}
+                  onChange={(gasId: string) =>
+                    draft.cylinder && set({ cylinder: { ...draft.cylinder, gasId } })
+                  }
+                />
+              </Form.Item>
+              <Form.Item label="Water volume of one cylinder">
+                <QuantityInput
+                  label="Cylinder water volume"
+                  dimension="volume"
+                  value={draft.cylinder.waterVolumeM3}
+                  onChange={(waterVolumeM3) =>
+                    waterVolumeM3 !== undefined &&
+                    draft.cylinder &&
+                    set({ cylinder: { ...draft.cylinder, waterVolumeM3 } })
+                  }
+                  unitSystem={unitSystem}
+                />
+              </Form.Item>
+              <Form.Item label="Fill pressure (gauge)">
+                <QuantityInput
+                  label="Cylinder fill pressure"
+                  dimension="pressureDifference"
+                  value={draft.cylinder.fillPressurePa}
+                  onChange={(fillPressurePa) =>
+                    fillPressurePa !== undefined &&
+                    draft.cylinder &&
+                    set({ cylinder: { ...draft.cylinder, fillPressurePa } })
+                  }
+                  unitSystem={unitSystem}
+                />
+              </Form.Item>
+            </Space>
+          ) : null}
+
+          <Typography.Title level={5}>Prices</Typography.Title>
+          <Space wrap align="start">
+            <Form.Item label="Currency" htmlFor={`${id}-currency`}>
+              <Input
+                id={`${id}-currency`}
+                value={currency}
+                maxLength={8}
+                style={{ width: 90 }}
+                onChange={(event) =>
+                  set({ prices: { ...draft.prices, currency: event.target.value } })
+                }
+              />
+            </Form.Item>
+            <Form.Item label="Quoted on" htmlFor={`${id}-prices-date`}>
+              <Input
+                id={`${id}-prices-date`}
+                type="date"
+                value={draft.pricesDate ?? ''}
+                onChange={(event) => set({ pricesDate: event.target.value || undefined })}
+              />
+            </Form.Item>
+            {(
+              [
+                ['electricityPerKWh', `Electricity (${currency}/kWh)`],
+                ['cylinderEach', `One full cylinder (${currency})`],
+                ['bulkGasPerM3', `Delivered gas (${currency}/normal m³)`],
+              ] as const
+            ).map(([key, label]) => (
+              <Form.Item key={key} label={label}>
+                <InputNumber
+                  aria-label={label}
+                  min={0}
+                  value={draft.prices?.[key]}
+                  onChange={(value) =>
+                    set({
+                      prices: {
+                        currency,
+                        ...draft.prices,
+                        [key]: value === null ? undefined : value,
+                      },
+                    })
+                  }
+                />
+              </Form.Item>
+            ))}
+          </Space>
+          <FormError error={save.error} />
+          <Button type="primary" loading={save.isPending} onClick={() => save.mutate(draft)}>
+            Save and compute
+          </Button>
+        </Form>
+      </Col>
+      <Col xs={24} xl={12}>
+        <Card
+          title="Gas for the plan"
+          size="small"
+          extra={<ExportButton path={`/plans/${plan.id}/export`} what="the plan lines" />}
+        >
+          <Table<PlanLineResult>
+            size="small"
+            rowKey={(line) => `${line.label}-${line.calculationId ?? ''}-${line.count}`}
+            aria-label="Plan lines"
+            pagination={false}
+            dataSource={result.lines}
+            columns={[
+              { title: 'Envelope', dataIndex: 'label' },
+              { title: 'Gas each', dataIndex: 'volumeM3', render: volume },
+              { title: 'Count', dataIndex: 'count' },
+              { title: 'Gas in all', dataIndex: 'totalM3', render: volume },
+            ]}
+            summary={() => (
+              <Table.Summary.Row>
+                <Table.Summary.Cell index={0} colSpan={3}>
+                  <Typography.Text strong>Total, at filling conditions</Typography.Text>
+                </Table.Summary.Cell>
+                <Table.Summary.Cell index={1}>
+                  <Typography.Text strong data-total>
+                    {volume(result.totalM3)}
+                  </Typography.Text>
+                </Table.Summary.Cell>
+              </Table.Summary.Row>
+            )}
+          />
+        </Card>
+        {save.isSuccess ? (
+          <Alert
+            type="success"
+            showIcon
+            title="Saved; the figures below are the server's."
+            style={{ marginTop: 12 }}
+          />
+        ) : null}
+        <SupplyCostChart
+          result={{ outputs: result.outputs, steps: result.steps, warnings: result.warnings }}
+          inputs={{ fill: { count: 1 }, prices: { currency: savedCurrency } }}
+          title="Cost of the plan by source"
+          axisLabel="Cost"
+        />
+        <div style={{ marginTop: 16 }}>
+          <ResultsPanel
+            result={{ outputs: result.outputs, steps: result.steps, warnings: result.warnings }}
+            unitSystem={unitSystem}
+            title="Supply for the whole plan"
+          />
+        </div>
+      </Col>
+    </Row>
+  );
+}
