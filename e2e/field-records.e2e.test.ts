@@ -47,6 +47,8 @@ describe('field records in the browser: files, fill logs and reading imports', (
     await page.getByRole('link', { name: /^Shore anemometer/ }).click();
     await page.waitForURL(/\/calculations\/[0-9a-f-]{36}$/);
     calculationUrl = page.url();
+    // The drop zone is ready once the (empty) file list has loaded.
+    await expect.poll(() => files().getByText('No files yet').isVisible()).toBe(true);
 
     await chooseFile('rig-photo.png', 'image/png', PNG);
     await expect.poll(() => page.getByText('Added rig-photo.png.').isVisible()).toBe(true);
@@ -220,6 +222,33 @@ describe('field records in the browser: files, fill logs and reading imports', (
       )
       .toBe(true);
     expect(await page.locator('[data-warning="pressurised-cylinder"]').count()).toBe(1);
+  });
+
+  it('turns an energy-meter CSV into the metered energy of a gas supply', async () => {
+    screenshotOnFailure(() => page, 'meter-import');
+    await page.getByRole('menuitem', { name: 'Calculations' }).click();
+    await page.getByRole('link', { name: /^Bench electrolyser/ }).click();
+    await page.waitForURL(/\/calculations\/[0-9a-f-]{36}$/);
+    await page.getByRole('button', { name: 'Energy from a meter log (CSV)' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Energy used, from an energy-meter CSV' });
+    const choose = (csv: string) =>
+      dialog
+        .getByLabel('Meter CSV file')
+        .setInputFiles({ name: 'meter.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+
+    await choose('seconds,watts\n0,1200\n600,oops\n1800,1200\n');
+    const check = dialog.getByRole('status', { name: 'Meter check' });
+    await expect.poll(() => check.textContent()).toMatch(/Line 3: power .*not a number/);
+    expect(await dialog.getByRole('button', { name: 'Use this energy' }).isDisabled()).toBe(true);
+
+    // 1200 W for 1800 s = 2.16 MJ = 600 Wh.
+    await choose('seconds,watts\n0,1200\n600,1200\n1800,1200\n');
+    await expect.poll(() => check.textContent()).toContain('Energy used: 600.0 Wh');
+    await dialog.getByRole('button', { name: 'Use this energy' }).click();
+    await expect.poll(() => page.locator('[data-output="measuredSpecificEnergy"]').count()).toBe(1);
+    await expect
+      .poll(() => page.getByRole('status', { name: 'Results (live, not saved)' }).isVisible())
+      .toBe(true);
   });
 
   it('logged no console errors', () => {

@@ -92,3 +92,5 @@ export type {
 export { planGas } from './plan/gas-plan.js';
 export type { GasPlan, GasPlanInput, GasPlanLine } from './plan/gas-plan.js';
 export type { GasSupplyInput } from './kinds/gas-supply.kind.js';
+export { meterEnergy } from './supply/meter-energy.js';
+export type { MeterEnergy, MeterLog } from './supply/meter-energy.js';

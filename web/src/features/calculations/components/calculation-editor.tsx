@@ -17,6 +17,7 @@ import {
   type VersionDetail,
 } from '../api/calculations-api';
 import { ConflictDialog, type SaveConflict } from './conflict-dialog';
+import { MeterImport } from './meter-import';
 import { DerivationPanel } from '@/components/results/derivation-panel';
 import { ResultsPanel } from '@/components/results/results-panel';
 import { SchemaField } from './schema-form';
@@ -109,6 +110,7 @@ export function EditorBody({
   const [savedInputs, setSavedInputs] = useState<string>(() => JSON.stringify(latest?.inputs));
   const [note, setNote] = useState('');
   const [conflict, setConflict] = useState<SaveConflict | null>(null);
+  const [meterOpen, setMeterOpen] = useState(false);
 
   const deferredInputs = useDeferredValue(inputs);
   const kind = detail.kind;
@@ -200,6 +202,11 @@ export function EditorBody({
                 disabled={!editable}
               />
             </Form>
+            {editable && kind === 'gas-supply' ? (
+              <Button style={{ marginBottom: 12 }} onClick={() => setMeterOpen(true)}>
+                Energy from a meter log (CSV)
+              </Button>
+            ) : null}
             {editable ? (
               <Space orientation="vertical" style={{ width: '100%' }}>
                 <Input
@@ -264,6 +271,30 @@ export function EditorBody({
           <DerivationPanel steps={live.result?.steps ?? latest?.steps ?? []} />
         </Col>
       </Row>
+      {meterOpen ? (
+        <MeterImport
+          open={meterOpen}
+          unitSystem={unitSystem}
+          onClose={() => setMeterOpen(false)}
+          onUse={(energyJ) => {
+            const current = (inputs ?? {}) as {
+              fill?: { volumeM3?: number };
+              measured?: { volumeM3?: number };
+            };
+            setInputs({
+              ...current,
+              measured: {
+                energyJ,
+                volumeM3: current.measured?.volumeM3 ?? current.fill?.volumeM3 ?? 1,
+              },
+            });
+            setMeterOpen(false);
+            void message.info(
+              'Metered energy entered. Check the measured gas volume, then save a version.',
+            );
+          }}
+        />
+      ) : null}
       <ConflictDialog
         kind={kind}
         conflict={conflict}

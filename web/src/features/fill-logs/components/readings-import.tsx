@@ -3,11 +3,10 @@ import type { UnitSystem } from '@loftwright/buoyancy';
 import { useMemo, useState } from 'react';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import { FormError } from '@/components/errors/form-error';
+import { parseCsv, type ParsedCsv } from '@/lib/parse-csv';
 import { type FillLog, useAddReadings } from '../api/fill-logs-api';
 import {
   MASS_UNITS,
-  parseCsv,
-  type ParsedCsv,
   PRESSURE_UNITS,
   type ReadingColumns,
   readingsFromCsv,

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { parseCsv, readingsFromCsv } from './readings-from-csv';
+import { parseCsv } from '@/lib/parse-csv';
+import { readingsFromCsv } from './readings-from-csv';
 
 const ambient = { temperatureK: 288.15, pressurePa: 101325 };
 

@@ -1,0 +1,190 @@
+import { Alert, Button, Form, List, Modal, Radio, Select, Space, Table, Typography } from 'antd';
+import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
+import { useMemo, useState } from 'react';
+import { parseCsv, type ParsedCsv } from '@/lib/parse-csv';
+import {
+  ENERGY_UNITS,
+  METER_TIME_UNITS,
+  type MeterColumns,
+  meterFromCsv,
+  POWER_UNITS,
+} from '../lib/meter-from-csv';
+
+const options = (values: readonly string[]) => values.map((value) => ({ value, label: value }));
+
+/**
+ * An energy meter's CSV export (power over time, or a cumulative register) turned into the
+ * energy used; the user then puts it into the gas-supply inputs, and it is stored with the next
+ * saved version.
+ */
+export function MeterImport({
+  open,
+  unitSystem,
+  onClose,
+  onUse,
+}: {
+  open: boolean;
+  unitSystem: UnitSystem;
+  onClose: () => void;
+  onUse: (energyJ: number) => void;
+}) {
+  const [parsed, setParsed] = useState<ParsedCsv>();
+  const [time, setTime] = useState<MeterColumns['time']>({ column: '', unit: 's' });
+  const [kind, setKind] = useState<'power' | 'cumulative'>('power');
+  const [valueColumn, setValueColumn] = useState('');
+  const [valueUnit, setValueUnit] = useState<string>('W');
+
+  const mapped = useMemo(() => {
+    if (!parsed || !time.column || !valueColumn) return undefined;
+    const value =
+      kind === 'power'
+        ? { kind, column: valueColumn, unit: valueUnit as (typeof POWER_UNITS)[number] }
+        : { kind, column: valueColumn, unit: valueUnit as (typeof ENERGY_UNITS)[number] };
+    return meterFromCsv(parsed, { time, value });
+  }, [parsed, time, kind, valueColumn, valueUnit]);
+  const columnOptions = options(parsed?.columns ?? []);
+  const energy = mapped?.energy;
+
+  return (
+    <Modal
+      open={open}
+      title="Energy used, from an energy-meter CSV"
+      width={760}
+      onCancel={onClose}
+      destroyOnHidden
+      footer={[
+        <Button key="cancel" onClick={onClose}>
+          Cancel
+        </Button>,
+        <Button
+          key="use"
+          type="primary"
+          disabled={!energy || (mapped?.bad.length ?? 0) > 0}
+          onClick={() => energy && onUse(energy.energyJ)}
+        >
+          Use this energy
+        </Button>,
+      ]}
+    >
+      <Form layout="vertical" component="div">
+        <Form.Item label="CSV file with a header row">
+          <input
+            type="file"
+            accept=".csv,text/csv,text/plain"
+            aria-label="Meter CSV file"
+            onChange={(event) => {
+              const file = event.target.files?.[0];
+              if (!file) return;
+              void file.text().then((text) => {
+                const next = parseCsv(text);
+                setParsed(next);
+                setTime({ column: next.columns[0] ?? '', unit: 's' });
+                setValueColumn(next.columns[1] ?? '');
+              });
+            }}
+          />
+        </Form.Item>
+        {parsed ? (
+          <>
+            <Table
+              size="small"
+              aria-label="First rows of the meter file"
+              pagination={false}
+              dataSource={parsed.rows
+                .slice(0, 5)
+                .map((row) => ({ key: row.line, line: row.line, ...row.cells }))}
+              columns={[
+                { title: 'Line', dataIndex: 'line' },
+                ...parsed.columns.map((column) => ({
+                  title: column,
+                  dataIndex: column,
+                  key: column,
+                })),
+              ]}
+            />
+            <Space wrap align="start" style={{ marginTop: 12 }}>
+              <Form.Item label="Time column">
+                <Select
+                  aria-label="Meter time column"
+                  style={{ width: 150 }}
+                  value={time.column}
+                  options={columnOptions}
+                  onChange={(column: string) => setTime({ ...time, column })}
+                />
+              </Form.Item>
+              <Form.Item label="Time unit">
+                <Select
+                  aria-label="Meter time unit"
+                  style={{ width: 90 }}
+                  value={time.unit}
+                  options={options(METER_TIME_UNITS)}
+                  onChange={(unit: MeterColumns['time']['unit']) => setTime({ ...time, unit })}
+                />
+              </Form.Item>
+              <Form.Item label="The meter logs">
+                <Radio.Group
+                  value={kind}
+                  onChange={(event) => {
+                    const next = event.target.value as 'power' | 'cumulative';
+                    setKind(next);
+                    setValueUnit(next === 'power' ? 'W' : 'Wh');
+                  }}
+                >
+                  <Radio value="power">power</Radio>
+                  <Radio value="cumulative">energy so far</Radio>
+                </Radio.Group>
+              </Form.Item>
+              <Form.Item label={kind === 'power' ? 'Power column' : 'Energy column'}>
+                <Select
+                  aria-label="Meter value column"
+                  style={{ width: 150 }}
+                  value={valueColumn}
+                  options={columnOptions}
+                  onChange={setValueColumn}
+                />
+              </Form.Item>
+              <Form.Item label="Unit">
+                <Select
+                  aria-label="Meter value unit"
+                  style={{ width: 90 }}
+                  value={valueUnit}
+                  options={options(kind === 'power' ? POWER_UNITS : ENERGY_UNITS)}
+                  onChange={setValueUnit}
+                />
+              </Form.Item>
+            </Space>
+            {mapped ? (
+              <div role="status" aria-label="Meter check">
+                {energy ? (
+                  <Alert
+                    type={mapped.bad.length > 0 ? 'warning' : 'success'}
+                    showIcon
+                    title={`Energy used: ${formatQuantity(energy.energyJ, 'energy', unitSystem).text} over ${formatQuantity(energy.durationS, 'time', unitSystem).text}, mean power ${formatQuantity(energy.meanPowerW, 'power', unitSystem).text} (${energy.samples} samples).`}
+                  />
+                ) : null}
+                {mapped.bad.length > 0 ? (
+                  <>
+                    <Typography.Paragraph type="danger" style={{ marginTop: 8 }}>
+                      Fix these rows in the file first: a meter log with gaps would give the wrong
+                      energy.
+                    </Typography.Paragraph>
+                    <List
+                      size="small"
+                      aria-label="Meter rows that cannot be read"
+                      dataSource={mapped.bad}
+                      renderItem={(row) => (
+                        <List.Item>
+                          Line {row.line}: {row.reason}
+                        </List.Item>
+                      )}
+                    />
+                  </>
+                ) : null}
+              </div>
+            ) : null}
+          </>
+        ) : null}
+      </Form>
+    </Modal>
+  );
+}
