@@ -138,7 +138,7 @@ describe('field records in the browser: files, fill logs and reading imports', (
       .setInputFiles({ name: 'logger.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
     await dialog.getByRole('combobox', { name: 'Time unit' }).click();
     // antd draws its options outside the listbox it exposes; pick the visible one by its title.
-    await page.locator('.ant-select-item-option[title="h"]').click();
+    await page.locator('.ant-select-item-option[title="h"]:visible').click();
     const check = dialog.getByRole('status', { name: 'Import check' });
     await expect
       .poll(() => check.textContent())
@@ -193,7 +193,7 @@ describe('field records in the browser: files, fill logs and reading imports', (
     await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
 
     await page.getByRole('combobox', { name: 'Envelope 1 from' }).click();
-    await page.locator('.ant-select-item-option[title^="Shore anemometer"]').click();
+    await page.locator('.ant-select-item-option[title^="Shore anemometer"]:visible').click();
     await page.getByLabel('Envelope 1 count').fill('3');
     await page.getByRole('button', { name: 'Add an envelope' }).click();
     await page.getByLabel('Envelope 2 gas per envelope').fill('500 L');
@@ -222,6 +222,23 @@ describe('field records in the browser: files, fill logs and reading imports', (
       )
       .toBe(true);
     expect(await page.locator('[data-warning="pressurised-cylinder"]').count()).toBe(1);
+
+    // A third envelope given by its diameter; a diameter that does not read stops the save.
+    await page.getByRole('button', { name: 'Add an envelope' }).click();
+    await page.getByRole('combobox', { name: 'Envelope 3 from' }).click();
+    await page
+      .locator('.ant-select-item-option[title="A sphere of a diameter I enter"]:visible')
+      .click();
+    await page.getByLabel('Envelope 3 diameter').fill('big');
+    await expect
+      .poll(() => page.getByRole('button', { name: 'Save and compute' }).isDisabled())
+      .toBe(true);
+    await page.getByLabel('Envelope 3 diameter').fill('2 m');
+    await page.getByRole('button', { name: 'Save and compute' }).click();
+    // π·(2 m)³/6 = 4.189 m³ (sphere volume, CRC Standard Mathematical Tables).
+    await expect
+      .poll(() => lines.getByRole('row', { name: /Sphere of 2 m/ }).textContent())
+      .toContain('4.189 m³');
   });
 
   it('turns an energy-meter CSV into the metered energy of a gas supply', async () => {

@@ -65,6 +65,18 @@ describe('gas and cost plans', () => {
     expect(response.body.inputs.pricesDate).toBe('2026-11-30');
   });
 
+  it('sizes an ad-hoc sphere from its diameter', async () => {
+    const response = await http()
+      .post('/api/plans')
+      .set(planner.auth)
+      .send(plan({ lines: [{ diameterM: 2, count: 3 }] }));
+    expect(response.status).toBe(201);
+    // V = π·d³/6 = 4.18879 m³ for d = 2 m (CRC Standard Mathematical Tables, sphere).
+    expect(response.body.result.lines[0]).toMatchObject({ label: 'Sphere of 2 m', count: 3 });
+    expect(response.body.result.lines[0].volumeM3).toBeCloseTo(4.18879, 5);
+    expect(response.body.result.totalM3).toBeCloseTo(3 * 4.18879, 4);
+  });
+
   it('recomputes on every save and keeps plans to their owner', async () => {
     const created = await http().post('/api/plans').set(planner.auth).send(plan());
     const id = created.body.id;
@@ -82,7 +94,13 @@ describe('gas and cost plans', () => {
   });
 
   it.each([
-    ['a line with neither a calculation nor a volume', { lines: [{ count: 2 }] }, 400, 'lines.0'],
+    ['a line with neither a calculation nor a size', { lines: [{ count: 2 }] }, 400, 'lines.0'],
+    [
+      'a sphere too small to fill',
+      { lines: [{ diameterM: 0.001, count: 1 }] },
+      400,
+      'diameterM must be at least 0.01 m',
+    ],
     [
       'a calculation the planner may not see',
       { lines: [{ calculationId: '00000000-0000-4000-8000-000000000000', count: 1 }] },

@@ -11,6 +11,7 @@ import {
   type GasPlanLine,
   type GasSupplyInput,
   planGas,
+  sphereGeometry,
 } from '@loftwright/buoyancy';
 import { randomUUID } from 'node:crypto';
 import { Repository } from 'typeorm';
@@ -74,9 +75,18 @@ export class PlansService {
             versionNumber: number,
           };
         }
+        if (line.diameterM !== undefined) {
+          return {
+            label: line.label || `Sphere of ${line.diameterM} m`,
+            volumeM3: sphereGeometry(line.diameterM).volumeM3,
+            count: line.count,
+            calculationId: null,
+            versionNumber: null,
+          };
+        }
         if (line.volumeM3 === undefined) {
           throw new BadRequestException({
-            message: `lines.${index} needs a calculationId or a volumeM3.`,
+            message: `lines.${index} needs a calculationId, a diameterM or a volumeM3.`,
             field: `lines.${index}`,
           });
         }

@@ -44,6 +44,16 @@ export class PlanLineDto {
   versionNumber?: number;
 
   @ApiPropertyOptional({
+    description:
+      'diameter of a spherical envelope [m], for a line with neither calculation nor volume',
+  })
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  @Min(0.01, { message: 'diameterM must be at least 0.01 m' })
+  @Max(500, { message: 'diameterM must be at most 500 m' })
+  diameterM?: number;
+
+  @ApiPropertyOptional({
     description: 'gas per envelope at fill conditions [m³], when no calculation is named',
   })
   @IsOptional()

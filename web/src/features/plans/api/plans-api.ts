@@ -6,7 +6,13 @@ import { apiClient } from '@/lib/api-client';
 export interface PlanDraft {
   title: string;
   eventDate?: string;
-  lines: { label?: string; count: number; calculationId?: string; volumeM3?: number }[];
+  lines: {
+    label?: string;
+    count: number;
+    calculationId?: string;
+    diameterM?: number;
+    volumeM3?: number;
+  }[];
   fill: { temperatureK: number; pressurePa: number };
   electrolyser?: {
     currentA: number;

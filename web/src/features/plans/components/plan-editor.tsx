@@ -29,6 +29,7 @@ import {
 } from '../api/plans-api';
 
 const ENTERED = 'entered';
+const SPHERE = 'sphere';
 const DEFAULT_ELECTROLYSER: NonNullable<PlanDraft['electrolyser']> = {
   currentA: 30,
   cellsInSeries: 6,
@@ -58,6 +59,22 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
       lines: draft.lines.map((line, i) => (i === index ? { ...line, ...change } : line)),
     });
   const result = save.data?.result ?? plan.result;
+  // Fields whose text does not read as a quantity: saving waits until they do, so a value the
+  // user can see is wrong is never saved as the last one that read.
+  const [unreadable, setUnreadable] = useState<ReadonlySet<string>>(new Set());
+  const forget = (...keys: string[]) =>
+    setUnreadable(
+      (current) => new Set([...current].filter((key) => !keys.some((k) => key.startsWith(k)))),
+    );
+  const readAs = (key: string, value: number | undefined, apply: (value: number) => void) => {
+    setUnreadable((current) => {
+      const next = new Set(current);
+      if (value === undefined) next.add(key);
+      else next.delete(key);
+      return next;
+    });
+    if (value !== undefined) apply(value);
+  };
   const currency = draft.prices?.currency ?? '';
   const savedCurrency = (save.data ?? plan).inputs.prices?.currency ?? '';
   const volume = (m3: number) => formatQuantity(m3, 'volume', unitSystem).text;
@@ -94,31 +111,62 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
                   aria-label={`Envelope ${index + 1} from`}
                   style={{ width: 260 }}
                   loading={options.isPending}
-                  value={line.calculationId ?? ENTERED}
+                  value={line.calculationId ?? (line.diameterM === undefined ? ENTERED : SPHERE)}
                   options={[
                     { value: ENTERED, label: 'A volume I enter' },
+                    { value: SPHERE, label: 'A sphere of a diameter I enter' },
                     ...(options.data ?? []).map((option) => ({
                       value: option.id,
                       label: `${option.title} (v${option.latestVersion})`,
                     })),
                   ]}
-                  onChange={(value: string) =>
+                  onChange={(value: string) => {
+                    forget(`lines.${index}.`);
                     setLine(
                       index,
                       value === ENTERED
-                        ? { calculationId: undefined, volumeM3: line.volumeM3 ?? 1 }
-                        : { calculationId: value, volumeM3: undefined },
-                    )
-                  }
+                        ? {
+                            calculationId: undefined,
+                            diameterM: undefined,
+                            volumeM3: line.volumeM3 ?? 1,
+                          }
+                        : value === SPHERE
+                          ? {
+                              calculationId: undefined,
+                              volumeM3: undefined,
+                              diameterM: line.diameterM ?? 1,
+                            }
+                          : { calculationId: value, volumeM3: undefined, diameterM: undefined },
+                    );
+                  }}
                 />
               </Form.Item>
-              {line.calculationId ? null : (
+              {line.diameterM !== undefined ? (
+                <Form.Item label="Diameter">
+                  <QuantityInput
+                    label={`Envelope ${index + 1} diameter`}
+                    dimension="length"
+                    value={line.diameterM}
+                    onChange={(diameterM) =>
+                      readAs(`lines.${index}.diameterM`, diameterM, (value) =>
+                        setLine(index, { diameterM: value }),
+                      )
+                    }
+                    unitSystem={unitSystem}
+                  />
+                </Form.Item>
+              ) : null}
+              {line.calculationId || line.diameterM !== undefined ? null : (
                 <Form.Item label="Gas per envelope">
                   <QuantityInput
                     label={`Envelope ${index + 1} gas per envelope`}
                     dimension="volume"
                     value={line.volumeM3}
-                    onChange={(volumeM3) => setLine(index, { volumeM3 })}
+                    onChange={(volumeM3) =>
+                      readAs(`lines.${index}.volumeM3`, volumeM3, (value) =>
+                        setLine(index, { volumeM3: value }),
+                      )
+                    }
                     unitSystem={unitSystem}
                   />
                 </Form.Item>
@@ -148,7 +196,12 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
               Add an envelope
             </Button>
             {draft.lines.length > 1 ? (
-              <Button onClick={() => set({ lines: draft.lines.slice(0, -1) })}>
+              <Button
+                onClick={() => {
+                  forget(`lines.${draft.lines.length - 1}.`);
+                  set({ lines: draft.lines.slice(0, -1) });
+                }}
+              >
                 Remove the last envelope
               </Button>
             ) : null}
@@ -162,7 +215,9 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
                 dimension="temperature"
                 value={draft.fill.temperatureK}
                 onChange={(temperatureK) =>
-                  temperatureK !== undefined && set({ fill: { ...draft.fill, temperatureK } })
+                  readAs('temperatureK', temperatureK, (temperatureK) =>
+                    set({ fill: { ...draft.fill, temperatureK } }),
+                  )
                 }
                 unitSystem={unitSystem}
               />
@@ -173,7 +228,9 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
                 dimension="pressure"
                 value={draft.fill.pressurePa}
                 onChange={(pressurePa) =>
-                  pressurePa !== undefined && set({ fill: { ...draft.fill, pressurePa } })
+                  readAs('pressurePa', pressurePa, (pressurePa) =>
+                    set({ fill: { ...draft.fill, pressurePa } }),
+                  )
                 }
                 unitSystem={unitSystem}
               />
@@ -185,7 +242,10 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
             <Switch
               aria-label="Own electrolyser"
               checked={draft.electrolyser !== undefined}
-              onChange={(on) => set({ electrolyser: on ? DEFAULT_ELECTROLYSER : undefined })}
+              onChange={(on) => {
+                forget('currentA', 'cellVoltageV');
+                set({ electrolyser: on ? DEFAULT_ELECTROLYSER : undefined });
+              }}
             />
             <Typography.Text>Own electrolyser (hydrogen)</Typography.Text>
           </Space>
@@ -197,9 +257,13 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
                   dimension="current"
                   value={draft.electrolyser.currentA}
                   onChange={(currentA) =>
-                    currentA !== undefined &&
-                    draft.electrolyser &&
-                    set({ electrolyser: { ...draft.electrolyser, currentA } })
+                    readAs(
+                      'currentA',
+                      currentA,
+                      (currentA) =>
+                        draft.electrolyser &&
+                        set({ electrolyser: { ...draft.electrolyser, currentA } }),
+                    )
                   }
                   unitSystem={unitSystem}
                 />
@@ -225,14 +289,18 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
                   dimension="voltage"
                   value={draft.electrolyser.voltage.cellVoltageV}
                   onChange={(cellVoltageV) =>
-                    cellVoltageV !== undefined &&
-                    draft.electrolyser &&
-                    set({
-                      electrolyser: {
-                        ...draft.electrolyser,
-                        voltage: { kind: 'cell', cellVoltageV },
-                      },
-                    })
+                    readAs(
+                      'cellVoltageV',
+                      cellVoltageV,
+                      (cellVoltageV) =>
+                        draft.electrolyser &&
+                        set({
+                          electrolyser: {
+                            ...draft.electrolyser,
+                            voltage: { kind: 'cell', cellVoltageV },
+                          },
+                        }),
+                    )
                   }
                   unitSystem={unitSystem}
                 />
@@ -243,7 +311,10 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
             <Switch
               aria-label="Gas cylinders"
               checked={draft.cylinder !== undefined}
-              onChange={(on) => set({ cylinder: on ? DEFAULT_CYLINDER : undefined })}
+              onChange={(on) => {
+                forget('waterVolumeM3', 'fillPressurePa');
+                set({ cylinder: on ? DEFAULT_CYLINDER : undefined });
+              }}
             />
             <Typography.Text>Gas cylinders</Typography.Text>
           </Space>
@@ -269,9 +340,12 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
                   dimension="volume"
                   value={draft.cylinder.waterVolumeM3}
                   onChange={(waterVolumeM3) =>
-                    waterVolumeM3 !== undefined &&
-                    draft.cylinder &&
-                    set({ cylinder: { ...draft.cylinder, waterVolumeM3 } })
+                    readAs(
+                      'waterVolumeM3',
+                      waterVolumeM3,
+                      (waterVolumeM3) =>
+                        draft.cylinder && set({ cylinder: { ...draft.cylinder, waterVolumeM3 } }),
+                    )
                   }
                   unitSystem={unitSystem}
                 />
@@ -282,9 +356,12 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
                   dimension="pressureDifference"
                   value={draft.cylinder.fillPressurePa}
                   onChange={(fillPressurePa) =>
-                    fillPressurePa !== undefined &&
-                    draft.cylinder &&
-                    set({ cylinder: { ...draft.cylinder, fillPressurePa } })
+                    readAs(
+                      'fillPressurePa',
+                      fillPressurePa,
+                      (fillPressurePa) =>
+                        draft.cylinder && set({ cylinder: { ...draft.cylinder, fillPressurePa } }),
+                    )
                   }
                   unitSystem={unitSystem}
                 />
@@ -339,7 +416,20 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
             ))}
           </Space>
           <FormError error={save.error} />
-          <Button type="primary" loading={save.isPending} onClick={() => save.mutate(draft)}>
+          {unreadable.size > 0 ? (
+            <Alert
+              type="warning"
+              showIcon
+              title="Some fields do not read as a quantity yet; fix them to save."
+              style={{ marginBottom: 8 }}
+            />
+          ) : null}
+          <Button
+            type="primary"
+            loading={save.isPending}
+            disabled={unreadable.size > 0}
+            onClick={() => save.mutate(draft)}
+          >
             Save and compute
           </Button>
         </Form>
