@@ -1,8 +1,8 @@
 import { App, Button, Space, Typography } from 'antd';
+import { lazy, Suspense } from 'react';
 import { useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import type { Attachment } from '@/features/attachments/api/attachments-api';
-import { AttachmentsPanel } from '@/features/attachments/components/attachments-panel';
 import { useMe } from '@/features/auth/api/auth-api';
 import {
   downloadCalculationFile,
@@ -11,8 +11,19 @@ import {
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
 import { VersionCompare } from '@/features/calculations/components/version-compare';
 import { VersionHistory } from '@/features/calculations/components/version-history';
-import { FillLogsPanel } from '@/features/fill-logs/components/fill-logs-panel';
 import { ReviewDecision } from '@/features/reviews/components/review-decision';
+
+// Below the editor and needed later than it: loaded after the form and results are on screen.
+const FillLogsPanel = lazy(() =>
+  import('@/features/fill-logs/components/fill-logs-panel').then((module) => ({
+    default: module.FillLogsPanel,
+  })),
+);
+const AttachmentsPanel = lazy(() =>
+  import('@/features/attachments/components/attachments-panel').then((module) => ({
+    default: module.AttachmentsPanel,
+  })),
+);
 
 export function CalculationEditorRoute() {
   const { id = '' } = useParams();
@@ -42,7 +53,7 @@ export function CalculationEditorRoute() {
       {mayReview ? <ReviewDecision calculationId={id} number={latest.number} /> : null}
       <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />
       {calculation.data && user ? (
-        <>
+        <Suspense fallback={null}>
           <FillLogsPanel
             calculationId={id}
             latestVersion={calculation.data.latestVersion}
@@ -60,7 +71,7 @@ export function CalculationEditorRoute() {
             )}
           />
           <AttachmentsPanel calculationId={id} canUpload={mayWrite} canRemove={mayRemove} />
-        </>
+        </Suspense>
       ) : null}
       {calculation.data ? (
         <section aria-label="Versions" style={{ marginTop: 24 }}>
