@@ -1,7 +1,10 @@
-import { Alert, Button, Form, List, Modal, Radio, Select, Space, Table, Typography } from 'antd';
+import { Alert, Button, Form, Modal, Radio, Select, Space, Typography } from 'antd';
 import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
 import { useMemo, useState } from 'react';
-import { parseCsv, type ParsedCsv } from '@/lib/parse-csv';
+import { BadRowsList } from '@/components/csv/bad-rows-list';
+import { CsvFileInput } from '@/components/csv/csv-file-input';
+import { CsvPreviewTable } from '@/components/csv/csv-preview-table';
+import type { ParsedCsv } from '@/lib/parse-csv';
 import {
   ENERGY_UNITS,
   METER_TIME_UNITS,
@@ -68,40 +71,18 @@ export function MeterImport({
     >
       <Form layout="vertical" component="div">
         <Form.Item label="CSV file with a header row">
-          <input
-            type="file"
-            accept=".csv,text/csv,text/plain"
-            aria-label="Meter CSV file"
-            onChange={(event) => {
-              const file = event.target.files?.[0];
-              if (!file) return;
-              void file.text().then((text) => {
-                const next = parseCsv(text);
-                setParsed(next);
-                setTime({ column: next.columns[0] ?? '', unit: 's' });
-                setValueColumn(next.columns[1] ?? '');
-              });
+          <CsvFileInput
+            label="Meter CSV file"
+            onParsed={(next) => {
+              setParsed(next);
+              setTime({ column: next.columns[0] ?? '', unit: 's' });
+              setValueColumn(next.columns[1] ?? '');
             }}
           />
         </Form.Item>
         {parsed ? (
           <>
-            <Table
-              size="small"
-              aria-label="First rows of the meter file"
-              pagination={false}
-              dataSource={parsed.rows
-                .slice(0, 5)
-                .map((row) => ({ key: row.line, line: row.line, ...row.cells }))}
-              columns={[
-                { title: 'Line', dataIndex: 'line' },
-                ...parsed.columns.map((column) => ({
-                  title: column,
-                  dataIndex: column,
-                  key: column,
-                })),
-              ]}
-            />
+            <CsvPreviewTable parsed={parsed} label="First rows of the meter file" />
             <Space wrap align="start" style={{ marginTop: 12 }}>
               <Form.Item label="Time column">
                 <Select
@@ -168,16 +149,7 @@ export function MeterImport({
                       Fix these rows in the file first: a meter log with gaps would give the wrong
                       energy.
                     </Typography.Paragraph>
-                    <List
-                      size="small"
-                      aria-label="Meter rows that cannot be read"
-                      dataSource={mapped.bad}
-                      renderItem={(row) => (
-                        <List.Item>
-                          Line {row.line}: {row.reason}
-                        </List.Item>
-                      )}
-                    />
+                    <BadRowsList rows={mapped.bad} label="Meter rows that cannot be read" />
                   </>
                 ) : null}
               </div>

@@ -1,9 +1,12 @@
-import { Alert, Button, Form, List, Modal, Radio, Select, Space, Table, Typography } from 'antd';
+import { Alert, Button, Form, Modal, Radio, Select, Space } from 'antd';
 import type { UnitSystem } from '@loftwright/buoyancy';
 import { useMemo, useState } from 'react';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import { FormError } from '@/components/errors/form-error';
-import { parseCsv, type ParsedCsv } from '@/lib/parse-csv';
+import { BadRowsList } from '@/components/csv/bad-rows-list';
+import { CsvFileInput } from '@/components/csv/csv-file-input';
+import { CsvPreviewTable } from '@/components/csv/csv-preview-table';
+import type { ParsedCsv } from '@/lib/parse-csv';
 import { type FillLog, useAddReadings } from '../api/fill-logs-api';
 import {
   MASS_UNITS,
@@ -38,7 +41,6 @@ export function ReadingsImport({
   onClose: () => void;
 }) {
   const addReadings = useAddReadings(log.calculationId);
-  const [fileName, setFileName] = useState<string>();
   const [parsed, setParsed] = useState<ParsedCsv>();
   const [time, setTime] = useState<ReadingColumns['time']>({ column: '', unit: 's' });
   const [liftKind, setLiftKind] = useState<'ballast' | 'direct'>('ballast');
@@ -52,9 +54,7 @@ export function ReadingsImport({
   const [pressure, setPressure] = useState<ReadingColumns['pressure']>();
   const [mode, setMode] = useState<'append' | 'replace'>('append');
 
-  const read = async (file: File) => {
-    const next = parseCsv(await file.text());
-    setFileName(file.name);
+  const chose = (next: ParsedCsv) => {
     setParsed(next);
     setTime({
       column: guess(next.columns, /time|^t\b|^t_|min|hour|sec/i) ?? next.columns[0] ?? '',
@@ -133,36 +133,11 @@ export function ReadingsImport({
     >
       <Form layout="vertical" component="div">
         <Form.Item label="CSV file with a header row">
-          <input
-            type="file"
-            accept=".csv,text/csv,text/plain"
-            aria-label="CSV file"
-            onChange={(event) => {
-              const file = event.target.files?.[0];
-              if (file) void read(file);
-            }}
-          />
-          {fileName ? <Typography.Text type="secondary"> {fileName}</Typography.Text> : null}
+          <CsvFileInput label="CSV file" onParsed={chose} />
         </Form.Item>
         {parsed ? (
           <>
-            <Table
-              size="small"
-              aria-label="First rows of the file"
-              pagination={false}
-              scroll={{ x: true }}
-              dataSource={parsed.rows
-                .slice(0, 5)
-                .map((row) => ({ key: row.line, line: row.line, ...row.cells }))}
-              columns={[
-                { title: 'Line', dataIndex: 'line' },
-                ...parsed.columns.map((column) => ({
-                  title: column,
-                  dataIndex: column,
-                  key: column,
-                })),
-              ]}
-            />
+            <CsvPreviewTable parsed={parsed} label="First rows of the file" />
             <Space wrap align="start" style={{ marginTop: 12 }}>
               <Form.Item label="Time column">
                 <Select
@@ -292,16 +267,7 @@ export function ReadingsImport({
                   title={`${count} readings ready${badCount > 0 ? `, ${badCount} ${badCount === 1 ? 'row' : 'rows'} cannot be read` : ''}. Nothing is stored until you import.`}
                 />
                 {badCount > 0 ? (
-                  <List
-                    size="small"
-                    aria-label="Rows that cannot be read"
-                    dataSource={mapped.bad}
-                    renderItem={(row) => (
-                      <List.Item>
-                        Line {row.line}: {row.reason}
-                      </List.Item>
-                    )}
-                  />
+                  <BadRowsList rows={mapped.bad} label="Rows that cannot be read" />
                 ) : null}
               </div>
             ) : null}
