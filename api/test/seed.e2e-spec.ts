@@ -45,4 +45,23 @@ describe('demo seed on an empty database', () => {
     );
     expect(verify.body).toMatchObject({ match: true, reproduces: true });
   });
+
+  it('adds a fill log with a series of readings and a gas plan for the designer', async () => {
+    const http = () => request(testApp.app.getHttpServer());
+    const login = await http()
+      .post('/api/auth/login')
+      .send({ email: 'designer@demo.test', password: 'demo-password-for-tests' });
+    const auth = { Authorization: `Bearer ${login.body.accessToken}` };
+    const list = await http().get('/api/calculations?q=anemometer').set(auth);
+    const logs = await http().get(`/api/calculations/${list.body.items[0].id}/fill-logs`).set(auth);
+    expect(logs.body).toHaveLength(1);
+    expect(logs.body[0].readings).toHaveLength(4);
+    // Ballast 3 kg, scale 1.13 kg at filling: 1.87 kg measured net lift.
+    expect(logs.body[0].outputs.measuredNetLift.value).toBeCloseTo(1.87, 12);
+    expect(logs.body[0].outputs.halfLife.value).toBeGreaterThan(0);
+    const plans = await http().get('/api/plans').set(auth);
+    expect(plans.body).toHaveLength(1);
+    expect(plans.body[0].result.lines).toHaveLength(3);
+    expect(plans.body[0].result.outputs.timeToFill.value).toBeGreaterThan(0);
+  });
 });

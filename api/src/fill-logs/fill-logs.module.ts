@@ -11,5 +11,6 @@ import { FillLogsService } from './fill-logs.service';
   imports: [TypeOrmModule.forFeature([FillLog, User]), CalculationsModule, AttachmentsModule],
   controllers: [FillLogsController],
   providers: [FillLogsService],
+  exports: [FillLogsService],
 })
 export class FillLogsModule {}

@@ -9,5 +9,6 @@ import { PlansService } from './plans.service';
   imports: [TypeOrmModule.forFeature([GasPlanRecord]), CalculationsModule],
   controllers: [PlansController],
   providers: [PlansService],
+  exports: [PlansService],
 })
 export class PlansModule {}

@@ -194,3 +194,69 @@ export const DEMO_CALCULATIONS: readonly DemoCalculation[] = [
     stage: 'draft',
   },
 ];
+
+const HOUR_S = 3600;
+
+/**
+ * A fill of the anemometer capsule in the boat shed, weighed against a 3 kg sandbag as the night
+ * cooled and the hydrogen slowly leaked.
+ */
+export const DEMO_FILL_LOGS = [
+  {
+    calculationTitle: 'Shore anemometer, tethered capsule: lift check',
+    filledAt: '2026-11-21T16:20:00Z',
+    place: 'Boat shed, north dyke',
+    envelopeLabel: 'Capsule B (grey)',
+    gasSource: 'electrolysis',
+    ambient: { temperatureK: 284.65, pressurePa: 101050, relativeHumidity: 0.74 },
+    note: 'Scale zeroed with the sandbag alone before tying on.',
+    readings: [
+      { kind: 'ballast', timeS: 0, ballastMassKg: 3, scaleReadingKg: 1.13 },
+      {
+        kind: 'ballast',
+        timeS: 6 * HOUR_S,
+        ballastMassKg: 3,
+        scaleReadingKg: 1.16,
+        airTemperatureK: 281.9,
+      },
+      {
+        kind: 'ballast',
+        timeS: 24 * HOUR_S,
+        ballastMassKg: 3,
+        scaleReadingKg: 1.24,
+        airTemperatureK: 283.4,
+      },
+      {
+        kind: 'ballast',
+        timeS: 48 * HOUR_S,
+        ballastMassKg: 3,
+        scaleReadingKg: 1.33,
+        airTemperatureK: 284.1,
+      },
+    ],
+  },
+] as const;
+
+/** The collective's spring launch weekend: sondes from the sizing, pilots, and the capsule. */
+export const DEMO_PLANS = [
+  {
+    title: 'Spring launch weekend on the dyke',
+    eventDate: '2027-04-17',
+    lines: [
+      { calculationTitle: 'Curlew air-sampling pod: envelope size', count: 3 },
+      { calculationTitle: 'Shore anemometer, tethered capsule: lift check', count: 1 },
+      { label: 'Pilot balloons for wind', diameterM: 0.6, count: 8 },
+    ],
+    fill: { temperatureK: 283.15, pressurePa: 101300 },
+    electrolyser: {
+      currentA: 30,
+      cellsInSeries: 6,
+      faradaicEfficiency: 0.95,
+      voltage: { kind: 'cell' as const, cellVoltageV: 2.1 },
+      supplyEfficiency: 0.88,
+    },
+    cylinder: { gasId: 'helium', waterVolumeM3: 0.05, fillPressurePa: 2e7, temperatureK: 283.15 },
+    prices: { currency: 'EUR', electricityPerKWh: 0.31, cylinderEach: 335, bulkGasPerM3: 42 },
+    pricesDate: '2026-11-30',
+  },
+] as const;

@@ -5,7 +5,9 @@ import { CalculationsService } from '../calculations/calculations.service';
 import type { EnvironmentVariables } from '../config/env.validation';
 import { ReviewsService } from '../reviews/reviews.service';
 import { UsersService } from '../users/users.service';
-import { DEMO_ACCOUNTS, DEMO_CALCULATIONS } from './demo-scenario';
+import { FillLogsService } from '../fill-logs/fill-logs.service';
+import { PlansService } from '../plans/plans.service';
+import { DEMO_ACCOUNTS, DEMO_CALCULATIONS, DEMO_FILL_LOGS, DEMO_PLANS } from './demo-scenario';
 
 /**
  * Fills an empty database with the demo accounts and scenario, through the same services the API
@@ -20,6 +22,8 @@ export class DemoSeedService implements OnApplicationBootstrap {
     private readonly usersService: UsersService,
     private readonly calculationsService: CalculationsService,
     private readonly reviewsService: ReviewsService,
+    private readonly fillLogsService: FillLogsService,
+    private readonly plansService: PlansService,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
@@ -41,6 +45,7 @@ export class DemoSeedService implements OnApplicationBootstrap {
       });
     }
     const reviewer = people.get('reviewer') as AuthUser;
+    const ids = new Map<string, string>();
     for (const demo of DEMO_CALCULATIONS) {
       const owner = people.get(demo.owner) as AuthUser;
       const [first, ...later] = demo.versions;
@@ -53,6 +58,7 @@ export class DemoSeedService implements OnApplicationBootstrap {
         tags: demo.tags,
         note: first.note,
       });
+      ids.set(demo.title, created.id);
       let number = 1;
       for (const version of later) {
         await this.calculationsService.saveVersion(owner, created.id, {
@@ -74,8 +80,30 @@ export class DemoSeedService implements OnApplicationBootstrap {
           demo.reviewComment ?? 'Please revise.',
         );
     }
+    const designer = people.get('designer') as AuthUser;
+    for (const log of DEMO_FILL_LOGS) {
+      const { calculationTitle, ...fill } = log;
+      await this.fillLogsService.create(designer, ids.get(calculationTitle) ?? '', 1, {
+        ...fill,
+        readings: fill.readings.map((reading) => ({ ...reading })),
+      });
+    }
+    for (const plan of DEMO_PLANS) {
+      await this.plansService.create(designer, {
+        ...plan,
+        lines: plan.lines.map((line) =>
+          'calculationTitle' in line
+            ? { calculationId: ids.get(line.calculationTitle), count: line.count }
+            : { ...line },
+        ),
+        fill: { ...plan.fill },
+        electrolyser: { ...plan.electrolyser },
+        cylinder: { ...plan.cylinder },
+        prices: { ...plan.prices },
+      });
+    }
     this.logger.log(
-      `Demo data added: ${DEMO_ACCOUNTS.length} accounts (password from DEMO_PASSWORD), ${DEMO_CALCULATIONS.length} calculations`,
+      `Demo data added: ${DEMO_ACCOUNTS.length} accounts (password from DEMO_PASSWORD), ${DEMO_CALCULATIONS.length} calculations, ${DEMO_FILL_LOGS.length} fill log, ${DEMO_PLANS.length} gas plan`,
     );
   }
 }
