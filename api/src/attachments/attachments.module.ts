@@ -6,7 +6,7 @@ import { memoryStorage } from 'multer';
 import { CalculationsModule } from '../calculations/calculations.module';
 import type { EnvironmentVariables } from '../config/env.validation';
 import { FillLog } from '../fill-logs/fill-log.entity';
-import { User } from '../users/user.entity';
+import { UsersModule } from '../users/users.module';
 import { Attachment } from './attachment.entity';
 import { AttachmentsController } from './attachments.controller';
 import { AttachmentsService } from './attachments.service';
@@ -15,8 +15,9 @@ import { UploadStore } from './upload-store';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Attachment, User, FillLog]),
+    TypeOrmModule.forFeature([Attachment, FillLog]),
     CalculationsModule,
+    UsersModule,
     // Uploads are held in memory while their content is checked and hashed; the size limit
     // keeps that bounded.
     MulterModule.registerAsync({

@@ -7,7 +7,7 @@ import {
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { In, Repository } from 'typeorm';
+import { Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import { canEdit } from '../calculations/calculation-access';
@@ -15,7 +15,7 @@ import { CalculationsService } from '../calculations/calculations.service';
 import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
 import { FillLog } from '../fill-logs/fill-log.entity';
-import { User } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import { Attachment } from './attachment.entity';
 import { attachmentView, type AttachmentView } from './attachment-views';
 import { cleanFileName } from './file-name';
@@ -32,7 +32,7 @@ export interface UploadedFileLike {
 export class AttachmentsService {
   constructor(
     @InjectRepository(Attachment) private readonly attachments: Repository<Attachment>,
-    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly users: UsersService,
     @InjectRepository(FillLog) private readonly fillLogs: Repository<FillLog>,
     private readonly calculations: CalculationsService,
     private readonly store: UploadStore,
@@ -41,14 +41,8 @@ export class AttachmentsService {
   ) {}
 
   private async views(rows: Attachment[]): Promise<AttachmentView[]> {
-    const ids = [...new Set(rows.map((row) => row.uploadedBy).filter((id) => id !== null))];
-    const people = ids.length > 0 ? await this.users.findBy({ id: In(ids) }) : [];
-    const byId = new Map(
-      people.map((user) => [user.id, { id: user.id, displayName: user.displayName }]),
-    );
-    return rows.map((row) =>
-      attachmentView(row, row.uploadedBy ? (byId.get(row.uploadedBy) ?? null) : null),
-    );
+    const names = await this.users.names(rows.map((row) => row.uploadedBy));
+    return rows.map((row) => attachmentView(row, names(row.uploadedBy)));
   }
 
   async upload(

@@ -1,9 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { InputError } from '@loftwright/buoyancy';
-import { In, Repository } from 'typeorm';
+import { Repository } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
-import { User } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import { calculationFile, type CalculationFile } from './calculation-file';
 import { CalculationVersion } from './calculation-version.entity';
 import { CalculationsService } from './calculations.service';
@@ -16,7 +16,7 @@ export class CalculationTransferService {
   constructor(
     private readonly calculations: CalculationsService,
     @InjectRepository(CalculationVersion) private readonly versions: Repository<CalculationVersion>,
-    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly users: UsersService,
   ) {}
 
   async export(user: AuthUser, id: string): Promise<CalculationFile> {
@@ -25,11 +25,12 @@ export class CalculationTransferService {
       where: { calculationId: id },
       order: { number: 'ASC' },
     });
-    const people = await this.users.findBy({
-      id: In([...new Set(versions.map((v) => v.authorId))]),
-    });
-    const names = new Map(people.map((person) => [person.id, person.displayName]));
-    return calculationFile(calculation, versions, (authorId) => names.get(authorId) ?? 'unknown');
+    const names = await this.users.names(versions.map((version) => version.authorId));
+    return calculationFile(
+      calculation,
+      versions,
+      (authorId) => names(authorId)?.displayName ?? 'unknown user',
+    );
   }
 
   /**

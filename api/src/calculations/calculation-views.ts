@@ -1,12 +1,9 @@
 import type { CalculationVersion } from './calculation-version.entity';
 import type { Calculation } from './calculation.entity';
 
-export interface UserRef {
-  id: string;
-  displayName: string;
-}
+import type { NameLookup } from '../users/user-ref';
 
-export type NameLookup = (id: string | null) => UserRef | null;
+export type { NameLookup, UserRef } from '../users/user-ref';
 
 export function calculationSummary(calculation: Calculation, names: NameLookup) {
   return {

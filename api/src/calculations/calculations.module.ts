@@ -1,6 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
-import { User } from '../users/user.entity';
+import { UsersModule } from '../users/users.module';
 import { CalculationVersion } from './calculation-version.entity';
 import { Calculation } from './calculation.entity';
 import { CalculationsController } from './calculations.controller';
@@ -8,7 +8,7 @@ import { CalculationTransferService } from './calculation-transfer.service';
 import { CalculationsService } from './calculations.service';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Calculation, CalculationVersion, User])],
+  imports: [TypeOrmModule.forFeature([Calculation, CalculationVersion]), UsersModule],
   controllers: [CalculationsController],
   providers: [CalculationsService, CalculationTransferService],
   exports: [CalculationsService],

@@ -6,21 +6,16 @@ import {
 } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { DataSource, In, Repository } from 'typeorm';
+import { DataSource, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
 import { AUTHOR_ROLES, TEAM_ROLES } from '../users/roles';
-import { User } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import { canArchive, canEdit, canRead } from './calculation-access';
 import { CalculationVersion } from './calculation-version.entity';
-import {
-  calculationSummary,
-  type NameLookup,
-  versionDetail,
-  versionSummary,
-} from './calculation-views';
+import { calculationSummary, versionDetail, versionSummary } from './calculation-views';
 import { Calculation } from './calculation.entity';
 import type { CreateCalculationDto } from './dto/create-calculation.dto';
 import type { ListCalculationsDto } from './dto/list-calculations.dto';
@@ -43,20 +38,10 @@ export class CalculationsService {
     @InjectDataSource() private readonly dataSource: DataSource,
     @InjectRepository(Calculation) private readonly calculations: Repository<Calculation>,
     @InjectRepository(CalculationVersion) private readonly versions: Repository<CalculationVersion>,
-    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly users: UsersService,
     private readonly audit: AuditService,
     private readonly writeLock: WriteLock,
   ) {}
-
-  /** Display names for a set of user ids, as a lookup function for the views. */
-  async names(ids: readonly (string | null)[]): Promise<NameLookup> {
-    const wanted = [...new Set(ids.filter((id): id is string => id !== null))];
-    const found = wanted.length ? await this.users.findBy({ id: In(wanted) }) : [];
-    const byId = new Map(
-      found.map((user) => [user.id, { id: user.id, displayName: user.displayName }]),
-    );
-    return (id) => (id ? (byId.get(id) ?? { id, displayName: 'unknown user' }) : null);
-  }
 
   /** The calculation if the user may see it; otherwise 404, so its existence does not leak. */
   async findReadable(user: AuthUser, id: string): Promise<Calculation> {
@@ -162,7 +147,7 @@ export class CalculationsService {
       .skip((query.page - 1) * query.pageSize)
       .take(query.pageSize)
       .getManyAndCount();
-    const names = await this.names(items.map((item) => item.ownerId));
+    const names = await this.users.names(items.map((item) => item.ownerId));
     return {
       items: items.map((item) => calculationSummary(item, names)),
       total,
@@ -178,7 +163,7 @@ export class CalculationsService {
       order: { number: 'ASC' },
     });
     const latest = versions.at(-1);
-    const names = await this.names([
+    const names = await this.users.names([
       calculation.ownerId,
       ...versions.flatMap((v) => [v.authorId, v.reviewerId]),
     ]);
@@ -204,7 +189,7 @@ export class CalculationsService {
   async version(user: AuthUser, id: string, number: number) {
     await this.findReadable(user, id);
     const version = await this.findVersion(id, number);
-    const names = await this.names([version.authorId, version.reviewerId]);
+    const names = await this.users.names([version.authorId, version.reviewerId]);
     return versionDetail(version, names);
   }
 
@@ -264,7 +249,7 @@ export class CalculationsService {
         yours: { baseVersion: dto.baseVersion, inputs: dto.inputs, note: dto.note ?? '' },
       });
     }
-    const names = await this.names([user.id]);
+    const names = await this.users.names([user.id]);
     return versionDetail(version as CalculationVersion, names);
   }
 

@@ -2,13 +2,18 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AttachmentsModule } from '../attachments/attachments.module';
 import { CalculationsModule } from '../calculations/calculations.module';
-import { User } from '../users/user.entity';
+import { UsersModule } from '../users/users.module';
 import { FillLog } from './fill-log.entity';
 import { FillLogsController } from './fill-logs.controller';
 import { FillLogsService } from './fill-logs.service';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([FillLog, User]), CalculationsModule, AttachmentsModule],
+  imports: [
+    TypeOrmModule.forFeature([FillLog]),
+    CalculationsModule,
+    AttachmentsModule,
+    UsersModule,
+  ],
   controllers: [FillLogsController],
   providers: [FillLogsService],
   exports: [FillLogsService],

@@ -8,7 +8,7 @@ import {
   reduceFillLog,
 } from '@loftwright/buoyancy';
 import { randomUUID } from 'node:crypto';
-import { In, Repository } from 'typeorm';
+import { Repository } from 'typeorm';
 import { AttachmentsService } from '../attachments/attachments.service';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
@@ -17,7 +17,7 @@ import type { Calculation } from '../calculations/calculation.entity';
 import { CalculationsService } from '../calculations/calculations.service';
 import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
-import { User } from '../users/user.entity';
+import { UsersService } from '../users/users.service';
 import type { AddReadingsDto, CreateFillLogDto, UpdateFillLogDto } from './dto/fill-log.dto';
 import { FillLog } from './fill-log.entity';
 import { fillLogView, type FillLogView } from './fill-log-views';
@@ -26,7 +26,7 @@ import { fillLogView, type FillLogView } from './fill-log-views';
 export class FillLogsService {
   constructor(
     @InjectRepository(FillLog) private readonly logs: Repository<FillLog>,
-    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly users: UsersService,
     private readonly calculations: CalculationsService,
     private readonly attachments: AttachmentsService,
     private readonly audit: AuditService,
@@ -34,12 +34,8 @@ export class FillLogsService {
   ) {}
 
   private async views(rows: FillLog[]): Promise<FillLogView[]> {
-    const ids = [...new Set(rows.map((row) => row.createdBy))];
-    const people = ids.length > 0 ? await this.users.findBy({ id: In(ids) }) : [];
-    const byId = new Map(
-      people.map((user) => [user.id, { id: user.id, displayName: user.displayName }]),
-    );
-    return rows.map((row) => fillLogView(row, byId.get(row.createdBy) ?? null));
+    const names = await this.users.names(rows.map((row) => row.createdBy));
+    return rows.map((row) => fillLogView(row, names(row.createdBy)));
   }
 
   private requireEditor(user: AuthUser, calculation: Calculation): void {

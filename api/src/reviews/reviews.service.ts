@@ -245,7 +245,7 @@ export class ReviewsService {
       where: { versionId: stored.id },
       order: { createdAt: 'ASC' },
     });
-    const names = await this.calculationsService.names(reviews.map((review) => review.reviewerId));
+    const names = await this.usersService.names(reviews.map((review) => review.reviewerId));
     return {
       ...version,
       reviews: reviews.map((review) => ({
@@ -272,7 +272,7 @@ export class ReviewsService {
       .andWhere('(version.reviewer_id IS NULL OR version.reviewer_id = :me)', { me: user.id })
       .orderBy('version.submitted_at', 'ASC')
       .getRawAndEntities();
-    const names = await this.calculationsService.names(
+    const names = await this.usersService.names(
       waiting.entities.flatMap((version) => [version.authorId, version.reviewerId]),
     );
     return waiting.entities.map((version, index) => ({

@@ -1,12 +1,13 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { Repository } from 'typeorm';
+import { In, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { WriteLock } from '../database/write-lock';
 import { PasswordHasher } from './password-hasher.service';
 import type { Role } from './roles';
 import { User } from './user.entity';
+import type { NameLookup } from './user-ref';
 
 @Injectable()
 export class UsersService {
@@ -19,6 +20,16 @@ export class UsersService {
 
   count(): Promise<number> {
     return this.users.count();
+  }
+
+  /** Display names for a set of user ids, fetched in one query, as a lookup for views. */
+  async names(ids: readonly (string | null | undefined)[]): Promise<NameLookup> {
+    const wanted = [...new Set(ids.filter((id): id is string => typeof id === 'string'))];
+    const found = wanted.length ? await this.users.findBy({ id: In(wanted) }) : [];
+    const byId = new Map(
+      found.map((user) => [user.id, { id: user.id, displayName: user.displayName }]),
+    );
+    return (id) => (id ? (byId.get(id) ?? { id, displayName: 'unknown user' }) : null);
   }
 
   findById(id: string): Promise<User | null> {
