@@ -5,6 +5,7 @@ import { AttachmentsModule } from './attachments/attachments.module';
 import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { CalculationsModule } from './calculations/calculations.module';
+import { ClassroomsModule } from './classrooms/classrooms.module';
 import { EnvironmentVariables, validateEnvironment } from './config/env.validation';
 import { DatabaseModule } from './database/database.module';
 import { buildDataSourceOptions } from './database/database.options';
@@ -16,6 +17,7 @@ import { PlansModule } from './plans/plans.module';
 import { ReviewsModule } from './reviews/reviews.module';
 import { SeedModule } from './seed/seed.module';
 import { UsersModule } from './users/users.module';
+import { WorkedExamplesModule } from './worked-examples/worked-examples.module';
 
 @Module({
   imports: [
@@ -35,6 +37,8 @@ import { UsersModule } from './users/users.module';
     AttachmentsModule,
     FillLogsModule,
     PlansModule,
+    ClassroomsModule,
+    WorkedExamplesModule,
     EvaluateModule,
     HealthModule,
     SeedModule,

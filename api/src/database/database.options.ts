@@ -6,18 +6,23 @@ import { AuditEntry } from '../audit/audit-entry.entity';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
 import { CalculationVersion } from '../calculations/calculation-version.entity';
 import { Calculation } from '../calculations/calculation.entity';
+import { ClassroomMember } from '../classrooms/classroom-member.entity';
+import { Classroom } from '../classrooms/classroom.entity';
 import { FillLog } from '../fill-logs/fill-log.entity';
 import { GasPlanRecord } from '../plans/plan.entity';
 import { Installation } from '../health/installation.entity';
 import { OutboxMessage } from '../mail/outbox-message.entity';
 import { Review } from '../reviews/review.entity';
 import { User } from '../users/user.entity';
+import { ExerciseSubmission } from '../worked-examples/exercise-submission.entity';
+import { WorkedExample } from '../worked-examples/worked-example.entity';
 import { InitSchema1764633600000 } from './migrations/1764633600000-init-schema';
 import { AccountsCalculationsReviews1764640800000 } from './migrations/1764640800000-accounts-calculations-reviews';
 import { Attachments1764720000000 } from './migrations/1764720000000-attachments';
 import { FillLogs1764723600000 } from './migrations/1764723600000-fill-logs';
 import { OutboxAttachments1764727200000 } from './migrations/1764727200000-outbox-attachments';
 import { GasPlans1764730800000 } from './migrations/1764730800000-gas-plans';
+import { Classrooms1764734400000 } from './migrations/1764734400000-classrooms';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -33,6 +38,10 @@ export const ENTITIES = [
   Attachment,
   FillLog,
   GasPlanRecord,
+  Classroom,
+  ClassroomMember,
+  WorkedExample,
+  ExerciseSubmission,
 ];
 export const MIGRATIONS = [
   InitSchema1764633600000,
@@ -41,6 +50,7 @@ export const MIGRATIONS = [
   FillLogs1764723600000,
   OutboxAttachments1764727200000,
   GasPlans1764730800000,
+  Classrooms1764734400000,
 ];
 
 /**

@@ -94,3 +94,12 @@ export type { GasPlan, GasPlanInput, GasPlanLine } from './plan/gas-plan.js';
 export type { GasSupplyInput } from './kinds/gas-supply.kind.js';
 export { meterEnergy } from './supply/meter-energy.js';
 export type { MeterEnergy, MeterLog } from './supply/meter-energy.js';
+export { checkExerciseAnswers } from './teach/exercise-check.js';
+export type { AnswerCheck, ExerciseCheck } from './teach/exercise-check.js';
+export {
+  numberAtPath,
+  numericInputPaths,
+  valuesOutsideRanges,
+  withNumberAtPath,
+} from './teach/input-paths.js';
+export type { InputRangeLimit } from './teach/input-paths.js';
