@@ -193,7 +193,134 @@ export const DEMO_CALCULATIONS: readonly DemoCalculation[] = [
     ],
     stage: 'draft',
   },
+  {
+    owner: 'teacher',
+    title: 'Lesson: helium lift per litre in standard sea-level air',
+    kind: 'lifting-gas',
+    visibility: 'private',
+    tags: ['classroom'],
+    versions: [
+      {
+        note: 'Standard atmosphere at sea level',
+        inputs: { gas: { gasId: 'helium' }, ambient: { mode: 'standard', altitudeM: 0 } },
+      },
+    ],
+    stage: 'draft',
+  },
+  {
+    owner: 'teacher',
+    title: 'Lesson: where a rigid 2 m sphere floats',
+    kind: 'flight-profile',
+    visibility: 'private',
+    tags: ['classroom'],
+    versions: [
+      {
+        note: 'Film and tag weigh 106.7 g together',
+        inputs: {
+          envelope: { kind: 'fixed', shape: { shape: 'sphere', diameterM: 2 } },
+          envelopeMassKg: 0.0747,
+          payloadMassKg: 0.032,
+          gas: { gasId: 'helium' },
+          launch: { altitudeM: 0 },
+        },
+      },
+    ],
+    stage: 'draft',
+  },
+  {
+    owner: 'teacher',
+    title: 'Lesson: hydrogen from a four-cell electrolyser',
+    kind: 'gas-supply',
+    visibility: 'private',
+    tags: ['classroom', 'hydrogen'],
+    versions: [
+      {
+        note: '100 litres at 0 °C and one atmosphere',
+        inputs: {
+          fill: { volumeM3: 0.1, temperatureK: 273.15, pressurePa: 101325, count: 1 },
+          electrolyser: {
+            currentA: 20,
+            cellsInSeries: 4,
+            faradaicEfficiency: 1,
+            voltage: { kind: 'cell', cellVoltageV: 2 },
+            supplyEfficiency: 1,
+          },
+        },
+      },
+    ],
+    stage: 'draft',
+  },
 ];
+
+/**
+ * The demo class: a school physics group that the demo teacher runs and the demo student has
+ * joined, with three worked examples whose intros name the outside source a class can check the
+ * numbers against.
+ */
+export const DEMO_CLASSROOM = {
+  title: 'Harbour Road School, Physics 11: buoyancy week',
+  examples: [
+    {
+      calculationTitle: 'Lesson: helium lift per litre in standard sea-level air',
+      title: 'How much does a litre of helium lift?',
+      intro:
+        'A party balloon holds a few litres of helium. How many grams can one litre hold up? ' +
+        'Work out the density of the air and of the helium with the ideal-gas law, ρ = pM/(RT), ' +
+        'then the difference. Check: the U.S. Standard Atmosphere 1976 (Table I) gives sea-level ' +
+        'air 1.2250 kg/m³; helium at 15 °C and 101.325 kPa is 0.1693 kg/m³ (M = 4.002602 g/mol, ' +
+        'CIAAW), so one cubic metre lifts 1.056 kg and one litre about 1.06 g.',
+      stepNotes: {
+        'air-density': 'M₀ = 28.9644 g/mol is the mean molar mass of dry air in the 1976 standard.',
+        'lift-per-cubic-metre': 'Gross lift: the air pushed aside minus the gas doing the pushing.',
+      },
+      tryRanges: { 'ambient.altitudeM': { min: 0, max: 5000 } },
+      chartStepId: null,
+      exercise: { hiddenOutputs: ['airDensity', 'liftPerCubicMetre'], tolerancePercent: 2 },
+    },
+    {
+      calculationTitle: 'Lesson: where a rigid 2 m sphere floats',
+      title: 'Where does a rigid sphere stop rising?',
+      intro:
+        'A sphere that cannot stretch rises until the air it pushes aside weighs as much as the ' +
+        'whole balloon: film, tag and the helium inside. Find that float density, then read the ' +
+        'height from the U.S. Standard Atmosphere 1976 table: at 15 000 m (geometric) it lists ' +
+        'ρ = 0.194 76 kg/m³. Free balloons fall under aviation rules (in the U.S., 14 CFR Part ' +
+        '101); launch only where and as your aviation authority allows.',
+      stepNotes: {
+        'gas-mass': 'The helium is filled at sea level and stays sealed in: its mass is fixed.',
+        'float-density': 'Everything that has to be held up, divided by the volume.',
+        'float-altitude': 'Look for the height where the table’s density equals ρ_f.',
+      },
+      tryRanges: {
+        payloadMassKg: { min: 0.005, max: 0.3 },
+        'envelope.shape.diameterM': { min: 1.5, max: 3 },
+      },
+      chartStepId: 'float-altitude',
+      exercise: null,
+    },
+    {
+      calculationTitle: 'Lesson: hydrogen from a four-cell electrolyser',
+      title: 'How long does the electrolyser run for 100 litres?',
+      intro:
+        'Faraday’s law: two electrons free one molecule of hydrogen, so one ampere through one ' +
+        'cell makes I/(2F) = 5.182 × 10⁻⁶ mol/s (F = 96 485.332 C/mol, CODATA 2018), ' +
+        '0.418 L an hour at 0 °C and one atmosphere. Four cells in series at 20 A therefore ' +
+        'need 2391.5 A·h per normal cubic metre ÷ 80 A ≈ 3.0 h for 100 L. Hydrogen burns in ' +
+        'air from about 4 % to 75 %: vent the cell outdoors, keep sparks and flames away, and ' +
+        'follow your school’s rules for mains-powered and high-current supplies.',
+      stepNotes: {
+        'hydrogen-rate': 'n′ = N·I·η / (2F): every cell in the stack makes its own share.',
+        'electrical-energy': 'Energy is power times time; the cell voltage sets the power.',
+      },
+      tryRanges: {
+        'electrolyser.currentA': { min: 5, max: 40 },
+        'electrolyser.voltage.cellVoltageV': { min: 1.5, max: 2.5 },
+      },
+      chartStepId: null,
+      exercise: { hiddenOutputs: ['timeToFill'], tolerancePercent: 2 },
+    },
+  ],
+} as const;
 
 const HOUR_S = 3600;
 

@@ -7,7 +7,15 @@ import { ReviewsService } from '../reviews/reviews.service';
 import { UsersService } from '../users/users.service';
 import { FillLogsService } from '../fill-logs/fill-logs.service';
 import { PlansService } from '../plans/plans.service';
-import { DEMO_ACCOUNTS, DEMO_CALCULATIONS, DEMO_FILL_LOGS, DEMO_PLANS } from './demo-scenario';
+import { ClassroomsService } from '../classrooms/classrooms.service';
+import { WorkedExamplesService } from '../worked-examples/worked-examples.service';
+import {
+  DEMO_ACCOUNTS,
+  DEMO_CALCULATIONS,
+  DEMO_CLASSROOM,
+  DEMO_FILL_LOGS,
+  DEMO_PLANS,
+} from './demo-scenario';
 
 /**
  * Fills an empty database with the demo accounts and scenario, through the same services the API
@@ -24,6 +32,8 @@ export class DemoSeedService implements OnApplicationBootstrap {
     private readonly reviewsService: ReviewsService,
     private readonly fillLogsService: FillLogsService,
     private readonly plansService: PlansService,
+    private readonly classroomsService: ClassroomsService,
+    private readonly examplesService: WorkedExamplesService,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
@@ -102,8 +112,28 @@ export class DemoSeedService implements OnApplicationBootstrap {
         prices: { ...plan.prices },
       });
     }
+    const teacher = people.get('teacher') as AuthUser;
+    const classroom = await this.classroomsService.create(teacher, {
+      title: DEMO_CLASSROOM.title,
+      joinCodeValidDays: 365,
+    });
+    for (const example of DEMO_CLASSROOM.examples) {
+      const { calculationTitle, exercise, stepNotes, tryRanges, ...words } = example;
+      await this.examplesService.publish(teacher, classroom.id, {
+        ...words,
+        calculationId: ids.get(calculationTitle) ?? '',
+        versionNumber: 1,
+        stepNotes: { ...stepNotes },
+        tryRanges: Object.fromEntries(
+          Object.entries(tryRanges).map(([path, range]) => [path, { ...range }]),
+        ),
+        exercise: exercise ? { ...exercise, hiddenOutputs: [...exercise.hiddenOutputs] } : null,
+      });
+    }
+    const student = people.get('student') as AuthUser;
+    await this.classroomsService.join(student, classroom.joinCode ?? '');
     this.logger.log(
-      `Demo data added: ${DEMO_ACCOUNTS.length} accounts (password from DEMO_PASSWORD), ${DEMO_CALCULATIONS.length} calculations, ${DEMO_FILL_LOGS.length} fill log, ${DEMO_PLANS.length} gas plan`,
+      `Demo data added: ${DEMO_ACCOUNTS.length} accounts (password from DEMO_PASSWORD), ${DEMO_CALCULATIONS.length} calculations, ${DEMO_FILL_LOGS.length} fill log, ${DEMO_PLANS.length} gas plan, 1 class with ${DEMO_CLASSROOM.examples.length} worked examples`,
     );
   }
 }

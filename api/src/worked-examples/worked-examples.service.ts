@@ -146,6 +146,8 @@ export class WorkedExamplesService {
               tolerancePercent: dto.exercise.tolerancePercent,
             }
           : null,
+        // To the millisecond, so examples published within one second keep their order.
+        publishedAt: new Date(),
       }),
     );
     await this.audit.record({
