@@ -6,6 +6,7 @@ import {
   LoginOutlined,
   SettingOutlined,
   TableOutlined,
+  TeamOutlined,
 } from '@ant-design/icons';
 import { Suspense } from 'react';
 import { Link, Outlet, useNavigate } from 'react-router-dom';
@@ -28,6 +29,11 @@ export function AppLayout() {
             (role) => role === 'designer' || role === 'teacher' || role === 'admin',
           )
             ? [{ href: paths.plans.href(), icon: <FireOutlined />, label: 'Gas plans' }]
+            : []),
+          ...(user?.roles.some(
+            (role) => role === 'teacher' || role === 'student' || role === 'admin',
+          )
+            ? [{ href: paths.classes.href(), icon: <TeamOutlined />, label: 'Classes' }]
             : []),
           ...(user?.roles.includes('reviewer')
             ? [{ href: paths.reviews.href(), icon: <AuditOutlined />, label: 'Review queue' }]

@@ -69,6 +69,22 @@ export const routes: RouteObject[] = [
             lazy: () => import('./routes/plans').then((m) => ({ Component: m.PlanRoute })),
           },
           {
+            path: paths.classes.path,
+            lazy: () => import('./routes/classes').then((m) => ({ Component: m.ClassesRoute })),
+          },
+          {
+            path: paths.classroom.path,
+            lazy: () => import('./routes/classes').then((m) => ({ Component: m.ClassRoute })),
+          },
+          {
+            path: paths.join.path,
+            lazy: () => import('./routes/classes').then((m) => ({ Component: m.JoinRoute })),
+          },
+          {
+            path: paths.example.path,
+            lazy: () => import('./routes/example').then((m) => ({ Component: m.ExampleRoute })),
+          },
+          {
             path: paths.reviews.path,
             lazy: () => import('./routes/reviews').then((m) => ({ Component: m.ReviewsRoute })),
           },

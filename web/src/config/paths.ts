@@ -14,6 +14,10 @@ export const paths = {
   plans: { path: '/plans', href: () => '/plans' },
   plan: { path: '/plans/:id', href: (id: string) => `/plans/${id}` },
   admin: { path: '/admin', href: () => '/admin' },
+  classes: { path: '/classes', href: () => '/classes' },
+  classroom: { path: '/classes/:id', href: (id: string) => `/classes/${id}` },
+  join: { path: '/join/:code', href: (code: string) => `/join/${code}` },
+  example: { path: '/examples/:id', href: (id: string) => `/examples/${id}` },
   sheet: {
     path: '/calculations/:id/versions/:n/sheet',
     href: (id: string, n: number) => `/calculations/${id}/versions/${n}/sheet`,

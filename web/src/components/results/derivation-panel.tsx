@@ -1,13 +1,6 @@
 import { Card, Typography } from 'antd';
 import type { DerivationStep } from '@loftwright/buoyancy';
-
-const number = (value: number) => {
-  if (value === 0) return '0';
-  const magnitude = Math.abs(value);
-  return magnitude >= 1e6 || magnitude < 1e-3
-    ? value.toExponential(4)
-    : Number(value.toPrecision(6)).toString();
-};
+import { stepNumber as number } from './step-number';
 
 /** Every step: what is computed, the formula, the numbers put in, the result, and its source. */
 export function DerivationPanel({ steps }: { steps: readonly DerivationStep[] }) {
