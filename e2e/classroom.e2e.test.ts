@@ -119,6 +119,28 @@ describe('the classroom in the browser: publish, join, walk through, exercise, s
     expect(await lastResult.textContent()).toContain('= ?');
   });
 
+  it('lets a newcomer without an account register as a student from the join link', async () => {
+    const newcomer = await launchBrowser();
+    try {
+      const page = await newcomer.context.newPage();
+      screenshotOnFailure(() => page, 'classroom-newcomer');
+      await page.goto(`${product.baseUrl}/join/${joinCode.replace('-', '')}`);
+      await page.getByRole('link', { name: 'Create a student account and join' }).click();
+      await page.getByLabel('Name').fill('Mina Osei');
+      await page.getByLabel('E-mail').fill('mina@school.test');
+      await page.getByLabel('Password').fill('a-long-password-1');
+      await page.getByRole('button', { name: 'Create account' }).click();
+      await page.waitForURL(`${product.baseUrl}/classes`);
+      const row = page.getByRole('table', { name: 'Classes' }).getByRole('row', {
+        name: /Evening lift club/,
+      });
+      await expect.poll(() => row.isVisible()).toBe(true);
+      expect(await row.textContent()).toContain('student');
+    } finally {
+      await newcomer.close();
+    }
+  });
+
   it('checks the student’s answer, says which step went wrong, then accepts a right one', async () => {
     screenshotOnFailure(() => student, 'classroom-student-exercise');
     await student.getByRole('tab', { name: 'Exercise' }).click();

@@ -132,6 +132,36 @@ describe('classes and join codes', () => {
     expect(intoClosed.body.field).toBe('code');
   });
 
+  it('registers a new student from a join code, and creates no account for a wrong one', async () => {
+    const created = await createClass('Register from the link');
+    const wrong = await http().post('/api/auth/register').send({
+      email: 'new-pupil@test.invalid',
+      password: 'a-long-password-1',
+      displayName: 'New Pupil',
+      joinCode: 'ZZZZ-ZZZZ',
+    });
+    expect(wrong.status).toBe(404);
+    expect(wrong.body.field).toBe('joinCode');
+    const registered = await http().post('/api/auth/register').send({
+      email: 'new-pupil@test.invalid',
+      password: 'a-long-password-1',
+      displayName: 'New Pupil',
+      joinCode: created.joinCode.toLowerCase(),
+    });
+    expect(registered.status).toBe(201);
+    expect(registered.body.user.roles).toEqual(['student']);
+    const auth = { Authorization: `Bearer ${registered.body.accessToken}` };
+    const classes = await http().get('/api/classes').set(auth);
+    expect(classes.body.map((item: { id: string }) => item.id)).toEqual([created.id]);
+    // Without a code a self-registered account stays a designer, as before.
+    const plain = await http().post('/api/auth/register').send({
+      email: 'plain@test.invalid',
+      password: 'a-long-password-2',
+      displayName: 'Plain',
+    });
+    expect(plain.body.user.roles).toEqual(['designer']);
+  });
+
   it('refuses a join by an account without the student role', async () => {
     const created = await createClass('Teachers do not join');
     const response = await http()

@@ -7,6 +7,7 @@ import { ThrottlerModule } from '@nestjs/throttler';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import type { EnvironmentVariables } from '../config/env.validation';
 import { resolveJwtSecret } from '../config/jwt-secret';
+import { ClassroomsModule } from '../classrooms/classrooms.module';
 import { MailModule } from '../mail/mail.module';
 import { UsersModule } from '../users/users.module';
 import { JWT_SECRET } from './auth.constants';
@@ -31,6 +32,7 @@ const jwtSecretProvider = {
   imports: [
     UsersModule,
     MailModule,
+    ClassroomsModule,
     PassportModule,
     TypeOrmModule.forFeature([PasswordResetToken]),
     ThrottlerModule.forRootAsync({

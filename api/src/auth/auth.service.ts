@@ -14,6 +14,7 @@ import { type PublicUser, toPublicUser, type User } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
 import type { LoginDto } from './dto/login.dto';
 import type { RegisterDto } from './dto/register.dto';
+import { ClassroomsService } from '../classrooms/classrooms.service';
 import { PasswordResetToken } from './password-reset-token.entity';
 
 /** How long a password-reset link works. */
@@ -38,16 +39,21 @@ export class AuthService {
     @InjectRepository(PasswordResetToken)
     private readonly resetTokens: Repository<PasswordResetToken>,
     private readonly writeLock: WriteLock,
+    private readonly classrooms: ClassroomsService,
   ) {}
 
   async register(dto: RegisterDto): Promise<SignedIn> {
     // The first account on an empty database runs it: without an admin nobody could grant roles.
     const first = (await this.usersService.count()) === 0;
+    // Registering from a class's join link makes a student account; the code is checked before
+    // anything is created, so a wrong code leaves no account behind.
+    const joinCode = dto.joinCode?.trim() ? dto.joinCode : undefined;
+    if (joinCode) await this.classrooms.findJoinable(joinCode, 'joinCode');
     const user = await this.usersService.create({
       email: dto.email,
       password: dto.password,
       displayName: dto.displayName,
-      roles: first ? ['admin', 'designer'] : ['designer'],
+      roles: first ? ['admin', 'designer'] : joinCode ? ['student'] : ['designer'],
     });
     await this.audit.record({
       actorId: user.id,
@@ -55,6 +61,12 @@ export class AuthService {
       targetType: 'user',
       targetId: user.id,
     });
+    if (joinCode && user.roles.includes('student')) {
+      await this.classrooms.join(
+        { id: user.id, email: user.email, displayName: user.displayName, roles: user.roles },
+        joinCode,
+      );
+    }
     return this.signIn(user);
   }
 

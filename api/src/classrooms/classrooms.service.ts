@@ -209,36 +209,43 @@ export class ClassroomsService {
   }
 
   /**
-   * Puts a student on the roster. A wrong code is 404, a code past its date 410, a closed class
-   * 409; each names `code` so the form can say what to do.
+   * The class a join code admits a student to now. A wrong code is 404, a code past its date 410,
+   * a closed class 409; each names the field (`code`, or `joinCode` at registration) so the form
+   * can say what to do.
    */
-  async join(user: AuthUser, rawCode: string) {
-    if (!hasRole(user, 'student')) {
-      throw new ForbiddenException({
-        message: 'Joining a class needs a student account; teachers open their classes directly.',
-      });
-    }
+  async findJoinable(rawCode: string, field = 'code'): Promise<Classroom> {
     const code = normaliseJoinCode(rawCode);
     const classroom =
       code.length === JOIN_CODE_LENGTH ? await this.classrooms.findOneBy({ joinCode: code }) : null;
     if (!classroom) {
       throw new NotFoundException({
         message: 'No class has this join code. Check it with your teacher.',
-        field: 'code',
+        field,
       });
     }
     if (classroom.closedAt) {
       throw new ConflictException({
         message: 'This class is closed and takes no new students.',
-        field: 'code',
+        field,
       });
     }
     if (new Date(classroom.joinCodeExpiresAt).getTime() < Date.now()) {
       throw new GoneException({
         message: 'This join code has expired. Ask your teacher for a new one.',
-        field: 'code',
+        field,
       });
     }
+    return classroom;
+  }
+
+  /** Puts a student on the roster of the class the code belongs to (once). */
+  async join(user: AuthUser, rawCode: string) {
+    if (!hasRole(user, 'student')) {
+      throw new ForbiddenException({
+        message: 'Joining a class needs a student account; teachers open their classes directly.',
+      });
+    }
+    const classroom = await this.findJoinable(rawCode);
     const already = await this.isMember(classroom.id, user.id);
     if (!already) {
       await this.writeLock.run(() =>

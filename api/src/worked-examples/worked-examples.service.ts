@@ -16,10 +16,14 @@ import { ClassroomsService } from '../classrooms/classrooms.service';
 import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
 import { UsersService } from '../users/users.service';
-import type { ExampleSettingsDto, PublishExampleDto } from './dto/worked-example.dto';
+import type {
+  ExampleSettingsDto,
+  ExerciseSettingsDto,
+  PublishExampleDto,
+} from './dto/worked-example.dto';
 import { type ExampleContent, maskForExercise, settingsIssues } from './example-content';
 import { ExerciseSubmission } from './exercise-submission.entity';
-import { WorkedExample } from './worked-example.entity';
+import { type ExerciseSettings, WorkedExample } from './worked-example.entity';
 
 const NOT_VISIBLE = 'This example does not exist or you may not see it.';
 
@@ -30,6 +34,14 @@ function badSettings(issues: { field: string; reason: string }[]): BadRequestExc
     issues,
   });
 }
+
+/** The settings as stored: copies, so nothing of the request object is kept by reference. */
+const exerciseSettings = (dto: ExerciseSettingsDto | null | undefined): ExerciseSettings | null =>
+  dto ? { hiddenOutputs: [...dto.hiddenOutputs], tolerancePercent: dto.tolerancePercent } : null;
+
+/** Every step in full, as the teacher and a student who has answered see them. */
+const shownSteps = (example: WorkedExample) =>
+  (example.steps as ExampleContent['steps']).map((step) => ({ ...step, hidden: false }));
 
 @Injectable()
 export class WorkedExamplesService {
@@ -140,12 +152,7 @@ export class WorkedExamplesService {
         stepNotes: { ...(dto.stepNotes ?? {}) },
         tryRanges: { ...(dto.tryRanges ?? {}) },
         chartStepId: dto.chartStepId ?? null,
-        exercise: dto.exercise
-          ? {
-              hiddenOutputs: [...dto.exercise.hiddenOutputs],
-              tolerancePercent: dto.exercise.tolerancePercent,
-            }
-          : null,
+        exercise: exerciseSettings(dto.exercise),
         // To the millisecond, so examples published within one second keep their order.
         publishedAt: new Date(),
       }),
@@ -209,10 +216,7 @@ export class WorkedExamplesService {
       return {
         ...base,
         outputs: example.outputs,
-        steps: (example.steps as ExampleContent['steps']).map((step) => ({
-          ...step,
-          hidden: false,
-        })),
+        steps: shownSteps(example),
         series: example.series,
         revealed: true,
         questions: [],
@@ -239,7 +243,7 @@ export class WorkedExamplesService {
     return {
       ...base,
       outputs: example.outputs,
-      steps: (example.steps as ExampleContent['steps']).map((step) => ({ ...step, hidden: false })),
+      steps: shownSteps(example),
       series: example.series,
       revealed: true,
       questions: example.exercise
@@ -260,12 +264,7 @@ export class WorkedExamplesService {
     if (dto.tryRanges !== undefined) changes.tryRanges = { ...dto.tryRanges };
     if (dto.chartStepId !== undefined) changes.chartStepId = dto.chartStepId;
     if (dto.exercise !== undefined) {
-      changes.exercise = dto.exercise
-        ? {
-            hiddenOutputs: [...dto.exercise.hiddenOutputs],
-            tolerancePercent: dto.exercise.tolerancePercent,
-          }
-        : null;
+      changes.exercise = exerciseSettings(dto.exercise);
     }
     if (Object.keys(changes).length > 0) {
       await this.writeLock.run(() => this.examples.update({ id }, changes as never));

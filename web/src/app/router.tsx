@@ -36,6 +36,11 @@ export const routes: RouteObject[] = [
           import('./routes/password-reset').then((m) => ({ Component: m.ResetPasswordRoute })),
       },
       {
+        // Outside the sign-in guard: a student without an account registers from the link.
+        path: paths.join.path,
+        lazy: () => import('./routes/classes').then((m) => ({ Component: m.JoinRoute })),
+      },
+      {
         path: paths.verify.path,
         lazy: () => import('./routes/verify').then((m) => ({ Component: m.VerifyRoute })),
       },
@@ -75,10 +80,6 @@ export const routes: RouteObject[] = [
           {
             path: paths.classroom.path,
             lazy: () => import('./routes/classes').then((m) => ({ Component: m.ClassRoute })),
-          },
-          {
-            path: paths.join.path,
-            lazy: () => import('./routes/classes').then((m) => ({ Component: m.JoinRoute })),
           },
           {
             path: paths.example.path,

@@ -5,7 +5,11 @@ export const paths = {
     path: '/sign-in',
     href: (next?: string) => (next ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
   },
-  register: { path: '/register', href: () => '/register' },
+  register: {
+    path: '/register',
+    href: (joinCode?: string) =>
+      joinCode ? `/register?join=${encodeURIComponent(joinCode)}` : '/register',
+  },
   forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   calculations: { path: '/calculations', href: () => '/calculations' },

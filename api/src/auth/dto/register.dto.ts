@@ -1,5 +1,5 @@
-import { ApiProperty } from '@nestjs/swagger';
-import { IsEmail, IsString, MaxLength, MinLength } from 'class-validator';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { IsEmail, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
 import { IsBcryptSafe } from './password.validator';
 
 export class RegisterDto {
@@ -19,4 +19,13 @@ export class RegisterDto {
   @MinLength(1)
   @MaxLength(80)
   displayName: string;
+
+  @ApiPropertyOptional({
+    example: 'K7QM-3XPA',
+    description: 'a class join code: the account is a student account, on that class’s roster',
+  })
+  @IsOptional()
+  @IsString({ message: 'joinCode must be text' })
+  @MaxLength(40, { message: 'joinCode is too long to be a join code' })
+  joinCode?: string;
 }

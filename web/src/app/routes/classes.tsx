@@ -95,7 +95,25 @@ export function ClassRoute() {
 export function JoinRoute() {
   const { code = '' } = useParams();
   const navigate = useNavigate();
-  const { user } = useMe();
+  const { user, signedIn } = useMe();
+  if (!signedIn) {
+    return (
+      <Card style={{ maxWidth: 520 }}>
+        <Typography.Title level={2}>Join a class</Typography.Title>
+        <Typography.Paragraph>
+          Your teacher’s code: <span className="lw-mono">{code.toUpperCase()}</span>
+        </Typography.Paragraph>
+        <Space wrap>
+          <Link to={paths.register.href(code)}>
+            <Button type="primary">Create a student account and join</Button>
+          </Link>
+          <Link to={paths.signIn.href(paths.join.href(code))}>
+            <Button>Sign in to join</Button>
+          </Link>
+        </Space>
+      </Card>
+    );
+  }
   return (
     <>
       <Typography.Title level={2}>Join a class</Typography.Title>

@@ -46,8 +46,13 @@ export function useSignIn() {
 export function useRegister() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (body: { email: string; password: string; displayName: string }) =>
-      (await apiClient.post<SignedIn>('/auth/register', body)).data,
+    mutationFn: async (body: {
+      email: string;
+      password: string;
+      displayName: string;
+      /** A class join code: the account becomes a student account in that class. */
+      joinCode?: string;
+    }) => (await apiClient.post<SignedIn>('/auth/register', body)).data,
     onSuccess: (data) => {
       setToken(data.accessToken);
       queryClient.setQueryData(['auth', 'me'], data.user);

@@ -2,14 +2,24 @@ import { Button, Form, Input } from 'antd';
 import { FormError } from '@/components/errors/form-error';
 import { useRegister } from '../api/auth-api';
 
-export function RegisterForm({ onRegistered }: { onRegistered: () => void }) {
+export function RegisterForm({
+  onRegistered,
+  joinCode,
+}: {
+  onRegistered: () => void;
+  /** Registering from a class's join link: a student account, joined to that class. */
+  joinCode?: string;
+}) {
   const register = useRegister();
   return (
     <Form
       layout="vertical"
       requiredMark={false}
       onFinish={(values: { email: string; password: string; displayName: string }) =>
-        register.mutate(values, { onSuccess: onRegistered })
+        register.mutate(
+          { ...values, ...(joinCode ? { joinCode } : {}) },
+          { onSuccess: onRegistered },
+        )
       }
     >
       <FormError error={register.error} />

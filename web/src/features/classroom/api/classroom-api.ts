@@ -56,7 +56,7 @@ export interface ExampleSummary {
 /** A step as the class sees it; in an exercise not yet answered, hidden numbers are null. */
 export interface ExampleStep extends Omit<DerivationStep, 'result' | 'values'> {
   result: Omit<DerivationStep['result'], 'value'> & { value: number | null };
-  values: (Omit<DerivationStep['values'][number], 'value'> & { value: number | null })[];
+  values: readonly (Omit<DerivationStep['values'][number], 'value'> & { value: number | null })[];
   hidden: boolean;
 }
 
