@@ -26,6 +26,13 @@ const DEFAULT_JOIN_DAYS = 14;
 /** How a user stands towards a class: runs it, sits in it, or neither. */
 export type ClassroomStanding = 'teacher' | 'student' | 'admin';
 
+/** Teacher-only actions on a class and what is published to it: a student gets 403. */
+export function requireTeaching(standing: ClassroomStanding): void {
+  if (standing === 'student') {
+    throw new ForbiddenException({ message: 'Only the class teacher may do this.' });
+  }
+}
+
 @Injectable()
 export class ClassroomsService {
   constructor(
@@ -88,9 +95,7 @@ export class ClassroomsService {
   /** The class, for its teacher or an admin; others get the same 404 as for a missing class. */
   async findTaught(user: AuthUser, id: string): Promise<Classroom> {
     const { classroom, standing } = await this.findVisible(user, id);
-    if (standing === 'student') {
-      throw new ForbiddenException({ message: 'Only the class teacher may do this.' });
-    }
+    requireTeaching(standing);
     return classroom;
   }
 

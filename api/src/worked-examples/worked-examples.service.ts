@@ -1,5 +1,4 @@
 import {
-  BadRequestException,
   ConflictException,
   ForbiddenException,
   Injectable,
@@ -12,7 +11,8 @@ import { Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import { CalculationsService } from '../calculations/calculations.service';
-import { ClassroomsService } from '../classrooms/classrooms.service';
+import { ClassroomsService, requireTeaching } from '../classrooms/classrooms.service';
+import { fieldIssuesException } from '../common/errors/field-issues';
 import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
 import { UsersService } from '../users/users.service';
@@ -26,14 +26,6 @@ import { ExerciseSubmission } from './exercise-submission.entity';
 import { type ExerciseSettings, WorkedExample } from './worked-example.entity';
 
 const NOT_VISIBLE = 'This example does not exist or you may not see it.';
-
-function badSettings(issues: { field: string; reason: string }[]): BadRequestException {
-  return new BadRequestException({
-    message: issues.map((issue) => `${issue.field}: ${issue.reason}`).join('; '),
-    field: issues[0]?.field,
-    issues,
-  });
-}
 
 /** The settings as stored: copies, so nothing of the request object is kept by reference. */
 const exerciseSettings = (dto: ExerciseSettingsDto | null | undefined): ExerciseSettings | null =>
@@ -76,9 +68,7 @@ export class WorkedExamplesService {
 
   private async findTaught(user: AuthUser, id: string) {
     const found = await this.findVisible(user, id);
-    if (found.standing === 'student') {
-      throw new ForbiddenException({ message: 'Only the class teacher may do this.' });
-    }
+    requireTeaching(found.standing);
     return found;
   }
 
@@ -130,7 +120,7 @@ export class WorkedExamplesService {
       steps: version.steps as ExampleContent['steps'],
     };
     const issues = settingsIssues(content, dto);
-    if (issues.length > 0) throw badSettings(issues);
+    if (issues.length > 0) throw fieldIssuesException(issues);
     const id = randomUUID();
     await this.writeLock.run(() =>
       insertRow(this.examples, {
@@ -212,17 +202,13 @@ export class WorkedExamplesService {
       exercise: example.exercise,
       standing,
     };
-    if (standing !== 'student') {
-      return {
-        ...base,
-        outputs: example.outputs,
-        steps: shownSteps(example),
-        series: example.series,
-        revealed: true,
-        questions: [],
-        mySubmissions: [],
-      };
-    }
+    const full = {
+      outputs: example.outputs,
+      steps: shownSteps(example),
+      series: example.series,
+      revealed: true,
+    };
+    if (standing !== 'student') return { ...base, ...full, questions: [], mySubmissions: [] };
     const attempts = await this.submissions.find({
       where: { exampleId: id, studentId: user.id },
       order: { attempt: 'DESC' },
@@ -242,10 +228,7 @@ export class WorkedExamplesService {
     }
     return {
       ...base,
-      outputs: example.outputs,
-      steps: shownSteps(example),
-      series: example.series,
-      revealed: true,
+      ...full,
       questions: example.exercise
         ? maskForExercise(this.content(example), example.exercise).questions
         : [],
@@ -256,7 +239,7 @@ export class WorkedExamplesService {
   async update(user: AuthUser, id: string, dto: ExampleSettingsDto) {
     const { example } = await this.findTaught(user, id);
     const issues = settingsIssues(this.content(example), dto);
-    if (issues.length > 0) throw badSettings(issues);
+    if (issues.length > 0) throw fieldIssuesException(issues);
     const changes: Partial<WorkedExample> = {};
     if (dto.title !== undefined) changes.title = dto.title.trim();
     if (dto.intro !== undefined) changes.intro = dto.intro;
@@ -346,7 +329,7 @@ export class WorkedExamplesService {
         )
         .map(([name]) => ({ field: `answers.${name}`, reason: 'must be a number or null' })),
     ];
-    if (issues.length > 0) throw badSettings(issues);
+    if (issues.length > 0) throw fieldIssuesException(issues);
     const given = Object.fromEntries(
       hidden.map((name) => [name, typeof answers[name] === 'number' ? answers[name] : null]),
     );

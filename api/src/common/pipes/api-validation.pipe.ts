@@ -1,11 +1,7 @@
-import { BadRequestException, ValidationPipe, type ValidationError } from '@nestjs/common';
+import { ValidationPipe, type ValidationError } from '@nestjs/common';
+import { type FieldIssue, fieldIssuesException } from '../errors/field-issues';
 
-interface Issue {
-  field: string;
-  reason: string;
-}
-
-function flatten(errors: readonly ValidationError[], prefix = ''): Issue[] {
+function flatten(errors: readonly ValidationError[], prefix = ''): FieldIssue[] {
   return errors.flatMap((error) => {
     const field = prefix ? `${prefix}.${error.property}` : error.property;
     const own = Object.values(error.constraints ?? {}).map((reason) => ({ field, reason }));
@@ -22,16 +18,6 @@ export function createValidationPipe(): ValidationPipe {
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,
-    exceptionFactory: (errors) => {
-      const issues = flatten(errors);
-      const first = issues[0];
-      return new BadRequestException({
-        statusCode: 400,
-        error: 'Bad Request',
-        message: issues.map((issue) => `${issue.field}: ${issue.reason}`).join('; '),
-        field: first?.field,
-        issues,
-      });
-    },
+    exceptionFactory: (errors) => fieldIssuesException(flatten(errors)),
   });
 }

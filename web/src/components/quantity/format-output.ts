@@ -14,6 +14,12 @@ const DIMENSION_OF_UNIT: Record<string, Dimension> = {
   W: 'power',
 };
 
+/** "1.056 kg/m³": a result as one piece of text, in the user's unit system. */
+export function formatOutputText(value: number, unit: string, unitSystem: UnitSystem): string {
+  const shown = formatOutput(value, unit, unitSystem);
+  return `${shown.value} ${shown.unit}`.trim();
+}
+
 /** A result value in the user's unit system where its unit has a dimension, else as the engine gives it. */
 export function formatOutput(
   value: number,

@@ -4,14 +4,13 @@ import type { UnitSystem } from '@loftwright/buoyancy';
 import { useState } from 'react';
 import { FormError } from '@/components/errors/form-error';
 import { dimensionForField } from '@/components/quantity/dimension-for-field';
-import { formatOutput } from '@/components/quantity/format-output';
+import { formatOutputText } from '@/components/quantity/format-output';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import { type ExampleDetail, type Submission, useSubmitAnswers } from '../api/classroom-api';
 
 function shown(value: number | null, unit: string, unitSystem: UnitSystem) {
   if (value === null) return '—';
-  const text = formatOutput(value, unit, unitSystem);
-  return `${text.value} ${text.unit}`.trim();
+  return formatOutputText(value, unit, unitSystem);
 }
 
 /** The engine's verdict on one attempt: each answer right or wrong, and where it went wrong. */

@@ -5,11 +5,12 @@ import {
   numberAtPath,
   type OutputQuantity,
   type UnitSystem,
+  valuesOutsideRanges,
   withNumberAtPath,
 } from '@loftwright/buoyancy';
 import { useState } from 'react';
 import { dimensionForField } from '@/components/quantity/dimension-for-field';
-import { formatOutput } from '@/components/quantity/format-output';
+import { formatOutputText } from '@/components/quantity/format-output';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import type { TryRanges } from '../api/classroom-api';
 import { inputFieldInfo } from '../lib/input-field';
@@ -17,9 +18,7 @@ import { inputFieldInfo } from '../lib/input-field';
 const rangeText = (min: number, max: number, unit: string, name: string, system: UnitSystem) => {
   const dimension = dimensionForField(name, unit);
   if (!dimension) return `${min} to ${max}${unit ? ` ${unit}` : ''}`;
-  const low = formatOutput(min, unit, system);
-  const high = formatOutput(max, unit, system);
-  return `${low.value} ${low.unit} to ${high.value} ${high.unit}`;
+  return `${formatOutputText(min, unit, system)} to ${formatOutputText(max, unit, system)}`;
 };
 
 interface Row {
@@ -50,33 +49,33 @@ export function TryItYourself({
   // Bumped on reset so the quantity fields show the original values again.
   const [generation, setGeneration] = useState(0);
   const paths = Object.keys(ranges);
-  const outside = paths.filter((path) => {
-    const value = changes[path];
-    const range = ranges[path];
-    return value !== undefined && range !== undefined && (value < range.min || value > range.max);
-  });
   const unreadable = paths.filter((path) => path in changes && changes[path] === undefined);
 
   const computed = ((): {
     result: ReturnType<typeof evaluate> | undefined;
     problem: string | undefined;
+    outside: string[];
   } => {
-    if (outside.length > 0 || unreadable.length > 0)
-      return { result: undefined, problem: undefined };
     try {
       let modified: Record<string, unknown> = inputs;
       for (const [path, value] of Object.entries(changes)) {
         if (value !== undefined) modified = withNumberAtPath(modified, path, value);
       }
-      return { result: evaluate(kind, modified), problem: undefined };
+      const outside = valuesOutsideRanges(modified, ranges).map((issue) => issue.path);
+      if (outside.length > 0 || unreadable.length > 0) {
+        return { result: undefined, problem: undefined, outside };
+      }
+      return { result: evaluate(kind, modified), problem: undefined, outside };
     } catch (error) {
       return {
         result: undefined,
         problem:
           error instanceof InputError || error instanceof Error ? error.message : String(error),
+        outside: [],
       };
     }
   })();
+  const { outside } = computed;
 
   if (paths.length === 0) {
     return (
@@ -172,8 +171,11 @@ export function TryItYourself({
               title: 'In the example',
               key: 'original',
               render: (_: unknown, row) => {
-                const text = formatOutput(row.original.value, row.original.unit, unitSystem);
-                return <span className="lw-mono">{`${text.value} ${text.unit}`}</span>;
+                return (
+                  <span className="lw-mono">
+                    {formatOutputText(row.original.value, row.original.unit, unitSystem)}
+                  </span>
+                );
               },
             },
             {
@@ -181,10 +183,9 @@ export function TryItYourself({
               key: 'yours',
               render: (_: unknown, row) => {
                 if (!row.yours) return '—';
-                const text = formatOutput(row.yours.value, row.yours.unit, unitSystem);
                 return (
                   <span className="lw-mono" data-yours={row.name}>
-                    {`${text.value} ${text.unit}`}
+                    {formatOutputText(row.yours.value, row.yours.unit, unitSystem)}
                   </span>
                 );
               },
