@@ -70,6 +70,11 @@ describe('bad input', () => {
           { email: 'a@b.org', password: 'long-enough-pw', displayName: 'x'.repeat(5000) },
           'displayName',
         ],
+        [
+          'not a number format',
+          { email: 'a@b.org', password: 'long-enough-pw', displayName: 'N', numberFormat: 'x' },
+          'numberFormat',
+        ],
       ],
     },
     {
@@ -108,6 +113,9 @@ describe('bad input', () => {
       bad: [
         ...common({ unitSystem: 'us' }, 'unitSystem'),
         ['not a system', { unitSystem: 'metric-ish' }, 'unitSystem'],
+        ['not a number format', { numberFormat: 'comma-comma' }, 'numberFormat'],
+        ['lower-case currency', { currency: 'usd' }, 'currency'],
+        ['null currency', { currency: null }, 'currency'],
       ],
     },
     {

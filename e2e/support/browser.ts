@@ -24,14 +24,18 @@ export interface Browser {
   close(): Promise<void>;
 }
 
-/** Launches Debian's Chromium headless with a fresh, throw-away profile. */
-export async function launchBrowser(): Promise<Browser> {
+/**
+ * Launches Debian's Chromium headless with a fresh, throw-away profile. `locale` sets the
+ * browser's language (navigator.language, Accept-Language, Intl), as a person's system would.
+ */
+export async function launchBrowser(options: { locale?: string } = {}): Promise<Browser> {
   const profileDir = mkdtempSync(join(tmpdir(), 'loftwright-chromium-'));
   const context = await chromium.launchPersistentContext(profileDir, {
     executablePath: CHROMIUM_PATH,
     headless: true,
     args: CHROMIUM_ARGS,
     viewport: { width: 1280, height: 800 },
+    ...(options.locale ? { locale: options.locale } : {}),
   });
   return {
     context,

@@ -8,7 +8,7 @@ import {
   Post,
   UseGuards,
 } from '@nestjs/common';
-import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
+import { ApiBadRequestResponse, ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { ThrottlerGuard } from '@nestjs/throttler';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
@@ -61,11 +61,16 @@ export class AuthController {
 
   @ApiBearerAuth()
   @Patch('me/preferences')
+  // Declaring one response drops the default 200 from the document, so it is declared too.
+  @ApiOkResponse({ description: 'the account, with the preferences as now stored' })
+  @ApiBadRequestResponse({
+    description: 'no preference sent, or a value not allowed; the body names the field',
+  })
   async updatePreferences(
     @CurrentUser() user: AuthUser,
     @Body() body: UpdatePreferencesDto,
   ): Promise<PublicUser> {
-    await this.usersService.setUnitSystem(user.id, body.unitSystem);
+    await this.usersService.setPreferences(user.id, body);
     return this.me(user);
   }
 

@@ -53,6 +53,7 @@ export class AuthService {
       email: dto.email,
       password: dto.password,
       displayName: dto.displayName,
+      numberFormat: dto.numberFormat,
       roles: first ? ['admin', 'designer'] : joinCode ? ['student'] : ['designer'],
     });
     await this.audit.record({

@@ -23,6 +23,7 @@ import { FillLogs1764723600000 } from './migrations/1764723600000-fill-logs';
 import { OutboxAttachments1764727200000 } from './migrations/1764727200000-outbox-attachments';
 import { GasPlans1764730800000 } from './migrations/1764730800000-gas-plans';
 import { Classrooms1764734400000 } from './migrations/1764734400000-classrooms';
+import { UserNumberFormatCurrency1764738000000 } from './migrations/1764738000000-user-number-format-currency';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -51,6 +52,7 @@ export const MIGRATIONS = [
   OutboxAttachments1764727200000,
   GasPlans1764730800000,
   Classrooms1764734400000,
+  UserNumberFormatCurrency1764738000000,
 ];
 
 /**

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import type { NumberFormat, UnitSystem } from './preferences';
 import type { Role } from './roles';
 
 @Entity('user')
@@ -20,7 +21,14 @@ export class User {
   roles: Role[];
 
   @Column('varchar', { name: 'unit_system', default: 'si' })
-  unitSystem: 'si' | 'us';
+  unitSystem: UnitSystem;
+
+  @Column('varchar', { name: 'number_format', default: 'point-comma' })
+  numberFormat: NumberFormat;
+
+  /** ISO 4217 code, upper case: the default currency of new gas plans and prices. */
+  @Column('varchar', { length: 3, default: 'EUR' })
+  currency: string;
 
   /** Bumped on sign-out and password change: tokens carrying an older value stop working. */
   @Column('integer', { name: 'token_version', default: 0 })
@@ -39,7 +47,9 @@ export interface PublicUser {
   email: string;
   displayName: string;
   roles: Role[];
-  unitSystem: 'si' | 'us';
+  unitSystem: UnitSystem;
+  numberFormat: NumberFormat;
+  currency: string;
   createdAt: string;
 }
 
@@ -50,6 +60,8 @@ export function toPublicUser(user: User): PublicUser {
     displayName: user.displayName,
     roles: user.roles,
     unitSystem: user.unitSystem,
+    numberFormat: user.numberFormat,
+    currency: user.currency,
     createdAt: new Date(user.createdAt).toISOString(),
   };
 }

@@ -3,8 +3,16 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { In, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
+import { fieldIssuesException } from '../common/errors/field-issues';
 import { WriteLock } from '../database/write-lock';
 import { PasswordHasher } from './password-hasher.service';
+import {
+  DEFAULT_CURRENCY,
+  DEFAULT_NUMBER_FORMAT,
+  type NumberFormat,
+  PREFERENCE_FIELDS,
+  type Preferences,
+} from './preferences';
 import type { Role } from './roles';
 import { User } from './user.entity';
 import type { NameLookup } from './user-ref';
@@ -45,6 +53,8 @@ export class UsersService {
     password: string;
     displayName: string;
     roles: Role[];
+    /** As the browser guessed it at registration; the default when not known. */
+    numberFormat?: NumberFormat;
   }): Promise<User> {
     const email = input.email.trim().toLowerCase();
     if (await this.findByEmail(email)) {
@@ -60,6 +70,8 @@ export class UsersService {
       passwordHash: await this.hasher.hash(input.password),
       roles: [...new Set(input.roles)],
       unitSystem: 'si',
+      numberFormat: input.numberFormat ?? DEFAULT_NUMBER_FORMAT,
+      currency: DEFAULT_CURRENCY,
       tokenVersion: 0,
     });
     return this.writeLock.run(async () => {
@@ -124,7 +136,19 @@ export class UsersService {
     await this.writeLock.run(() => this.users.increment({ id }, 'tokenVersion', 1));
   }
 
-  async setUnitSystem(id: string, unitSystem: 'si' | 'us'): Promise<void> {
-    await this.writeLock.run(() => this.users.update({ id }, { unitSystem }));
+  /** Changes the preferences sent and leaves the others; sending none is a 400 naming them. */
+  async setPreferences(id: string, changes: Partial<Preferences>): Promise<void> {
+    const sent = Object.fromEntries(
+      PREFERENCE_FIELDS.flatMap((field) =>
+        changes[field] === undefined ? [] : [[field, changes[field]]],
+      ),
+    ) as Partial<Preferences>;
+    if (Object.keys(sent).length === 0) {
+      throw fieldIssuesException(
+        PREFERENCE_FIELDS.map((field) => ({ field, reason: 'not sent' })),
+        `Send at least one preference to change: ${PREFERENCE_FIELDS.join(', ')}.`,
+      );
+    }
+    await this.writeLock.run(() => this.users.update({ id }, sent));
   }
 }

@@ -1,6 +1,8 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { type NumberFormat, NUMBER_FORMATS } from '../../users/preferences';
 import { IsBcryptSafe } from './password.validator';
+import { IsNumberFormat, IsSent } from './preference.validators';
 
 export class RegisterDto {
   @ApiProperty({ example: 'wren@example.org' })
@@ -28,4 +30,13 @@ export class RegisterDto {
   @IsString({ message: 'joinCode must be text' })
   @MaxLength(40, { message: 'joinCode is too long to be a join code' })
   joinCode?: string;
+
+  @ApiPropertyOptional({
+    enum: [...NUMBER_FORMATS],
+    description:
+      'how the person writes numbers, as their browser guessed it; point-comma when not sent',
+  })
+  @IsSent()
+  @IsNumberFormat()
+  numberFormat?: NumberFormat;
 }

@@ -10,11 +10,15 @@ export interface FieldIssue {
  * The one shape of a 400 for bad fields, from the validation pipe and from services that check
  * what DTOs cannot (settings against stored content): every issue listed, the first one named.
  */
-export function fieldIssuesException(issues: readonly FieldIssue[]): BadRequestException {
+export function fieldIssuesException(
+  issues: readonly FieldIssue[],
+  /** Overrides the message built from the issues, when one sentence says it better. */
+  message?: string,
+): BadRequestException {
   return new BadRequestException({
     statusCode: 400,
     error: 'Bad Request',
-    message: issues.map((issue) => `${issue.field}: ${issue.reason}`).join('; '),
+    message: message ?? issues.map((issue) => `${issue.field}: ${issue.reason}`).join('; '),
     field: issues[0]?.field,
     issues,
   });

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { evaluate } from './registry.js';
+import { InputError } from '../errors.js';
+import { JURISDICTION_PROFILES } from '../rules/jurisdiction-profiles.js';
+import { evaluate, KINDS } from './registry.js';
 
 // Title 14 CFR § 101.1(a): thresholds in pounds, ounces per square inch, feet and cubic feet,
 // converted with the exact NIST SP 811 definitions (1 lb = 0.453 592 37 kg, 1 in = 0.0254 m).
@@ -90,5 +92,65 @@ describe('balloon-rules, U.S. 14 CFR 101.1', () => {
     expect(() => evaluate('balloon-rules', { profileId: 'atlantis', operation: 'free' })).toThrow(
       /profileId/,
     );
+  });
+
+  it('refuses an unknown profile by naming the allowed ones, by title', () => {
+    let refusal: unknown;
+    try {
+      evaluate('balloon-rules', { profileId: 'atlantis', operation: 'free' });
+    } catch (error) {
+      refusal = error;
+    }
+    expect(refusal).toBeInstanceOf(InputError);
+    const issue = (refusal as InputError).issues[0];
+    expect(issue?.field).toBe('profileId');
+    expect(issue?.value).toBe('atlantis');
+    expect(issue?.reason).toBe(
+      'must be one of: “United States (FAA, 14 CFR Part 101)” (us-14cfr101)',
+    );
+  });
+
+  it('points at the package whose smallest surface is needed for (i)', () => {
+    let refusal: unknown;
+    try {
+      evaluate('balloon-rules', {
+        profileId: 'us-14cfr101',
+        operation: 'free',
+        packages: [{ massKg: 0.5 }, { massKg: 5 * LB }],
+      });
+    } catch (error) {
+      refusal = error;
+    }
+    expect(refusal).toBeInstanceOf(InputError);
+    expect((refusal as InputError).field).toBe('packages.1.smallestSurfaceAreaM2');
+    expect((refusal as InputError).reason).toMatch(/over 1\.814 kg \(rule 101\.1\(a\)\(4\)\(i\)\)/);
+  });
+});
+
+describe('balloon-rules input schema, as forms read it', () => {
+  const schema = KINDS.find((kind) => kind.id === 'balloon-rules')?.inputSchema ?? {};
+  const properties = schema.properties as Record<string, Record<string, unknown>>;
+
+  it('offers every jurisdiction profile, titled by its name', () => {
+    expect(properties.profileId?.enum).toEqual(Object.keys(JURISDICTION_PROFILES));
+    expect(properties.profileId?.enumTitles).toEqual({
+      'us-14cfr101': 'United States (FAA, 14 CFR Part 101)',
+    });
+    expect(properties.profileId?.description).toBe('jurisdiction');
+  });
+
+  it('titles the operations and names the packages list and its items', () => {
+    expect(properties.operation?.enumTitles).toEqual({
+      free: 'Free balloon',
+      moored: 'Moored balloon',
+    });
+    expect(properties.packages).toMatchObject({
+      type: 'array',
+      description: 'payload packages',
+      itemLabel: 'package',
+      maxItems: 50,
+      default: [],
+      items: { type: 'object', required: ['massKg'] },
+    });
   });
 });

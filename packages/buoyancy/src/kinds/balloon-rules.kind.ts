@@ -2,6 +2,7 @@ import * as z from 'zod';
 import { Derivation, v } from '../derivation.js';
 import { InputError } from '../errors.js';
 import { JURISDICTION_PROFILES, type RuleThreshold } from '../rules/jurisdiction-profiles.js';
+import { choice } from '../schema/choice-schema.js';
 import { quantity } from '../schema/quantity-schema.js';
 import { defineKind } from './kind.js';
 
@@ -12,11 +13,20 @@ const packageSchema = z
   })
   .strict();
 
+const PROFILE_IDS = Object.keys(JURISDICTION_PROFILES);
+const profileTitle = (id: string) => JURISDICTION_PROFILES[id]?.name ?? id;
+
+const OPERATION_TITLES = { free: 'Free balloon', moored: 'Moored balloon' } as const;
+
 export const balloonRulesSchema = z
   .object({
-    profileId: z.string().meta({ description: 'jurisdiction profile, e.g. us-14cfr101' }),
-    operation: z.enum(['free', 'moored']),
-    packages: z.array(packageSchema).max(50).default([]),
+    profileId: choice(PROFILE_IDS, profileTitle, 'jurisdiction'),
+    operation: choice(['free', 'moored'], (id) => OPERATION_TITLES[id]),
+    packages: z
+      .array(packageSchema)
+      .max(50)
+      .default([])
+      .meta({ description: 'payload packages', itemLabel: 'package' }),
     suspensionSeparationForceN: quantity(
       'N',
       0,
@@ -58,9 +68,9 @@ function checkThreshold(d: Derivation, rule: RuleThreshold, inputs: Inputs): boo
       const ratios = candidates.map((item) => {
         if (item.smallestSurfaceAreaM2 === undefined) {
           throw new InputError(
-            'packages',
-            item,
-            `needs smallestSurfaceAreaM2 for a package over ${rule.limitKg.toFixed(3)} kg (rule ${rule.id})`,
+            `packages.${inputs.packages.indexOf(item)}.smallestSurfaceAreaM2`,
+            undefined,
+            `is needed for a package over ${rule.limitKg.toFixed(3)} kg (rule ${rule.id})`,
           );
         }
         return item.massKg / item.smallestSurfaceAreaM2;
@@ -108,7 +118,7 @@ export const balloonRulesKind = defineKind({
       throw new InputError(
         'profileId',
         inputs.profileId,
-        `must be one of: ${Object.keys(JURISDICTION_PROFILES).join(', ')}`,
+        `must be one of: ${PROFILE_IDS.map((id) => `“${profileTitle(id)}” (${id})`).join(', ')}`,
       );
     }
     const d = new Derivation();

@@ -14,9 +14,10 @@ import {
   integrateDescent,
   type AscentModel,
 } from '../flight/ascent-model.js';
-import { GAS_IDS } from '../gas/gas-catalogue.js';
+import { GAS_IDS, type GasId } from '../gas/gas-catalogue.js';
 import { MIN_PURITY } from '../gas/lifting-gas-density.js';
 import { findRoot } from '../numerics/find-root.js';
+import { gasChoice } from '../schema/choice-schema.js';
 import { envelopeSchema } from '../schema/envelope-schema.js';
 import { fraction, quantity } from '../schema/quantity-schema.js';
 import { deriveAmbient } from '../steps/ambient-steps.js';
@@ -53,7 +54,10 @@ export const flightProfileSchema = z
     payloadMassKg: quantity('kg', 0, 1000, 'payload, parachute and line'),
     gas: z
       .object({
-        gasId: z.enum(GAS_IDS).exclude(['hot-air']),
+        gasId: gasChoice(
+          GAS_IDS.filter((id): id is Exclude<GasId, 'hot-air'> => id !== 'hot-air'),
+          'lifting gas',
+        ),
         purity: fraction('mole fraction of the named gas; the rest is air', MIN_PURITY, 1).default(
           1,
         ),

@@ -7,6 +7,7 @@ import {
 } from '../constants.js';
 import { Derivation, v } from '../derivation.js';
 import { GAS_CATALOGUE, GAS_IDS } from '../gas/gas-catalogue.js';
+import { gasChoice } from '../schema/choice-schema.js';
 import { fraction, quantity } from '../schema/quantity-schema.js';
 import { SOURCES } from '../sources.js';
 import {
@@ -49,7 +50,7 @@ const electrolyserSchema = z
 
 const cylinderSchema = z
   .object({
-    gasId: z.enum(GAS_IDS),
+    gasId: gasChoice(GAS_IDS, 'gas in the cylinders'),
     waterVolumeM3: quantity('m³', 0.0001, 10, 'internal (water) volume of one cylinder'),
     fillPressurePa: quantity('Pa', 1e5, 1e8, 'gauge pressure of a full cylinder'),
     residualPressurePa: quantity('Pa', 0, 1e7, 'gauge pressure left when it is returned').default(

@@ -14,9 +14,18 @@ interface FieldRow {
 const asSchema = (value: unknown): Schema =>
   value && typeof value === 'object' ? (value as Schema) : {};
 
+/** A choice's value, with its title where the title says more than the value itself. */
+function choiceOf(value: unknown, titles: Schema): string {
+  const title = titles[String(value)];
+  const plain = String(value).replace(/-/g, ' ').toLowerCase();
+  return typeof title === 'string' && title.toLowerCase() !== plain
+    ? `\`${String(value)}\` (${title})`
+    : `\`${String(value)}\``;
+}
+
 function typeOf(schema: Schema): string {
   if (Array.isArray(schema.enum))
-    return schema.enum.map((value) => `\`${String(value)}\``).join(', ');
+    return schema.enum.map((value) => choiceOf(value, asSchema(schema.enumTitles))).join(', ');
   if (schema.const !== undefined) return `\`${String(schema.const)}\``;
   if (schema.type === 'array') return `list of ${typeOf(asSchema(schema.items))}`;
   return typeof schema.type === 'string' ? schema.type : 'value';

@@ -31,7 +31,11 @@ const readingSchema = z.discriminatedUnion('kind', [
 
 export const liftMeasurementSchema = z
   .object({
-    readings: z.array(readingSchema).min(1, { error: 'needs at least one reading' }).max(1000),
+    readings: z
+      .array(readingSchema.meta({ description: 'kind of reading' }))
+      .min(1, { error: 'needs at least one reading' })
+      .max(1000)
+      .meta({ description: 'lift readings', itemLabel: 'reading' }),
     prediction: z
       .object({
         envelope: envelopeSchema,

@@ -28,4 +28,26 @@ describe('the kind registry', () => {
       expect(JSON.stringify(schema)).toContain('"minimum"');
     }
   });
+
+  it('gives every choice in every kind a title for each of its values', () => {
+    const choices: { path: string; schema: Record<string, unknown> }[] = [];
+    const walk = (node: unknown, path: string) => {
+      if (Array.isArray(node)) node.forEach((child, index) => walk(child, `${path}[${index}]`));
+      else if (node && typeof node === 'object') {
+        const schema = node as Record<string, unknown>;
+        if (Array.isArray(schema.enum)) choices.push({ path, schema });
+        for (const [key, child] of Object.entries(schema)) walk(child, `${path}.${key}`);
+      }
+    };
+    for (const kind of KINDS) walk(kind.inputSchema, kind.id);
+    // gasId (three kinds) and the balloon rules' profileId and operation, at least.
+    expect(choices.length).toBeGreaterThanOrEqual(5);
+    for (const { path, schema } of choices) {
+      const titles = (schema.enumTitles ?? {}) as Record<string, unknown>;
+      expect(Object.keys(titles).sort(), path).toEqual(
+        (schema.enum as string[]).map(String).sort(),
+      );
+      for (const title of Object.values(titles)) expect(title, path).toMatch(/^[A-Z]/);
+    }
+  });
 });

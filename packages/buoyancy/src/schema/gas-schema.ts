@@ -1,12 +1,13 @@
 import * as z from 'zod';
 import { GAS_IDS } from '../gas/gas-catalogue.js';
 import { MIN_PURITY } from '../gas/lifting-gas-density.js';
+import { gasChoice } from './choice-schema.js';
 import { fraction, quantity } from './quantity-schema.js';
 
 /** The gas in the envelope, relative to the air around it. */
 export const gasSchema = z
   .object({
-    gasId: z.enum(GAS_IDS).meta({ description: 'lifting gas' }),
+    gasId: gasChoice(GAS_IDS, 'lifting gas'),
     purity: fraction(
       'mole fraction of the named gas in the dry gas; the rest is air',
       MIN_PURITY,

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
+import type { NumberFormat } from '@/lib/guess-number-format';
 import { setToken, useToken } from '@/lib/session';
 
 export type Role = 'admin' | 'designer' | 'reviewer' | 'teacher' | 'student';
@@ -11,7 +12,14 @@ export interface CurrentUser {
   displayName: string;
   roles: Role[];
   unitSystem: 'si' | 'us';
+  /** How the person writes numbers: 1,234.5 (point-comma), 1 234,5 (comma-space), 1.234,5. */
+  numberFormat: NumberFormat;
+  /** ISO 4217 code, upper case: the default currency of new gas plans and prices. */
+  currency: string;
 }
+
+/** The preferences PATCH /api/auth/me/preferences changes; send any of them. */
+export type Preferences = Pick<CurrentUser, 'unitSystem' | 'numberFormat' | 'currency'>;
 
 interface SignedIn {
   accessToken: string;
@@ -52,6 +60,8 @@ export function useRegister() {
       displayName: string;
       /** A class join code: the account becomes a student account in that class. */
       joinCode?: string;
+      /** As guessed from the browser's locale (guessNumberFormat). */
+      numberFormat?: NumberFormat;
     }) => (await apiClient.post<SignedIn>('/auth/register', body)).data,
     onSuccess: (data) => {
       setToken(data.accessToken);
@@ -85,11 +95,11 @@ export const useConfirmReset = () =>
       apiClient.post('/auth/password-reset/confirm', body),
   });
 
-export function useSetUnitSystem() {
+export function useSetPreferences() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (unitSystem: 'si' | 'us') =>
-      (await apiClient.patch<CurrentUser>('/auth/me/preferences', { unitSystem })).data,
+    mutationFn: async (changes: Partial<Preferences>) =>
+      (await apiClient.patch<CurrentUser>('/auth/me/preferences', changes)).data,
     onSuccess: (user) => queryClient.setQueryData(['auth', 'me'], user),
   });
 }

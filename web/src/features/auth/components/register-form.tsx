@@ -1,5 +1,6 @@
 import { Button, Form, Input } from 'antd';
 import { FormError } from '@/components/errors/form-error';
+import { guessNumberFormat } from '@/lib/guess-number-format';
 import { useRegister } from '../api/auth-api';
 
 export function RegisterForm({
@@ -17,7 +18,8 @@ export function RegisterForm({
       requiredMark={false}
       onFinish={(values: { email: string; password: string; displayName: string }) =>
         register.mutate(
-          { ...values, ...(joinCode ? { joinCode } : {}) },
+          // How numbers are written is guessed from the browser; the user menu changes it later.
+          { ...values, numberFormat: guessNumberFormat(), ...(joinCode ? { joinCode } : {}) },
           { onSuccess: onRegistered },
         )
       }

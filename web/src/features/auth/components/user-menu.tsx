@@ -1,10 +1,17 @@
 import { Button, Segmented, Space, Typography } from 'antd';
-import { useMe, useSetUnitSystem, useSignOut } from '../api/auth-api';
+import { lazy, Suspense } from 'react';
+import { useMe, useSetPreferences, useSignOut } from '../api/auth-api';
 
-/** Who is signed in, their unit system (kept on the account) and sign-out. */
+// The menu sits in the layout every page loads; antd's Select would add about 24 kB gzip to the
+// first page, over its budget (web/scripts/route-js-size.mjs), so it comes a moment later.
+const PreferenceSelects = lazy(() =>
+  import('./preference-selects').then((module) => ({ default: module.PreferenceSelects })),
+);
+
+/** Who is signed in, their preferences (kept on the account) and sign-out. */
 export function UserMenu({ onSignedOut }: { onSignedOut: () => void }) {
   const { user } = useMe();
-  const setUnitSystem = useSetUnitSystem();
+  const setPreferences = useSetPreferences();
   const signOut = useSignOut();
   if (!user) return null;
   return (
@@ -19,8 +26,11 @@ export function UserMenu({ onSignedOut }: { onSignedOut: () => void }) {
           { label: 'SI', value: 'si' },
           { label: 'US', value: 'us' },
         ]}
-        onChange={(value) => setUnitSystem.mutate(value as 'si' | 'us')}
+        onChange={(value) => setPreferences.mutate({ unitSystem: value as 'si' | 'us' })}
       />
+      <Suspense fallback={null}>
+        <PreferenceSelects user={user} />
+      </Suspense>
       <Button size="small" onClick={() => signOut.mutate(undefined, { onSettled: onSignedOut })}>
         Sign out
       </Button>

@@ -2,6 +2,7 @@ import { Form, Input, InputNumber, Select, Typography } from 'antd';
 import type { UnitSystem } from '@loftwright/buoyancy';
 import { dimensionForField } from '@/components/quantity/dimension-for-field';
 import { QuantityInput } from '@/components/quantity/quantity-input';
+import { ArrayRowsField } from './array-rows-field';
 
 type Schema = Record<string, unknown>;
 type Value = Record<string, unknown>;
@@ -174,26 +175,61 @@ export function SchemaField({
     );
   }
   if (Array.isArray(schema.enum)) {
+    const titles = asSchema(schema.enumTitles);
     return (
       <Form.Item {...common}>
         <Select
           id={fieldId}
           value={value as string}
           disabled={disabled}
-          options={schema.enum.map((option) => ({
-            value: option,
-            label: humanise(String(option).replace(/-/g, ' ')),
-          }))}
+          options={schema.enum.map((option) => {
+            const title = titles[String(option)];
+            return {
+              value: option,
+              label:
+                typeof title === 'string' ? title : humanise(String(option).replace(/-/g, ' ')),
+            };
+          })}
           onChange={onChange}
         />
       </Form.Item>
     );
   }
   if (schema.type === 'array') {
+    const items = asSchema(schema.items);
+    const itemVariants = (items.oneOf ?? items.anyOf) as Schema[] | undefined;
     return (
-      <Form.Item {...common} extra="A list, written as JSON">
-        <ArrayAsJson id={fieldId} value={value} onChange={onChange} disabled={disabled} />
-      </Form.Item>
+      <ArrayRowsField
+        id={fieldId}
+        path={path}
+        label={label}
+        itemLabel={typeof schema.itemLabel === 'string' ? schema.itemLabel : 'item'}
+        value={value}
+        onChange={onChange}
+        newItem={() =>
+          Array.isArray(itemVariants)
+            ? defaultsOf(asSchema(itemVariants[0]))
+            : items.type === 'object'
+              ? defaultsOf(items)
+              : items.default
+        }
+        renderItem={(item, index, onItemChange) => (
+          <SchemaField
+            name=""
+            path={`${path}.${index}`}
+            schema={items}
+            value={item}
+            onChange={onItemChange}
+            unitSystem={unitSystem}
+            errors={errors}
+            disabled={disabled}
+          />
+        )}
+        minItems={typeof schema.minItems === 'number' ? schema.minItems : undefined}
+        maxItems={typeof schema.maxItems === 'number' ? schema.maxItems : undefined}
+        errors={errors}
+        disabled={disabled}
+      />
     );
   }
   return (
@@ -239,34 +275,5 @@ function ObjectFields({
         );
       })}
     </>
-  );
-}
-
-function ArrayAsJson({
-  id,
-  value,
-  onChange,
-  disabled,
-}: {
-  id: string;
-  value: unknown;
-  onChange: (value: unknown) => void;
-  disabled?: boolean;
-}) {
-  return (
-    <Input.TextArea
-      id={id}
-      className="lw-mono"
-      autoSize={{ minRows: 2, maxRows: 8 }}
-      defaultValue={JSON.stringify(value ?? [], null, 1)}
-      disabled={disabled}
-      onChange={(event) => {
-        try {
-          onChange(JSON.parse(event.target.value));
-        } catch {
-          // Keep the last list that read as JSON until this one does.
-        }
-      }}
-    />
   );
 }
