@@ -59,8 +59,27 @@ export type { EnvelopeGeometry, EnvelopeShape } from './envelope/envelope-geomet
 export { liftMasses } from './steps/lift-steps.js';
 export type { LiftMasses } from './steps/lift-steps.js';
 export { findRoot } from './numerics/find-root.js';
-export { convertFromSI, formatQuantity, parseQuantity } from './units/quantity-text.js';
-export type { FormattedQuantity } from './units/quantity-text.js';
+export { convertFromSI, formatQuantity, parseCount, parseQuantity } from './units/quantity-text.js';
+export type { FormattedQuantity, QuantityReadOptions } from './units/quantity-text.js';
+export {
+  formatNumber,
+  isNumberFormat,
+  NUMBER_FORMAT_IDS,
+  NUMBER_FORMATS,
+} from './units/number-format.js';
+export type { NumberDisplayOptions, NumberFormat } from './units/number-format.js';
+export { readLeadingNumber, readNumber } from './units/number-text.js';
+export type { NumberReading } from './units/number-text.js';
+export { parseMoney } from './units/money-text.js';
+export type { MoneyReadOptions } from './units/money-text.js';
+export {
+  fieldLabel,
+  formatRange,
+  humaniseKey,
+  inputFieldInfo,
+  readableIssue,
+} from './schema/field-info.js';
+export type { InputFieldInfo, ReadableOptions } from './schema/field-info.js';
 export { DIMENSIONS, DISPLAY_UNITS } from './units/dimensions.js';
 export type { Dimension, UnitSystem } from './units/dimensions.js';
 export { envelopeSizingKind } from './kinds/envelope-sizing.kind.js';

@@ -8,8 +8,8 @@ import { defineKind } from './kind.js';
 
 const packageSchema = z
   .object({
-    massKg: quantity('kg', 0, 1000, 'mass of the package'),
-    smallestSurfaceAreaM2: quantity('m²', 1e-6, 100, 'area of its smallest surface').optional(),
+    massKg: quantity('mass', 0, 1000, 'mass of the package'),
+    smallestSurfaceAreaM2: quantity('area', 1e-6, 100, 'area of its smallest surface').optional(),
   })
   .strict();
 
@@ -28,13 +28,13 @@ export const balloonRulesSchema = z
       .default([])
       .meta({ description: 'payload packages', itemLabel: 'package' }),
     suspensionSeparationForceN: quantity(
-      'N',
+      'force',
       0,
       1e5,
       'impact force needed to separate the payload',
     ).optional(),
-    mooredDiameterM: quantity('m', 0, 1000, 'largest diameter of a moored balloon').optional(),
-    mooredGasVolumeM3: quantity('m³', 0, 1e7, 'gas capacity of a moored balloon').optional(),
+    mooredDiameterM: quantity('length', 0, 1000, 'largest diameter of a moored balloon').optional(),
+    mooredGasVolumeM3: quantity('volume', 0, 1e7, 'gas capacity of a moored balloon').optional(),
   })
   .strict();
 

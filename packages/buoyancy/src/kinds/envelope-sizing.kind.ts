@@ -35,7 +35,7 @@ const shapeFamilySchema = z
       .object({
         shape: z.literal('spheroid'),
         polarToEquatorialRatio: quantity(
-          '',
+          'coefficient',
           0.2,
           5,
           'polar diameter over equatorial diameter (below 1: oblate)',
@@ -45,7 +45,7 @@ const shapeFamilySchema = z
     z
       .object({
         shape: z.literal('capsule'),
-        lengthToDiameterRatio: quantity('', 1, 20, 'overall length over diameter'),
+        lengthToDiameterRatio: quantity('coefficient', 1, 20, 'overall length over diameter'),
       })
       .strict(),
     z.object({ shape: z.literal('cushion') }).strict(),
@@ -57,16 +57,19 @@ const targetSchema = z
     z
       .object({
         kind: z.literal('freeLift'),
-        freeLiftKg: quantity('kg', 0, 10000, 'free lift wanted'),
+        freeLiftKg: quantity('mass', 0, 10000, 'free lift wanted'),
       })
       .strict(),
     z
       .object({
         kind: z.literal('ascentRate'),
-        ascentRateMS: quantity('m/s', 0.1, 20, 'initial rate of climb wanted'),
-        dragCoefficient: quantity('', 0.05, 2, 'drag coefficient on the frontal area').default(
-          DEFAULT_BALLOON_DRAG_COEFFICIENT,
-        ),
+        ascentRateMS: quantity('velocity', 0.1, 20, 'initial rate of climb wanted'),
+        dragCoefficient: quantity(
+          'coefficient',
+          0.05,
+          2,
+          'drag coefficient on the frontal area',
+        ).default(DEFAULT_BALLOON_DRAG_COEFFICIENT),
       })
       .strict(),
   ])
@@ -76,7 +79,7 @@ export const envelopeSizingSchema = z
   .object({
     shape: shapeFamilySchema,
     envelopeMass: envelopeMassSchema,
-    payloadMassKg: quantity('kg', 0, 10000, 'payload hanging below the envelope'),
+    payloadMassKg: quantity('mass', 0, 10000, 'payload hanging below the envelope'),
     target: targetSchema,
     gas: gasSchema,
     ambient: ambientSchema,

@@ -39,9 +39,9 @@ export const flightProfileSchema = z
       z
         .object({
           kind: z.literal('extensible'),
-          launchDiameterM: quantity('m', 0.1, 20, 'diameter when filled, at launch'),
+          launchDiameterM: quantity('length', 0.1, 20, 'diameter when filled, at launch'),
           burstDiameterM: quantity(
-            'm',
+            'length',
             0.2,
             50,
             'diameter at which the envelope bursts (from its maker)',
@@ -50,8 +50,8 @@ export const flightProfileSchema = z
         .strict(),
       z.object({ kind: z.literal('fixed'), shape: envelopeSchema }).strict(),
     ]),
-    envelopeMassKg: quantity('kg', 0, 1000, 'envelope mass'),
-    payloadMassKg: quantity('kg', 0, 1000, 'payload, parachute and line'),
+    envelopeMassKg: quantity('mass', 0, 1000, 'envelope mass'),
+    payloadMassKg: quantity('mass', 0, 1000, 'payload, parachute and line'),
     gas: z
       .object({
         gasId: gasChoice(
@@ -65,9 +65,9 @@ export const flightProfileSchema = z
       .strict(),
     launch: z
       .object({
-        altitudeM: quantity('m', -500, 6000, 'launch site altitude above mean sea level'),
+        altitudeM: quantity('length', -500, 6000, 'launch site altitude above mean sea level'),
         temperatureOffsetK: quantity(
-          'K',
+          'temperatureDifference',
           TEMPERATURE_OFFSET_RANGE_K.min,
           TEMPERATURE_OFFSET_RANGE_K.max,
           'day warmer (+) or colder (−) than the 1976 standard',
@@ -75,22 +75,25 @@ export const flightProfileSchema = z
       })
       .strict(),
     dragCoefficient: quantity(
-      '',
+      'coefficient',
       0.05,
       2,
       'drag coefficient of the envelope on its frontal area',
     ).default(DEFAULT_BALLOON_DRAG_COEFFICIENT),
     parachute: z
       .object({
-        areaM2: quantity('m²', 0.01, 200, 'canopy area'),
-        dragCoefficient: quantity('', 0.2, 3, 'drag coefficient on the canopy area').default(
-          DEFAULT_PARACHUTE_DRAG_COEFFICIENT,
-        ),
+        areaM2: quantity('area', 0.01, 200, 'canopy area'),
+        dragCoefficient: quantity(
+          'coefficient',
+          0.2,
+          3,
+          'drag coefficient on the canopy area',
+        ).default(DEFAULT_PARACHUTE_DRAG_COEFFICIENT),
       })
       .strict()
       .optional(),
-    timeStepS: quantity('s', 0.05, 30, 'integration time step').default(1),
-    maxTimeS: quantity('s', 60, 172800, 'longest flight time computed').default(43200),
+    timeStepS: quantity('time', 0.05, 30, 'integration time step').default(1),
+    maxTimeS: quantity('time', 60, 172800, 'longest flight time computed').default(43200),
   })
   .strict();
 

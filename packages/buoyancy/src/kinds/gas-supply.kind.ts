@@ -8,7 +8,7 @@ import {
 import { Derivation, v } from '../derivation.js';
 import { GAS_CATALOGUE, GAS_IDS } from '../gas/gas-catalogue.js';
 import { gasChoice } from '../schema/choice-schema.js';
-import { fraction, quantity } from '../schema/quantity-schema.js';
+import { count, fraction, money, quantity } from '../schema/quantity-schema.js';
 import { SOURCES } from '../sources.js';
 import {
   cylinderDeliverableMol,
@@ -22,25 +22,20 @@ const J_PER_WH = 3600;
 
 const electrolyserSchema = z
   .object({
-    currentA: quantity('A', 0.01, 100000, 'current through the cells'),
-    cellsInSeries: z
-      .number()
-      .int({ error: 'must be a whole number' })
-      .min(1)
-      .max(1000)
-      .meta({ description: 'cells in series' }),
+    currentA: quantity('current', 0.01, 100000, 'current through the cells'),
+    cellsInSeries: count('cells in series', 1, 1000),
     faradaicEfficiency: fraction('share of the charge that makes hydrogen', 0.5, 1).default(1),
     voltage: z.discriminatedUnion('kind', [
       z
         .object({
           kind: z.literal('cell'),
-          cellVoltageV: quantity('V', 1, 5, 'voltage across one cell'),
+          cellVoltageV: quantity('voltage', 1, 5, 'voltage across one cell'),
         })
         .strict(),
       z
         .object({
           kind: z.literal('stack'),
-          stackVoltageV: quantity('V', 1, 5000, 'voltage across the whole stack'),
+          stackVoltageV: quantity('voltage', 1, 5000, 'voltage across the whole stack'),
         })
         .strict(),
     ]),
@@ -51,12 +46,15 @@ const electrolyserSchema = z
 const cylinderSchema = z
   .object({
     gasId: gasChoice(GAS_IDS, 'gas in the cylinders'),
-    waterVolumeM3: quantity('m³', 0.0001, 10, 'internal (water) volume of one cylinder'),
-    fillPressurePa: quantity('Pa', 1e5, 1e8, 'gauge pressure of a full cylinder'),
-    residualPressurePa: quantity('Pa', 0, 1e7, 'gauge pressure left when it is returned').default(
+    waterVolumeM3: quantity('volume', 0.0001, 10, 'internal (water) volume of one cylinder'),
+    fillPressurePa: quantity('pressureDifference', 1e5, 1e8, 'gauge pressure of a full cylinder'),
+    residualPressurePa: quantity(
+      'pressureDifference',
       0,
-    ),
-    temperatureK: quantity('K', 233.15, 333.15, 'cylinder temperature'),
+      1e7,
+      'gauge pressure left when it is returned',
+    ).default(0),
+    temperatureK: quantity('temperature', 233.15, 333.15, 'cylinder temperature'),
   })
   .strict();
 
@@ -64,32 +62,30 @@ export const gasSupplySchema = z
   .object({
     fill: z
       .object({
-        volumeM3: quantity('m³', 1e-6, 1e7, 'gas needed for one fill, at fill conditions'),
-        temperatureK: quantity('K', 173.15, 423.15, 'gas temperature at filling'),
-        pressurePa: quantity('Pa', 1000, 1.2e6, 'absolute gas pressure at filling'),
-        count: z.number().int({ error: 'must be a whole number' }).min(1).max(100000).default(1),
+        volumeM3: quantity('volume', 1e-6, 1e7, 'gas needed for one fill, at fill conditions'),
+        temperatureK: quantity('temperature', 173.15, 423.15, 'gas temperature at filling'),
+        pressurePa: quantity('pressure', 1000, 1.2e6, 'absolute gas pressure at filling'),
+        count: count('number of fills', 1, 100000).default(1),
       })
       .strict(),
     electrolyser: electrolyserSchema.optional(),
     measured: z
       .object({
-        energyJ: quantity('J', 1, 1e13, 'energy used, as metered'),
-        volumeM3: quantity('m³', 1e-6, 1e7, 'gas volume produced, as measured'),
+        energyJ: quantity('energy', 1, 1e13, 'energy used, as metered'),
+        volumeM3: quantity('volume', 1e-6, 1e7, 'gas volume produced, as measured'),
       })
       .strict()
       .optional(),
     cylinder: cylinderSchema.optional(),
     prices: z
       .object({
-        currency: z.string().min(1).max(8),
-        electricityPerKWh: quantity('currency/kWh', 0, 100, 'electricity price').optional(),
-        cylinderEach: quantity('currency', 0, 1e6, 'price of one full cylinder').optional(),
-        bulkGasPerM3: quantity(
-          'currency/m³',
-          0,
-          1e5,
-          'delivered gas price per normal cubic metre',
-        ).optional(),
+        currency: z
+          .string()
+          .regex(/^[A-Z]{3}$/, { error: 'must be a three-letter currency code such as EUR' })
+          .meta({ description: 'currency of the prices' }),
+        electricityPerKWh: money('electricity price', 100, 'kWh').optional(),
+        cylinderEach: money('price of one full cylinder', 1e6).optional(),
+        bulkGasPerM3: money('delivered gas price per normal cubic metre', 1e5, 'm³').optional(),
       })
       .strict()
       .optional(),

@@ -15,7 +15,7 @@ export const liftCheckSchema = z
   .object({
     envelope: envelopeSchema,
     envelopeMass: envelopeMassSchema,
-    payloadMassKg: quantity('kg', 0, 10000, 'payload hanging below the envelope'),
+    payloadMassKg: quantity('mass', 0, 10000, 'payload hanging below the envelope'),
     gas: gasSchema,
     ambient: ambientSchema,
   })

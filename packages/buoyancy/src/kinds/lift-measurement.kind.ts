@@ -15,16 +15,16 @@ const readingSchema = z.discriminatedUnion('kind', [
   z
     .object({
       kind: z.literal('ballast'),
-      timeS: quantity('s', 0, 3.2e7, 'time since filling').default(0),
-      ballastMassKg: quantity('kg', 0, 10000, 'known mass the envelope is tied to'),
-      scaleReadingKg: quantity('kg', -10000, 10000, 'what the scale under the ballast shows'),
+      timeS: quantity('time', 0, 3.2e7, 'time since filling').default(0),
+      ballastMassKg: quantity('mass', 0, 10000, 'known mass the envelope is tied to'),
+      scaleReadingKg: quantity('mass', -10000, 10000, 'what the scale under the ballast shows'),
     })
     .strict(),
   z
     .object({
       kind: z.literal('direct'),
-      timeS: quantity('s', 0, 3.2e7, 'time since filling').default(0),
-      netLiftKg: quantity('kg', -10000, 10000, 'net lift read directly (spring or load cell)'),
+      timeS: quantity('time', 0, 3.2e7, 'time since filling').default(0),
+      netLiftKg: quantity('mass', -10000, 10000, 'net lift read directly (spring or load cell)'),
     })
     .strict(),
 ]);

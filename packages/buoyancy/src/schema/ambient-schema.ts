@@ -12,13 +12,18 @@ export const humiditySchema = z
     z
       .object({
         kind: z.literal('relative'),
-        relativeHumidity: fraction('relative humidity over liquid water, 0 to 1'),
+        relativeHumidity: fraction('relative humidity over liquid water'),
       })
       .strict(),
     z
       .object({
         kind: z.literal('dewPoint'),
-        dewPointK: quantity('K', 233.15, AIR_TEMPERATURE_RANGE_K.max, 'dew-point temperature'),
+        dewPointK: quantity(
+          'temperature',
+          233.15,
+          AIR_TEMPERATURE_RANGE_K.max,
+          'dew-point temperature',
+        ),
       })
       .strict(),
   ])
@@ -32,13 +37,13 @@ export const ambientSchema = z
       .object({
         mode: z.literal('standard'),
         altitudeM: quantity(
-          'm',
+          'length',
           STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M.min,
           STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M.max,
           'geometric altitude above mean sea level',
         ),
         temperatureOffsetK: quantity(
-          'K',
+          'temperatureDifference',
           TEMPERATURE_OFFSET_RANGE_K.min,
           TEMPERATURE_OFFSET_RANGE_K.max,
           'difference from the standard temperature (ISA + ΔT)',
@@ -50,13 +55,13 @@ export const ambientSchema = z
       .object({
         mode: z.literal('measured'),
         temperatureK: quantity(
-          'K',
+          'temperature',
           AIR_TEMPERATURE_RANGE_K.min,
           AIR_TEMPERATURE_RANGE_K.max,
           'air temperature',
         ),
         pressurePa: quantity(
-          'Pa',
+          'pressure',
           AIR_PRESSURE_RANGE_PA.min,
           AIR_PRESSURE_RANGE_PA.max,
           'absolute air pressure',

@@ -3,7 +3,7 @@ import { ENVELOPE_SIZE_RANGE_M } from '../envelope/envelope-geometry.js';
 import { quantity } from './quantity-schema.js';
 
 const size = (description: string) =>
-  quantity('m', ENVELOPE_SIZE_RANGE_M.min, ENVELOPE_SIZE_RANGE_M.max, description);
+  quantity('length', ENVELOPE_SIZE_RANGE_M.min, ENVELOPE_SIZE_RANGE_M.max, description);
 
 /** An envelope's shape and the measurement it is given by. */
 export const envelopeSchema = z
@@ -13,7 +13,7 @@ export const envelopeSchema = z
     z
       .object({
         shape: z.literal('sphere-circumference'),
-        circumferenceM: quantity('m', 0.03, 1600, 'measured circumference at the equator'),
+        circumferenceM: quantity('length', 0.03, 1600, 'measured circumference at the equator'),
       })
       .strict(),
     z
@@ -27,7 +27,12 @@ export const envelopeSchema = z
       .object({
         shape: z.literal('capsule'),
         diameterM: size('diameter of the cylinder and its hemispherical ends'),
-        lengthM: quantity('m', ENVELOPE_SIZE_RANGE_M.min, 2000, 'overall length, ends included'),
+        lengthM: quantity(
+          'length',
+          ENVELOPE_SIZE_RANGE_M.min,
+          2000,
+          'overall length, ends included',
+        ),
       })
       .strict(),
     z
@@ -36,15 +41,15 @@ export const envelopeSchema = z
     z
       .object({
         shape: z.literal('custom'),
-        volumeM3: quantity('m³', 1e-6, 1e7, 'envelope volume'),
+        volumeM3: quantity('volume', 1e-6, 1e7, 'envelope volume'),
         surfaceAreaM2: quantity(
-          'm²',
+          'area',
           1e-6,
           1e7,
           'envelope surface (default: that of a sphere)',
         ).optional(),
         frontalAreaM2: quantity(
-          'm²',
+          'area',
           1e-6,
           1e6,
           'area facing the flow (default: that of a sphere)',
@@ -60,14 +65,19 @@ export type EnvelopeInput = z.output<typeof envelopeSchema>;
 export const envelopeMassSchema = z
   .discriminatedUnion('kind', [
     z
-      .object({ kind: z.literal('fixed'), massKg: quantity('kg', 0, 10000, 'envelope mass') })
+      .object({ kind: z.literal('fixed'), massKg: quantity('mass', 0, 10000, 'envelope mass') })
       .strict(),
     z
       .object({
         kind: z.literal('areal'),
-        arealDensityKgM2: quantity('kg/m²', 0, 5, 'mass per square metre of envelope material'),
+        arealDensityKgM2: quantity(
+          'arealDensity',
+          0,
+          5,
+          'mass per square metre of envelope material',
+        ),
         fittingsKg: quantity(
-          'kg',
+          'mass',
           0,
           1000,
           'seams, valves and fittings on top of the film',

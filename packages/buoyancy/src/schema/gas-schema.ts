@@ -13,10 +13,20 @@ export const gasSchema = z
       MIN_PURITY,
       1,
     ).default(1),
-    superheatK: quantity('K', -30, 200, 'gas temperature above the air temperature').default(0),
-    superpressurePa: quantity('Pa', 0, 1e6, 'gas pressure above the air pressure').default(0),
+    superheatK: quantity(
+      'temperatureDifference',
+      -30,
+      200,
+      'gas temperature above the air temperature',
+    ).default(0),
+    superpressurePa: quantity(
+      'pressureDifference',
+      0,
+      1e6,
+      'gas pressure above the air pressure',
+    ).default(0),
     relativeHumidity: fraction(
-      'water vapour in the gas at its own temperature: 0 dried, 1 saturated',
+      'water vapour in the gas at its own temperature (0 % dried, 100 % saturated)',
     ).default(0),
   })
   .strict()

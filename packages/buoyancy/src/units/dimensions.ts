@@ -17,7 +17,10 @@ export const DIMENSIONS = {
   energy: { si: 'J', mathjs: 'J' },
   power: { si: 'W', mathjs: 'W' },
   force: { si: 'N', mathjs: 'N' },
+  /** A share of a whole (purity, humidity, efficiency), shown and typed as a percentage. */
   fraction: { si: '', mathjs: '' },
+  /** A plain ratio or coefficient (drag coefficient, length over diameter), never a percentage. */
+  coefficient: { si: '', mathjs: '' },
 } as const;
 
 export type Dimension = keyof typeof DIMENSIONS;
@@ -67,4 +70,5 @@ export const DISPLAY_UNITS: Record<
   },
   force: { si: [{ unit: 'N' }], us: [{ unit: 'lbf' }] },
   fraction: { si: [{ unit: '%' }], us: [{ unit: '%' }] },
+  coefficient: { si: [{ unit: '' }], us: [{ unit: '' }] },
 };

@@ -22,7 +22,8 @@ describe('parseQuantity', () => {
     ['27 degF', 'temperatureDifference', 15],
     ['15 K', 'temperatureDifference', 15],
     ['98 %', 'fraction', 0.98],
-    ['0.98', 'fraction', 0.98],
+    // A bare number in a share is a percentage, as the field shows it.
+    ['0.98', 'fraction', 0.0098],
   ] as const)('reads "%s" as a %s of %s (SI)', (text, dimension, expected) => {
     expect(Math.abs(parseQuantity(text, dimension) / expected - 1)).toBeLessThan(1e-9);
   });
@@ -30,6 +31,7 @@ describe('parseQuantity', () => {
   it('reads a bare number in the field’s default unit', () => {
     expect(parseQuantity('163', 'length', { defaultUnit: 'cm' })).toBeCloseTo(1.63, 12);
     expect(parseQuantity('1,5', 'length')).toBe(1.5);
+    expect(parseQuantity('1,5', 'length', { numberFormat: 'comma-space' })).toBe(1.5);
   });
 
   it('refuses text of the wrong dimension or no number, naming the field', () => {

@@ -1,6 +1,8 @@
 import { create, createUnitDependencies, unitDependencies } from 'mathjs';
 import { InputError } from '../errors.js';
 import { DIMENSIONS, DISPLAY_UNITS, type Dimension, type UnitSystem } from './dimensions.js';
+import { formatNumber, type NumberFormat } from './number-format.js';
+import { readLeadingNumber, readNumber } from './number-text.js';
 
 if (!unitDependencies || !createUnitDependencies)
   throw new Error('mathjs lacks its unit factories');
@@ -17,7 +19,6 @@ const TEMPERATURE_STEP_K: Record<string, number> = {
   degF: 5 / 9,
   fahrenheit: 5 / 9,
   degR: 5 / 9,
-  R: 5 / 9,
 };
 
 const SYMBOLS: Record<string, string> = {
@@ -34,49 +35,103 @@ const SYMBOLS: Record<string, string> = {
   'oz/yd^2': 'oz/yd²',
 };
 
-/** Turns typed symbols people use into mathjs names: "°C" -> "degC", "m³" -> "m^3". */
-function normaliseText(text: string): string {
+/** Unit symbols people type, as mathjs names them: "°C" -> "degC", "m³" -> "m^3", "µm" -> "um". */
+function normaliseUnit(text: string): string {
   return text
-    .trim()
-    .replace(/,/g, '.')
-    .replace(/°\s*C\b/g, 'degC')
-    .replace(/°\s*F\b/g, 'degF')
+    .replace(/℃/g, 'degC')
+    .replace(/℉/g, 'degF')
+    .replace(/°\s*([CFR])\b/g, 'deg$1')
     .replace(/²/g, '^2')
     .replace(/³/g, '^3')
+    .replace(/[µμ]/g, 'u')
+    .replace(/\s*\/\s*/g, '/')
     .replace(/\s+/g, ' ');
 }
 
+export interface QuantityReadOptions {
+  /**
+   * Unit a bare number is read in (a mathjs name, or "%"): the unit the field shows. Without it
+   * a bare number is SI, except a fraction, which is a percentage.
+   */
+  readonly defaultUnit?: string;
+  /** Field path or label the error names. */
+  readonly field?: string;
+  /** How the person writes numbers (default 1,234.5). */
+  readonly numberFormat?: NumberFormat;
+}
+
 /**
- * Reads a quantity typed by a user ("163 cm", "5 lb", "68 degF", "1013 hPa", "95 %") and returns
- * its value in the engine's SI unit for that dimension. A bare number is read in `defaultUnit`
- * (a mathjs unit name), or in SI if none is given.
- * @throws InputError (field `field`) for text that is not a number with a unit of that dimension
+ * Reads a quantity typed by a person ("163 cm", "5 lb", "68 °F", "1013 hPa", "98 %", "1,58 m")
+ * under the one reading rule of `readLeadingNumber`, and returns its value in the engine's SI unit
+ * for that dimension.
+ * @throws InputError (field `field`) for text that is not a number with a unit of that dimension,
+ *   or a number that reads two ways
  */
 export function parseQuantity(
   text: string,
   dimension: Dimension,
-  options: { defaultUnit?: string; field?: string } = {},
+  options: QuantityReadOptions = {},
 ): number {
   const field = options.field ?? 'value';
-  const normalised = normaliseText(text);
-  if (normalised === '')
-    throw new InputError(field, text, 'is empty: enter a number, with its unit if you like');
-  const bare = Number(normalised);
-  if (dimension === 'fraction') return parseFraction(normalised, text, field);
-  if (normalised !== '' && Number.isFinite(bare)) {
-    return options.defaultUnit
-      ? parseQuantity(`${normalised} ${options.defaultUnit}`, dimension, { field })
-      : bare;
+  const format = options.numberFormat ?? 'point-comma';
+  const reading = readLeadingNumber(text, format);
+  if (!reading.ok) throw new InputError(field, text, reading.reason);
+  const unitText = normaliseUnit(reading.rest);
+  const unit = unitText === '' ? (options.defaultUnit ?? bareUnit(dimension)) : unitText;
+  const valueSI = toSI(reading.value, unit, dimension, text, field);
+  if (!Number.isFinite(valueSI)) throw new InputError(field, text, 'is too large a number');
+  return valueSI;
+}
+
+/**
+ * Reads a whole number of things (fills, cells, cylinders) a person typed, under the same rule.
+ * @throws InputError (field `field`) for anything but a whole number
+ */
+export function parseCount(
+  text: string,
+  options: { field?: string; numberFormat?: NumberFormat } = {},
+): number {
+  const field = options.field ?? 'count';
+  const reading = readNumber(text, options.numberFormat ?? 'point-comma');
+  if (!reading.ok) throw new InputError(field, text, reading.reason);
+  if (!Number.isInteger(reading.value)) throw new InputError(field, text, 'is not a whole number');
+  return reading.value;
+}
+
+/** The unit a bare number means when the field names none. */
+function bareUnit(dimension: Dimension): string {
+  return dimension === 'fraction' ? '%' : DIMENSIONS[dimension].mathjs;
+}
+
+function toSI(value: number, unit: string, dimension: Dimension, text: string, field: string) {
+  if (dimension === 'fraction') {
+    if (unit === '%') return value / 100;
+    if (unit === '') return value;
+    throw new InputError(field, text, 'is a share: type a percentage such as 98 %');
   }
-  if (dimension === 'temperatureDifference') return parseTemperatureStep(normalised, text, field);
+  if (dimension === 'coefficient') {
+    if (unit === '') return value;
+    throw new InputError(field, text, 'is a plain number without a unit, such as 0.35');
+  }
+  if (unit === '') return value;
+  if (dimension === 'temperatureDifference') {
+    const step = TEMPERATURE_STEP_K[unit];
+    if (step === undefined)
+      throw new InputError(
+        field,
+        text,
+        'is not a temperature difference (for example "15 K" or "27 °F")',
+      );
+    return value * step;
+  }
   let parsed;
   try {
-    parsed = math.unit(normalised);
+    parsed = math.unit(value, unit);
   } catch {
     throw new InputError(
       field,
       text,
-      `is not a number with a unit (for example "${example(dimension)}")`,
+      `has “${unit}” where a unit should be (for example "${example(dimension)}")`,
     );
   }
   const target = DIMENSIONS[dimension].mathjs;
@@ -87,31 +142,7 @@ export function parseQuantity(
       `is not a ${describe(dimension)} (for example "${example(dimension)}")`,
     );
   }
-  if (parsed.value === null) throw new InputError(field, text, 'has a unit but no number');
-  const value = parsed.toNumber(target);
-  if (!Number.isFinite(value)) throw new InputError(field, text, 'is not a finite number');
-  return value;
-}
-
-function parseFraction(normalised: string, text: string, field: string): number {
-  const percent = /^(-?[\d.]+(?:e-?\d+)?)\s*%$/i.exec(normalised);
-  const value = percent ? Number(percent[1]) / 100 : Number(normalised);
-  if (!Number.isFinite(value))
-    throw new InputError(field, text, 'is not a fraction (for example "0.98" or "98 %")');
-  return value;
-}
-
-function parseTemperatureStep(normalised: string, text: string, field: string): number {
-  const match = /^(-?[\d.]+(?:e-?\d+)?)\s*([A-Za-z]+)$/.exec(normalised);
-  const step = match ? TEMPERATURE_STEP_K[match[2] ?? ''] : undefined;
-  if (!match || step === undefined) {
-    throw new InputError(
-      field,
-      text,
-      'is not a temperature difference (for example "15 K" or "27 degF")',
-    );
-  }
-  return Number(match[1]) * step;
+  return parsed.toNumber(target);
 }
 
 function describe(dimension: Dimension): string {
@@ -120,7 +151,7 @@ function describe(dimension: Dimension): string {
 
 function example(dimension: Dimension): string {
   const unit = DISPLAY_UNITS[dimension].si.at(-1)?.unit ?? DIMENSIONS[dimension].mathjs;
-  return `1.5 ${unit}`;
+  return `1.5 ${SYMBOLS[unit] ?? unit}`;
 }
 
 export interface FormattedQuantity {
@@ -140,13 +171,25 @@ export function formatQuantity(
   valueSI: number,
   dimension: Dimension,
   unitSystem: UnitSystem,
-  options: { unit?: string; significantDigits?: number } = {},
+  options: {
+    unit?: string;
+    significantDigits?: number;
+    numberFormat?: NumberFormat;
+    /** Group thousands (default true); off for text a person will edit. */
+    grouping?: boolean;
+    /** Drop zeros that add nothing: "1.630 m" -> "1.63 m" (default false). */
+    trimZeros?: boolean;
+  } = {},
 ): FormattedQuantity {
   const digits = options.significantDigits ?? 4;
   const unitName = options.unit ?? pickUnit(valueSI, dimension, unitSystem);
   const value = convertFromSI(valueSI, dimension, unitName);
   const unit = SYMBOLS[unitName] ?? unitName;
-  const number = Number.isFinite(value) ? formatNumber(value, digits) : String(value);
+  const number = formatNumber(value, options.numberFormat ?? 'point-comma', {
+    significantDigits: digits,
+    grouping: options.grouping,
+    trimZeros: options.trimZeros,
+  });
   return {
     value,
     unit,
@@ -166,6 +209,7 @@ function pickUnit(valueSI: number, dimension: Dimension, unitSystem: UnitSystem)
 /** Converts an SI value into `unitName` (mathjs name, or "%"). */
 export function convertFromSI(valueSI: number, dimension: Dimension, unitName: string): number {
   if (dimension === 'fraction') return unitName === '%' ? valueSI * 100 : valueSI;
+  if (dimension === 'coefficient') return valueSI;
   if (dimension === 'temperatureDifference') {
     const step = TEMPERATURE_STEP_K[unitName];
     if (step === undefined)
@@ -173,11 +217,4 @@ export function convertFromSI(valueSI: number, dimension: Dimension, unitName: s
     return valueSI / step;
   }
   return math.unit(valueSI, DIMENSIONS[dimension].mathjs).toNumber(unitName);
-}
-
-function formatNumber(value: number, significantDigits: number): string {
-  if (value === 0) return '0';
-  const magnitude = Math.floor(Math.log10(Math.abs(value)));
-  const decimals = Math.max(0, significantDigits - 1 - magnitude);
-  return value.toFixed(Math.min(decimals, 12));
 }
