@@ -59,8 +59,18 @@ export type { EnvelopeGeometry, EnvelopeShape } from './envelope/envelope-geomet
 export { liftMasses } from './steps/lift-steps.js';
 export type { LiftMasses } from './steps/lift-steps.js';
 export { findRoot } from './numerics/find-root.js';
-export { convertFromSI, formatQuantity, parseCount, parseQuantity } from './units/quantity-text.js';
-export type { FormattedQuantity, QuantityReadOptions } from './units/quantity-text.js';
+export {
+  convertFromSI,
+  formatQuantity,
+  parseCount,
+  parseQuantity,
+  readQuantity,
+} from './units/quantity-text.js';
+export type {
+  FormattedQuantity,
+  QuantityReading,
+  QuantityReadOptions,
+} from './units/quantity-text.js';
 export {
   formatNumber,
   isNumberFormat,
@@ -80,7 +90,7 @@ export {
   readableIssue,
 } from './schema/field-info.js';
 export type { InputFieldInfo, ReadableOptions } from './schema/field-info.js';
-export { DIMENSIONS, DISPLAY_UNITS } from './units/dimensions.js';
+export { DIMENSIONS, dimensionOfSIUnit, DISPLAY_UNITS } from './units/dimensions.js';
 export type { Dimension, UnitSystem } from './units/dimensions.js';
 export { envelopeSizingKind } from './kinds/envelope-sizing.kind.js';
 export type { EnvelopeSizingInput } from './kinds/envelope-sizing.kind.js';

@@ -8,18 +8,26 @@ import {
   TableOutlined,
   TeamOutlined,
 } from '@ant-design/icons';
-import { Suspense } from 'react';
+import { Suspense, useMemo } from 'react';
 import { Link, Outlet, useNavigate } from 'react-router-dom';
 import { NavRail, type NavItem } from '@/components/layout/nav-rail';
 import { PageLoading } from '@/components/layout/page-loading';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/auth-api';
 import { UserMenu } from '@/features/auth/components/user-menu';
+import { ReadingPreferencesContext } from '@/components/reading/reading-preferences';
+import { guessNumberFormat } from '@/lib/guess-number-format';
 
 /** Navigation rail on the left, the working area filling the rest. */
 export function AppLayout() {
   const { signedIn, user } = useMe();
   const navigate = useNavigate();
+  const numberFormat = user?.numberFormat;
+  const currency = user?.currency;
+  const reading = useMemo(
+    () => ({ numberFormat: numberFormat ?? guessNumberFormat(), currency: currency ?? 'EUR' }),
+    [numberFormat, currency],
+  );
   const items: NavItem[] = [
     { href: paths.home.href(), icon: <ExperimentOutlined />, label: 'Workbench' },
     ...(signedIn
@@ -58,9 +66,11 @@ export function AppLayout() {
         {signedIn ? <UserMenu onSignedOut={() => void navigate(paths.signIn.href())} /> : null}
       </Layout.Sider>
       <Layout.Content style={{ padding: 24 }}>
-        <Suspense fallback={<PageLoading />}>
-          <Outlet />
-        </Suspense>
+        <ReadingPreferencesContext.Provider value={reading}>
+          <Suspense fallback={<PageLoading />}>
+            <Outlet />
+          </Suspense>
+        </ReadingPreferencesContext.Provider>
       </Layout.Content>
     </Layout>
   );

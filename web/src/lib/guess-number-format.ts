@@ -1,9 +1,4 @@
-/**
- * How a person writes and reads numbers, named by decimal mark then digit grouping, as the API
- * keeps it on the account (api/src/users/preferences.ts):
- * `point-comma` 1,234.5; `comma-space` 1 234,5; `comma-point` 1.234,5.
- */
-export type NumberFormat = 'point-comma' | 'comma-space' | 'comma-point';
+import type { NumberFormat } from '@loftwright/buoyancy';
 
 /** For a locale whose numbers fit none of the three, or that cannot be read. */
 const FALLBACK: NumberFormat = 'point-comma';

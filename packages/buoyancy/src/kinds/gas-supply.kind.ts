@@ -82,7 +82,7 @@ export const gasSupplySchema = z
         currency: z
           .string()
           .regex(/^[A-Z]{3}$/, { error: 'must be a three-letter currency code such as EUR' })
-          .meta({ description: 'currency of the prices' }),
+          .meta({ description: 'currency of the prices', currencyCode: true }),
         electricityPerKWh: money('electricity price', 100, 'kWh').optional(),
         cylinderEach: money('price of one full cylinder', 1e6).optional(),
         bulkGasPerM3: money('delivered gas price per normal cubic metre', 1e5, 'm³').optional(),

@@ -72,3 +72,16 @@ export const DISPLAY_UNITS: Record<
   fraction: { si: [{ unit: '%' }], us: [{ unit: '%' }] },
   coefficient: { si: [{ unit: '' }], us: [{ unit: '' }] },
 };
+
+/**
+ * The dimension of a result given in an SI unit symbol ("kg/m³" -> density), so a person can type
+ * an answer to it with units. Kelvin and pascal read as a temperature and a pressure; a unit that
+ * is no dimension's SI unit (a currency) gives undefined.
+ */
+export function dimensionOfSIUnit(unit: string): Dimension | undefined {
+  if (unit === '') return 'coefficient';
+  const found = (Object.keys(DIMENSIONS) as Dimension[]).find(
+    (dimension) => DIMENSIONS[dimension].si === unit,
+  );
+  return found;
+}

@@ -72,6 +72,28 @@ export function parseQuantity(
   dimension: Dimension,
   options: QuantityReadOptions = {},
 ): number {
+  return readQuantity(text, dimension, options).valueSI;
+}
+
+/** A quantity as read: its SI value, and the unit it was read in (typed, or the field's). */
+export interface QuantityReading {
+  readonly valueSI: number;
+  /** Unit the number was read in, as mathjs names it ("cm", "degF"), or "%" for a share. */
+  readonly unit: string;
+  /** Whether the person typed that unit, rather than a bare number. */
+  readonly unitTyped: boolean;
+}
+
+/**
+ * `parseQuantity`, also telling which unit the text was read in, so a field can read the next
+ * bare number in the unit the person last typed there.
+ * @throws InputError as parseQuantity
+ */
+export function readQuantity(
+  text: string,
+  dimension: Dimension,
+  options: QuantityReadOptions = {},
+): QuantityReading {
   const field = options.field ?? 'value';
   const format = options.numberFormat ?? 'point-comma';
   const reading = readLeadingNumber(text, format);
@@ -80,7 +102,7 @@ export function parseQuantity(
   const unit = unitText === '' ? (options.defaultUnit ?? bareUnit(dimension)) : unitText;
   const valueSI = toSI(reading.value, unit, dimension, text, field);
   if (!Number.isFinite(valueSI)) throw new InputError(field, text, 'is too large a number');
-  return valueSI;
+  return { valueSI, unit, unitTyped: unitText !== '' };
 }
 
 /**

@@ -110,7 +110,9 @@ export function ExampleRoute() {
           {
             key: 'settings',
             label: 'Set up',
-            children: <ExampleSettingsForm key={data.updatedAt} example={data} />,
+            children: (
+              <ExampleSettingsForm key={data.updatedAt} example={data} unitSystem={unitSystem} />
+            ),
           },
         ]
       : []),

@@ -1,12 +1,13 @@
-import { Input, Typography } from 'antd';
 import {
   type Dimension,
   formatQuantity,
-  InputError,
-  parseQuantity,
+  formatRange,
+  readQuantity,
   type UnitSystem,
 } from '@loftwright/buoyancy';
-import { useId, useState } from 'react';
+import { useState } from 'react';
+import { ReadingInput } from '@/components/reading/reading-input';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
 
 export interface QuantityInputProps {
   /** Accessible name, also shown as the label by the form. */
@@ -16,23 +17,19 @@ export interface QuantityInputProps {
   value: number | undefined;
   onChange: (valueSI: number | undefined) => void;
   unitSystem: UnitSystem;
+  /** Allowed range in SI, checked as the person types (the same range the server checks). */
+  range?: { min: number; max: number };
+  /** A problem found by the form's check or the server, shown when the text itself reads. */
+  externalProblem?: string;
   id?: string;
   disabled?: boolean;
 }
 
-/** "1.630000 m" -> "1.63 m", "100.0 m" -> "100 m": zeros after the decimal point add nothing. */
-const trimZeros = (text: string) =>
-  text.replace(/(\.\d*?)0+(?=\s|$)/, '$1').replace(/\.(?=\s|$)/, '');
-
-const display = (value: number | undefined, dimension: Dimension, unitSystem: UnitSystem) =>
-  value === undefined
-    ? ''
-    : trimZeros(formatQuantity(value, dimension, unitSystem, { significantDigits: 6 }).text);
-
 /**
- * A number with its unit, typed as people write it ("163 cm", "5 lb", "68 degF", "1013 hPa"). A bare
- * number is read in the unit shown. Below the field it says what it understood, in the chosen unit
- * system, or why it cannot read the text.
+ * A number with its unit, typed as people write it ("163 cm", "5 lb", "68 °F", "1013 hPa", "98 %")
+ * in their number format. A bare number is read in the unit the field shows now: the unit last
+ * typed there, or the field's display unit in the person's unit system. Below the field it says
+ * what it understood, or why it cannot read the text.
  */
 export function QuantityInput({
   label,
@@ -40,76 +37,81 @@ export function QuantityInput({
   value,
   onChange,
   unitSystem,
+  range,
+  externalProblem,
   id,
   disabled,
 }: QuantityInputProps) {
-  const [text, setText] = useState(() => display(value, dimension, unitSystem));
-  const [problem, setProblem] = useState<string | undefined>();
-  const hintId = useId();
-  // A bare number is read in the unit the field showed when it was last filled in (or would show
-  // for a value of 1); it does not change while the user types.
-  const unitShown = (system: UnitSystem) => formatQuantity(value ?? 1, dimension, system).unitName;
-  const [defaultUnit, setDefaultUnit] = useState(() => unitShown(unitSystem));
-
-  // Show the value in the other unit system when the user switches (adjusting state while
-  // rendering, as React recommends, rather than in an effect).
-  const [shownIn, setShownIn] = useState(unitSystem);
-  if (shownIn !== unitSystem) {
-    setShownIn(unitSystem);
-    setText(display(value, dimension, unitSystem));
-    setDefaultUnit(unitShown(unitSystem));
+  const { numberFormat } = useReadingPreferences();
+  const displayUnit = (valueSI: number | undefined) =>
+    formatQuantity(valueSI ?? 1, dimension, unitSystem).unitName;
+  // The unit a bare number means: the one last typed here, else the one the value was last shown
+  // in. Clearing the field keeps it; a value from outside or another unit system resets it.
+  const [typedUnit, setTypedUnit] = useState<string | undefined>();
+  const [shownUnit, setShownUnit] = useState(() => displayUnit(value));
+  const displayKey = `${unitSystem}/${numberFormat}`;
+  const [unitFor, setUnitFor] = useState(displayKey);
+  const [lastValue, setLastValue] = useState(value);
+  if (unitFor !== displayKey || value !== lastValue) {
+    setUnitFor(displayKey);
+    setLastValue(value);
+    setTypedUnit(undefined);
+    if (value !== undefined) setShownUnit(displayUnit(value));
   }
+  const bareUnit = typedUnit ?? shownUnit;
+  const shown = (valueSI: number, unit?: string) =>
+    formatQuantity(valueSI, dimension, unitSystem, {
+      unit,
+      numberFormat,
+      significantDigits: 6,
+      trimZeros: true,
+      grouping: false,
+    }).text;
+  const unitSymbol = (unit: string) => formatQuantity(0, dimension, unitSystem, { unit }).unit;
 
-  // The value this field last reported. A different value arriving from outside (another
-  // version taken after a conflict, a reset) replaces the text; the user's own typing never does.
-  const [reported, setReported] = useState(value);
-  if (value !== reported) {
-    setReported(value);
-    setText(display(value, dimension, unitSystem));
-    setProblem(undefined);
-    setDefaultUnit(unitShown(unitSystem));
-  }
-  const report = (valueSI: number | undefined) => {
-    setReported(valueSI);
-    onChange(valueSI);
-  };
-
-  const read = (next: string) => {
-    setText(next);
-    try {
-      const bareNumber =
-        next.trim() !== '' && Number.isFinite(Number(next.trim().replace(',', '.')));
-      const parsed =
-        dimension === 'fraction'
-          ? parseQuantity(bareNumber ? `${next} %` : next, dimension, { field: label })
-          : parseQuantity(next, dimension, { field: label, defaultUnit });
-      setProblem(undefined);
-      report(parsed);
-    } catch (error) {
-      if (!(error instanceof InputError)) throw error;
-      setProblem(error.reason);
-      report(undefined);
-    }
-  };
-
-  const understood =
-    value === undefined ? undefined : formatQuantity(value, dimension, unitSystem).text;
   return (
-    <>
-      <Input
-        id={id}
-        aria-label={label}
-        aria-describedby={hintId}
-        aria-invalid={problem ? true : undefined}
-        status={problem ? 'error' : undefined}
-        value={text}
-        disabled={disabled}
-        onChange={(event) => read(event.target.value)}
-        className="lw-mono"
-      />
-      <Typography.Text id={hintId} type={problem ? 'danger' : 'secondary'} style={{ fontSize: 12 }}>
-        {problem ? `${label} ${problem}` : understood ? `read as ${understood}` : ' '}
-      </Typography.Text>
-    </>
+    <ReadingInput
+      id={id}
+      label={label}
+      value={value}
+      disabled={disabled}
+      displayKey={displayKey}
+      externalProblem={externalProblem}
+      onChange={(next) => {
+        // The field's own value coming back is no value from outside.
+        setLastValue(next);
+        onChange(next);
+      }}
+      display={(valueSI) => shown(valueSI, typedUnit)}
+      read={(text) => {
+        const reading = readQuantity(text, dimension, {
+          defaultUnit: bareUnit,
+          numberFormat,
+          field: label,
+        });
+        if (reading.unitTyped) setTypedUnit(reading.unit);
+        const inDisplayUnit = shown(reading.valueSI);
+        const inTypedUnit = shown(reading.valueSI, reading.unit);
+        const readAs =
+          dimension === 'coefficient'
+            ? inTypedUnit
+            : reading.unitTyped
+              ? inTypedUnit === inDisplayUnit
+                ? inDisplayUnit
+                : `${inTypedUnit} (${inDisplayUnit})`
+              : dimension === 'fraction'
+                ? `${inTypedUnit} (a number alone is a percentage)`
+                : `${inTypedUnit} (a number alone is in ${unitSymbol(reading.unit)})`;
+        return { value: reading.valueSI, readAs };
+      }}
+      check={
+        range
+          ? (valueSI) =>
+              valueSI < range.min || valueSI > range.max
+                ? `must be ${formatRange(range.min, range.max, dimension, { unitSystem, numberFormat })}`
+                : undefined
+          : undefined
+      }
+    />
   );
 }

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
-import type { NumberFormat } from '@/lib/guess-number-format';
+import type { NumberFormat } from '@loftwright/buoyancy';
 import { setToken, useToken } from '@/lib/session';
 
 export type Role = 'admin' | 'designer' | 'reviewer' | 'teacher' | 'student';

@@ -1,5 +1,6 @@
 import { Select } from 'antd';
-import type { NumberFormat } from '@/lib/guess-number-format';
+import type { NumberFormat } from '@loftwright/buoyancy';
+import { CURRENCIES } from '@/config/currencies';
 import { type CurrentUser, useSetPreferences } from '../api/auth-api';
 
 /** Each format shown as the number it writes; a no-break space keeps 1 234,5 on one line. */
@@ -7,24 +8,6 @@ const NUMBER_FORMAT_OPTIONS: { label: string; value: NumberFormat }[] = [
   { label: '1,234.5', value: 'point-comma' },
   { label: '1\u00a0234,5', value: 'comma-space' },
   { label: '1.234,5', value: 'comma-point' },
-];
-
-/** A short list to pick from; an account holding another code (set through the API) keeps it. */
-const CURRENCIES = [
-  'EUR',
-  'USD',
-  'GBP',
-  'CHF',
-  'CAD',
-  'AUD',
-  'JPY',
-  'SEK',
-  'NOK',
-  'DKK',
-  'PLN',
-  'CZK',
-  'NZD',
-  'INR',
 ];
 
 /** The number format and currency kept on the account, each saved as soon as it is picked. */

@@ -2,8 +2,11 @@ import { Alert, App, Button, Col, Form, Input, Modal, Row, Space, Spin, Typograp
 import {
   evaluate,
   InputError,
+  inputFieldInfo,
   KINDS,
+  readableIssue,
   type CalculationResult,
+  type NumberFormat,
   type UnitSystem,
 } from '@loftwright/buoyancy';
 import { lazy, Suspense, useDeferredValue, useEffect, useMemo, useState } from 'react';
@@ -21,6 +24,12 @@ import { MeterImport } from './meter-import';
 import { DerivationPanel } from '@/components/results/derivation-panel';
 import { ResultsPanel } from '@/components/results/results-panel';
 import { SchemaField } from './schema-form';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
+import {
+  describeUnreadable,
+  UnreadableFieldsContext,
+  useUnreadableFields,
+} from '@/components/reading/unreadable-fields';
 import { StatusTag } from './status-tag';
 
 // The charting library is most of the editor's weight: the inputs and results come first, the
@@ -35,19 +44,31 @@ interface LiveResult {
   problem?: string;
 }
 
-/** The engine, run in the browser on every change of the inputs (no request per keystroke). */
-function evaluateLive(kind: string, inputs: unknown): LiveResult {
+/**
+ * The engine, run in the browser on every change of the inputs (no request per keystroke). Its
+ * refusals come back as sentences naming each field by its label, ranges in the units shown.
+ */
+function evaluateLive(
+  kind: string,
+  inputs: unknown,
+  schema: Record<string, unknown>,
+  shownAs: { unitSystem: UnitSystem; numberFormat: NumberFormat },
+): LiveResult {
   try {
     return { result: evaluate(kind, inputs), errors: {} };
   } catch (error) {
     if (!(error instanceof InputError))
       return { errors: {}, problem: error instanceof Error ? error.message : String(error) };
     const errors: Record<string, string> = {};
-    for (const issue of error.issues) errors[issue.field] ??= issue.reason;
-    return {
-      errors,
-      problem: `Check ${error.issues.length === 1 ? 'the marked input' : `${error.issues.length} inputs`}: ${error.message}`,
-    };
+    const sentences: string[] = [];
+    for (const issue of error.issues) {
+      const field = inputFieldInfo(schema, issue.field);
+      const sentence = readableIssue(issue, field, shownAs);
+      // Beside the field the label is already shown; the summary names it.
+      errors[issue.field] ??= field ? sentence.slice(field.label.length).trim() : sentence;
+      sentences.push(sentence);
+    }
+    return { errors, problem: `Results wait for: ${sentences.join('; ')}` };
   }
 }
 
@@ -114,11 +135,21 @@ export function EditorBody({
 
   const deferredInputs = useDeferredValue(inputs);
   const kind = detail.kind;
+  const { numberFormat } = useReadingPreferences();
+  const [unreadable, unreadableRegistry] = useUnreadableFields();
+  const schema = useMemo(
+    () => KINDS.find((candidate) => candidate.id === kind)?.inputSchema ?? {},
+    [kind],
+  );
   const live = useMemo(
     () =>
-      deferredInputs === undefined || !kind ? { errors: {} } : evaluateLive(kind, deferredInputs),
-    [kind, deferredInputs],
+      deferredInputs === undefined || !kind
+        ? { errors: {} }
+        : evaluateLive(kind, deferredInputs, schema, { unitSystem, numberFormat }),
+    [kind, deferredInputs, schema, unitSystem, numberFormat],
   );
+  const heldBack =
+    unreadable.length > 0 ? `Results wait for: ${describeUnreadable(unreadable)}` : undefined;
   const dirty = inputs !== undefined && JSON.stringify(inputs) !== savedInputs;
 
   const blocker = useBlocker(
@@ -133,7 +164,6 @@ export function EditorBody({
     return () => window.removeEventListener('beforeunload', warn);
   }, [dirty]);
 
-  const schema = KINDS.find((candidate) => candidate.id === detail.kind)?.inputSchema ?? {};
   const editable = detail.permissions.edit;
 
   const doSave = (baseVersion: number, toSave: unknown) =>
@@ -191,16 +221,18 @@ export function EditorBody({
           <section aria-label="Inputs">
             <Typography.Title level={4}>Inputs</Typography.Title>
             <Form layout="vertical" component="div" requiredMark={false}>
-              <SchemaField
-                name=""
-                path=""
-                schema={schema}
-                value={inputs}
-                onChange={setInputs}
-                unitSystem={unitSystem}
-                errors={live.errors}
-                disabled={!editable}
-              />
+              <UnreadableFieldsContext.Provider value={unreadableRegistry}>
+                <SchemaField
+                  name=""
+                  path=""
+                  schema={schema}
+                  value={inputs}
+                  onChange={setInputs}
+                  unitSystem={unitSystem}
+                  errors={live.errors}
+                  disabled={!editable}
+                />
+              </UnreadableFieldsContext.Provider>
             </Form>
             {editable && kind === 'gas-supply' ? (
               <Button style={{ marginBottom: 12 }} onClick={() => setMeterOpen(true)}>
@@ -219,7 +251,7 @@ export function EditorBody({
                 <Space wrap>
                   <Button
                     type="primary"
-                    disabled={!dirty || !live.result}
+                    disabled={!dirty || !live.result || unreadable.length > 0}
                     loading={save.isPending}
                     onClick={() => doSave(detail.latestVersion, inputs)}
                   >
@@ -251,10 +283,10 @@ export function EditorBody({
         </Col>
         <Col xs={24} lg={8}>
           <ResultsPanel
-            result={live.result}
+            result={heldBack ? undefined : live.result}
             unitSystem={unitSystem}
             title={dirty ? 'Results (live, not saved)' : 'Results'}
-            problem={live.problem}
+            problem={heldBack ?? live.problem}
           />
           {live.result && deferredInputs ? (
             <Suspense fallback={<Spin description="Drawing the charts…" />}>

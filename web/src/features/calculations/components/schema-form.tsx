@@ -1,7 +1,7 @@
-import { Form, Input, InputNumber, Select, Typography } from 'antd';
-import type { UnitSystem } from '@loftwright/buoyancy';
-import { dimensionForField } from '@/components/quantity/dimension-for-field';
-import { QuantityInput } from '@/components/quantity/quantity-input';
+import { Form, Input, Select, Typography } from 'antd';
+import { fieldLabel, humaniseKey, type UnitSystem } from '@loftwright/buoyancy';
+import { CURRENCIES } from '@/config/currencies';
+import { NumberField } from './number-field';
 import { ArrayRowsField } from './array-rows-field';
 
 type Schema = Record<string, unknown>;
@@ -10,18 +10,8 @@ type Value = Record<string, unknown>;
 const asSchema = (value: unknown): Schema =>
   value && typeof value === 'object' ? (value as Schema) : {};
 
-const humanise = (key: string) =>
-  key
-    .replace(/(M3|M2|Kg|K|Pa|M|S|A|V|J|W|N|KgM2|KgM3|MS)$/, '')
-    .replace(/([A-Z])/g, ' $1')
-    .replace(/^./, (first) => first.toUpperCase())
-    .trim();
-
-const capitalise = (text: string) => text.replace(/^./, (first) => first.toUpperCase());
-
-function labelOf(key: string, schema: Schema): string {
-  return typeof schema.description === 'string' ? capitalise(schema.description) : humanise(key);
-}
+const humanise = humaniseKey;
+const labelOf = (key: string, schema: Schema): string => fieldLabel(key, schema);
 
 /** The discriminator of a union: the property that is a constant in every variant. */
 function discriminatorOf(variants: Schema[]): string | undefined {
@@ -53,6 +43,8 @@ export interface SchemaFieldProps {
   errors: Record<string, string>;
   required?: boolean;
   disabled?: boolean;
+  /** Currency of the money fields in this part of the form (a sibling `currency` field). */
+  currency?: string;
 }
 
 /** One input of a kind, rendered from its JSON Schema: objects, variants, quantities, choices. */
@@ -66,6 +58,7 @@ export function SchemaField({
   errors,
   required = true,
   disabled,
+  currency,
 }: SchemaFieldProps) {
   const variants = (schema.oneOf ?? schema.anyOf) as Schema[] | undefined;
   const fieldId = `field-${path.replace(/[^\w]+/g, '-')}`;
@@ -115,6 +108,7 @@ export function SchemaField({
           unitSystem={unitSystem}
           errors={errors}
           disabled={disabled}
+          currency={currency}
         />
       </fieldset>
     );
@@ -133,6 +127,7 @@ export function SchemaField({
           unitSystem={unitSystem}
           errors={errors}
           disabled={disabled}
+          currency={currency}
         />
       </fieldset>
     );
@@ -145,31 +140,33 @@ export function SchemaField({
     htmlFor: fieldId,
   };
   if (schema.type === 'number' || schema.type === 'integer') {
-    const dimension =
-      typeof schema.unit === 'string' ? dimensionForField(name, schema.unit) : undefined;
-    if (dimension && schema.type === 'number') {
-      return (
-        <Form.Item {...common}>
-          <QuantityInput
-            id={fieldId}
-            label={label}
-            dimension={dimension}
-            value={typeof value === 'number' ? value : undefined}
-            onChange={onChange}
-            unitSystem={unitSystem}
-            disabled={disabled}
-          />
-        </Form.Item>
-      );
-    }
+    return (
+      <Form.Item label={label} htmlFor={fieldId}>
+        <NumberField
+          id={fieldId}
+          label={label}
+          schema={schema}
+          value={typeof value === 'number' ? value : undefined}
+          onChange={onChange}
+          unitSystem={unitSystem}
+          problem={help}
+          currency={currency}
+          disabled={disabled}
+        />
+      </Form.Item>
+    );
+  }
+  if (schema.currencyCode === true) {
+    const code = typeof value === 'string' ? value : '';
+    const codes = code === '' || CURRENCIES.includes(code) ? CURRENCIES : [code, ...CURRENCIES];
     return (
       <Form.Item {...common}>
-        <InputNumber
+        <Select
           id={fieldId}
-          value={typeof value === 'number' ? value : null}
-          onChange={(next) => onChange(next ?? undefined)}
+          value={code || undefined}
           disabled={disabled}
-          style={{ width: '100%' }}
+          options={codes.map((option) => ({ value: option, label: option }))}
+          onChange={onChange}
         />
       </Form.Item>
     );
@@ -252,8 +249,10 @@ function ObjectFields({
   unitSystem,
   errors,
   disabled,
+  currency,
 }: Omit<SchemaFieldProps, 'name' | 'required'> & { value: Value }) {
   const required = new Set((schema.required as string[] | undefined) ?? []);
+  const sectionCurrency = typeof value.currency === 'string' ? value.currency : currency;
   return (
     <>
       {Object.entries(asSchema(schema.properties)).map(([key, property]) => {
@@ -271,6 +270,7 @@ function ObjectFields({
             errors={errors}
             required={required.has(key) || child.default !== undefined}
             disabled={disabled}
+            currency={sectionCurrency}
           />
         );
       })}

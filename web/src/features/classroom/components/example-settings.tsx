@@ -1,19 +1,19 @@
+import { App, Button, Card, Checkbox, Form, Input, Select, Space, Switch, Typography } from 'antd';
 import {
-  App,
-  Button,
-  Card,
-  Checkbox,
-  Form,
-  Input,
-  InputNumber,
-  Select,
-  Space,
-  Switch,
-  Typography,
-} from 'antd';
-import { numberAtPath, numericInputPaths } from '@loftwright/buoyancy';
+  formatQuantity,
+  numberAtPath,
+  numericInputPaths,
+  type UnitSystem,
+} from '@loftwright/buoyancy';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import { useState } from 'react';
 import { FormError } from '@/components/errors/form-error';
+import { QuantityInput } from '@/components/quantity/quantity-input';
+import {
+  describeUnreadable,
+  UnreadableFieldsContext,
+  useUnreadableFields,
+} from '@/components/reading/unreadable-fields';
 import { type ExampleDetail, type TryRanges, useUpdateExample } from '../api/classroom-api';
 import { inputFieldInfo } from '../lib/input-field';
 
@@ -21,8 +21,16 @@ import { inputFieldInfo } from '../lib/input-field';
  * What the teacher sets around a published example: the introduction, a note per step, the
  * inputs students may try and their ranges, where the chart appears, and the exercise.
  */
-export function ExampleSettingsForm({ example }: { example: ExampleDetail }) {
+export function ExampleSettingsForm({
+  example,
+  unitSystem,
+}: {
+  example: ExampleDetail;
+  unitSystem: UnitSystem;
+}) {
   const { message } = App.useApp();
+  const [unreadable, unreadableRegistry] = useUnreadableFields();
+  const { numberFormat } = useReadingPreferences();
   const update = useUpdateExample(example.id);
   const [intro, setIntro] = useState(example.intro);
   const [notes, setNotes] = useState<Record<string, string>>(example.stepNotes);
@@ -46,155 +54,181 @@ export function ExampleSettingsForm({ example }: { example: ExampleDetail }) {
     );
 
   return (
-    <Form layout="vertical" aria-label="Example settings" onFinish={save}>
-      <Form.Item
-        label="Introduction"
-        htmlFor="example-intro"
-        extra="Name the outside source a class can check the numbers against."
-      >
-        <Input.TextArea
-          id="example-intro"
-          rows={4}
-          value={intro}
-          maxLength={4000}
-          onChange={(event) => setIntro(event.target.value)}
-        />
-      </Form.Item>
-
-      <Card size="small" title="Notes on the steps" style={{ marginBottom: 16 }}>
-        {example.steps.map((step, index) => (
-          <Form.Item
-            key={step.id}
-            label={`${index + 1}. ${step.label}`}
-            htmlFor={`note-${step.id}`}
-          >
-            <Input.TextArea
-              id={`note-${step.id}`}
-              rows={1}
-              autoSize={{ minRows: 1, maxRows: 4 }}
-              value={notes[step.id] ?? ''}
-              maxLength={2000}
-              onChange={(event) => setNotes((now) => ({ ...now, [step.id]: event.target.value }))}
-            />
-          </Form.Item>
-        ))}
-      </Card>
-
-      <Card
-        size="small"
-        title="Try it yourself: inputs students may change"
-        style={{ marginBottom: 16 }}
-      >
-        <Typography.Paragraph type="secondary">
-          Ranges are in the input’s SI unit; the example’s own value must lie inside.
-        </Typography.Paragraph>
-        {paths.map((path) => {
-          const info = inputFieldInfo(example.kind, example.inputs, path);
-          const value = numberAtPath(example.inputs, path) ?? 0;
-          const range = ranges[path];
-          return (
-            <Space key={path} wrap style={{ display: 'flex', marginBottom: 8 }} data-range={path}>
-              <Checkbox
-                checked={range !== undefined}
-                onChange={(event) =>
-                  setRanges((now) => {
-                    const others = Object.fromEntries(
-                      Object.entries(now).filter(([key]) => key !== path),
-                    );
-                    if (!event.target.checked) return others;
-                    // A starting range around the example's value, for the teacher to narrow.
-                    const range =
-                      value > 0
-                        ? { min: value / 2, max: value * 2 }
-                        : value < 0
-                          ? { min: value * 2, max: value / 2 }
-                          : { min: 0, max: 1 };
-                    return { ...others, [path]: range };
-                  })
-                }
-              >
-                {info.label}{' '}
-                <span className="lw-mono">
-                  ({value} {info.unit})
-                </span>
-              </Checkbox>
-              {range ? (
-                <>
-                  <InputNumber
-                    aria-label={`${info.label}: lowest value`}
-                    value={range.min}
-                    suffix={info.unit}
-                    onChange={(min) =>
-                      typeof min === 'number' &&
-                      setRanges((now) => ({ ...now, [path]: { ...range, min } }))
-                    }
-                  />
-                  <InputNumber
-                    aria-label={`${info.label}: highest value`}
-                    value={range.max}
-                    suffix={info.unit}
-                    onChange={(max) =>
-                      typeof max === 'number' &&
-                      setRanges((now) => ({ ...now, [path]: { ...range, max } }))
-                    }
-                  />
-                </>
-              ) : null}
-            </Space>
-          );
-        })}
-      </Card>
-
-      <Form.Item label="Show the chart at step" htmlFor="chart-step">
-        <Select
-          id="chart-step"
-          style={{ maxWidth: 420 }}
-          value={chartStepId ?? ''}
-          onChange={(value: string) => setChartStepId(value || null)}
-          options={[
-            { value: '', label: 'After the last step' },
-            ...example.steps.map((step, index) => ({
-              value: step.id,
-              label: `${index + 1}. ${step.label}`,
-            })),
-          ]}
-        />
-      </Form.Item>
-
-      <Card size="small" title="Exercise" style={{ marginBottom: 16 }}>
-        <Form.Item label="Students work out some results themselves" htmlFor="is-exercise">
-          <Switch id="is-exercise" checked={isExercise} onChange={setIsExercise} />
+    <UnreadableFieldsContext.Provider value={unreadableRegistry}>
+      <Form layout="vertical" aria-label="Example settings" onFinish={save}>
+        <Form.Item
+          label="Introduction"
+          htmlFor="example-intro"
+          extra="Name the outside source a class can check the numbers against."
+        >
+          <Input.TextArea
+            id="example-intro"
+            rows={4}
+            value={intro}
+            maxLength={4000}
+            onChange={(event) => setIntro(event.target.value)}
+          />
         </Form.Item>
-        {isExercise ? (
-          <>
-            <Form.Item label="Results to hide">
-              <Checkbox.Group
-                value={hidden}
-                onChange={(values) => setHidden(values)}
-                options={Object.entries(example.outputs).map(([name, output]) => ({
-                  value: name,
-                  label: output.label,
-                }))}
+
+        <Card size="small" title="Notes on the steps" style={{ marginBottom: 16 }}>
+          {example.steps.map((step, index) => (
+            <Form.Item
+              key={step.id}
+              label={`${index + 1}. ${step.label}`}
+              htmlFor={`note-${step.id}`}
+            >
+              <Input.TextArea
+                id={`note-${step.id}`}
+                rows={1}
+                autoSize={{ minRows: 1, maxRows: 4 }}
+                value={notes[step.id] ?? ''}
+                maxLength={2000}
+                onChange={(event) => setNotes((now) => ({ ...now, [step.id]: event.target.value }))}
               />
             </Form.Item>
-            <Form.Item label="Tolerance" htmlFor="tolerance">
-              <InputNumber
-                id="tolerance"
-                min={0.1}
-                max={50}
-                step={0.5}
-                suffix="%"
-                value={tolerance}
-                onChange={(value) => typeof value === 'number' && setTolerance(value)}
-              />
-            </Form.Item>
-          </>
+          ))}
+        </Card>
+
+        <Card
+          size="small"
+          title="Try it yourself: inputs students may change"
+          style={{ marginBottom: 16 }}
+        >
+          <Typography.Paragraph type="secondary">
+            Type each end with its unit, as in the editor; the example’s own value must lie inside.
+          </Typography.Paragraph>
+          {paths.map((path) => {
+            const info = inputFieldInfo(example.kind, path);
+            const dimension = info.dimension ?? 'coefficient';
+            const value = numberAtPath(example.inputs, path) ?? 0;
+            const range = ranges[path];
+            return (
+              <Space key={path} wrap style={{ display: 'flex', marginBottom: 8 }} data-range={path}>
+                <Checkbox
+                  checked={range !== undefined}
+                  onChange={(event) =>
+                    setRanges((now) => {
+                      const others = Object.fromEntries(
+                        Object.entries(now).filter(([key]) => key !== path),
+                      );
+                      if (!event.target.checked) return others;
+                      // A starting range around the example's value, for the teacher to narrow.
+                      const range =
+                        value > 0
+                          ? { min: value / 2, max: value * 2 }
+                          : value < 0
+                            ? { min: value * 2, max: value / 2 }
+                            : { min: 0, max: 1 };
+                      return { ...others, [path]: range };
+                    })
+                  }
+                >
+                  {info.label}{' '}
+                  <span className="lw-mono">
+                    (
+                    {
+                      formatQuantity(value, dimension, unitSystem, {
+                        numberFormat,
+                        trimZeros: true,
+                      }).text
+                    }
+                    )
+                  </span>
+                </Checkbox>
+                {range ? (
+                  <>
+                    <QuantityInput
+                      label={`${info.label}: lowest value`}
+                      dimension={dimension}
+                      unitSystem={unitSystem}
+                      value={range.min}
+                      onChange={(min) =>
+                        setRanges((now) => ({
+                          ...now,
+                          [path]: { ...range, min: min ?? Number.NaN },
+                        }))
+                      }
+                    />
+                    <QuantityInput
+                      label={`${info.label}: highest value`}
+                      dimension={dimension}
+                      unitSystem={unitSystem}
+                      value={range.max}
+                      onChange={(max) =>
+                        setRanges((now) => ({
+                          ...now,
+                          [path]: { ...range, max: max ?? Number.NaN },
+                        }))
+                      }
+                    />
+                  </>
+                ) : null}
+              </Space>
+            );
+          })}
+        </Card>
+
+        <Form.Item label="Show the chart at step" htmlFor="chart-step">
+          <Select
+            id="chart-step"
+            style={{ maxWidth: 420 }}
+            value={chartStepId ?? ''}
+            onChange={(value: string) => setChartStepId(value || null)}
+            options={[
+              { value: '', label: 'After the last step' },
+              ...example.steps.map((step, index) => ({
+                value: step.id,
+                label: `${index + 1}. ${step.label}`,
+              })),
+            ]}
+          />
+        </Form.Item>
+
+        <Card size="small" title="Exercise" style={{ marginBottom: 16 }}>
+          <Form.Item label="Students work out some results themselves" htmlFor="is-exercise">
+            <Switch id="is-exercise" checked={isExercise} onChange={setIsExercise} />
+          </Form.Item>
+          {isExercise ? (
+            <>
+              <Form.Item label="Results to hide">
+                <Checkbox.Group
+                  value={hidden}
+                  onChange={(values) => setHidden(values)}
+                  options={Object.entries(example.outputs).map(([name, output]) => ({
+                    value: name,
+                    label: output.label,
+                  }))}
+                />
+              </Form.Item>
+              <Form.Item label="Tolerance" htmlFor="tolerance">
+                <QuantityInput
+                  id="tolerance"
+                  label="Tolerance"
+                  dimension="fraction"
+                  unitSystem={unitSystem}
+                  range={{ min: 0.001, max: 0.5 }}
+                  value={tolerance / 100}
+                  onChange={(share) => setTolerance(share === undefined ? Number.NaN : share * 100)}
+                />
+              </Form.Item>
+            </>
+          ) : null}
+        </Card>
+        <FormError error={update.error} />
+        {unreadable.length > 0 ? (
+          <Typography.Paragraph type="danger" role="alert">
+            Not saved until these read: {describeUnreadable(unreadable)}
+          </Typography.Paragraph>
         ) : null}
-      </Card>
-      <FormError error={update.error} />
-      <Button type="primary" htmlType="submit" loading={update.isPending}>
-        Save settings
-      </Button>
-    </Form>
+        <Button
+          type="primary"
+          htmlType="submit"
+          loading={update.isPending}
+          disabled={unreadable.length > 0}
+        >
+          Save settings
+        </Button>
+      </Form>
+    </UnreadableFieldsContext.Provider>
   );
 }

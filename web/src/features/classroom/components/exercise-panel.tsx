@@ -1,9 +1,8 @@
 import { CheckCircleFilled, CloseCircleFilled } from '@ant-design/icons';
-import { Alert, Button, Card, Form, InputNumber, List, Space, Tag, theme, Typography } from 'antd';
-import type { UnitSystem } from '@loftwright/buoyancy';
+import { Alert, Button, Card, Form, List, Space, Tag, theme, Typography } from 'antd';
+import { dimensionOfSIUnit, type UnitSystem } from '@loftwright/buoyancy';
 import { useState } from 'react';
 import { FormError } from '@/components/errors/form-error';
-import { dimensionForField } from '@/components/quantity/dimension-for-field';
 import { formatOutputText } from '@/components/quantity/format-output';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import { type ExampleDetail, type Submission, useSubmitAnswers } from '../api/classroom-api';
@@ -121,7 +120,7 @@ export function ExercisePanel({
         }
       >
         {example.questions.map((question) => {
-          const dimension = dimensionForField(question.output, question.unit);
+          const dimension = dimensionOfSIUnit(question.unit) ?? 'coefficient';
           const id = `answer-${question.output}`;
           return (
             <Form.Item
@@ -130,32 +129,15 @@ export function ExercisePanel({
               htmlFor={id}
               style={{ maxWidth: 360 }}
             >
-              {dimension ? (
-                <QuantityInput
-                  id={id}
-                  label={question.label}
-                  dimension={dimension}
-                  value={answers[question.output]}
-                  unitSystem={unitSystem}
-                  disabled={!canSubmit}
-                  onChange={(value) => setAnswers((now) => ({ ...now, [question.output]: value }))}
-                />
-              ) : (
-                <InputNumber
-                  id={id}
-                  aria-label={question.label}
-                  suffix={question.unit}
-                  style={{ width: 240 }}
-                  disabled={!canSubmit}
-                  value={answers[question.output]}
-                  onChange={(value) =>
-                    setAnswers((now) => ({
-                      ...now,
-                      [question.output]: typeof value === 'number' ? value : undefined,
-                    }))
-                  }
-                />
-              )}
+              <QuantityInput
+                id={id}
+                label={question.label}
+                dimension={dimension}
+                value={answers[question.output]}
+                unitSystem={unitSystem}
+                disabled={!canSubmit}
+                onChange={(value) => setAnswers((now) => ({ ...now, [question.output]: value }))}
+              />
             </Form.Item>
           );
         })}

@@ -1,6 +1,7 @@
 import { Alert, Button, Card, Slider, Space, Table, Typography } from 'antd';
 import {
   evaluate,
+  formatRange,
   InputError,
   numberAtPath,
   type OutputQuantity,
@@ -9,17 +10,11 @@ import {
   withNumberAtPath,
 } from '@loftwright/buoyancy';
 import { useState } from 'react';
-import { dimensionForField } from '@/components/quantity/dimension-for-field';
 import { formatOutputText } from '@/components/quantity/format-output';
 import { QuantityInput } from '@/components/quantity/quantity-input';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import type { TryRanges } from '../api/classroom-api';
 import { inputFieldInfo } from '../lib/input-field';
-
-const rangeText = (min: number, max: number, unit: string, name: string, system: UnitSystem) => {
-  const dimension = dimensionForField(name, unit);
-  if (!dimension) return `${min} to ${max}${unit ? ` ${unit}` : ''}`;
-  return `${formatOutputText(min, unit, system)} to ${formatOutputText(max, unit, system)}`;
-};
 
 interface Row {
   name: string;
@@ -45,6 +40,7 @@ export function TryItYourself({
   ranges: TryRanges;
   unitSystem: UnitSystem;
 }) {
+  const { numberFormat } = useReadingPreferences();
   const [changes, setChanges] = useState<Record<string, number | undefined>>({});
   // Bumped on reset so the quantity fields show the original values again.
   const [generation, setGeneration] = useState(0);
@@ -103,19 +99,21 @@ export function TryItYourself({
       <Card size="small" title="Inputs you may change">
         {paths.map((path) => {
           const range = ranges[path] as { min: number; max: number };
-          const info = inputFieldInfo(kind, inputs, path);
-          const name = path.split('.').at(-1) ?? path;
-          const dimension = dimensionForField(name, info.unit);
+          const info = inputFieldInfo(kind, path);
+          const dimension = info.dimension ?? 'coefficient';
           const original = numberAtPath(inputs, path) ?? range.min;
           const value = path in changes ? changes[path] : original;
-          const allowed = rangeText(range.min, range.max, info.unit, name, unitSystem);
+          const allowed = formatRange(range.min, range.max, dimension, {
+            unitSystem,
+            numberFormat,
+          }).replace(/^between (.*) and /, '$1 to ');
           const isOutside = outside.includes(path);
           return (
             <div key={path} style={{ marginBottom: 16, maxWidth: 480 }} data-try={path}>
               <label htmlFor={`try-${path}`} style={{ display: 'block', fontWeight: 600 }}>
                 {info.label.replace(/^./, (first) => first.toUpperCase())}
               </label>
-              {dimension ? (
+              {
                 <QuantityInput
                   key={generation}
                   id={`try-${path}`}
@@ -125,7 +123,7 @@ export function TryItYourself({
                   unitSystem={unitSystem}
                   onChange={(next) => setChanges((now) => ({ ...now, [path]: next }))}
                 />
-              ) : null}
+              }
               <Slider
                 min={range.min}
                 max={range.max}

@@ -1,48 +1,23 @@
-import { KINDS } from '@loftwright/buoyancy';
-
-type Schema = Record<string, unknown>;
-
-const asSchema = (value: unknown): Schema =>
-  value && typeof value === 'object' ? (value as Schema) : {};
-
-/** The variant of a union that the given value is: every constant property must match. */
-function variantFor(node: Schema, value: unknown): Schema {
-  const variants = (node.oneOf ?? node.anyOf) as Schema[] | undefined;
-  if (!variants) return node;
-  const given = asSchema(value);
-  return (
-    variants.find((variant) =>
-      Object.entries(asSchema(variant.properties)).every(([key, property]) => {
-        const constant = asSchema(property).const;
-        return constant === undefined || given[key] === constant;
-      }),
-    ) ?? node
-  );
-}
+import { type Dimension, DIMENSIONS, inputFieldInfo as fieldAt, KINDS } from '@loftwright/buoyancy';
 
 export interface InputFieldInfo {
-  /** What the input is, from the kind's schema ("diameter"), else the path. */
+  /** What the input is, by the kind's schema ("Diameter"), else the path. */
   label: string;
+  /** The quantity it holds, where it is a physical one. */
+  dimension?: Dimension;
   /** SI unit of the input, '' for a plain number. */
   unit: string;
 }
 
-/** Label and unit of the input at a dotted path, read from the kind's published JSON Schema. */
-export function inputFieldInfo(kindId: string, inputs: unknown, path: string): InputFieldInfo {
+/** Label, dimension and SI unit of the input at a dotted path, from the engine's schema. */
+export function inputFieldInfo(kindId: string, path: string): InputFieldInfo {
   const kind = KINDS.find((candidate) => candidate.id === kindId);
-  let node: Schema = asSchema(kind?.inputSchema);
-  let value: unknown = inputs;
-  const labels: string[] = [];
-  for (const key of path.split('.')) {
-    node = variantFor(node, value);
-    node = variantFor(asSchema(asSchema(node.properties)[key]), asSchema(value)[key]);
-    value = asSchema(value)[key];
-    if (typeof node.description === 'string') labels.push(node.description);
-  }
-  const label = labels.at(-1) ?? path;
-  const parent = labels.length > 1 ? labels.at(-2) : undefined;
+  const info = fieldAt(kind?.inputSchema, path);
+  const dimension =
+    info?.dimension && info.dimension in DIMENSIONS ? (info.dimension as Dimension) : undefined;
   return {
-    label: parent && !/^[A-Z]/.test(label) ? `${label} (${parent.toLowerCase()})` : label,
-    unit: typeof node.unit === 'string' ? node.unit : '',
+    label: info?.label ?? path,
+    ...(dimension ? { dimension } : {}),
+    unit: dimension ? DIMENSIONS[dimension].si : '',
   };
 }

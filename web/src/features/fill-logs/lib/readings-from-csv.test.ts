@@ -40,7 +40,7 @@ describe('readings from a logger CSV', () => {
     );
     expect(readings.map((reading) => reading.timeS)).toEqual([0, 180]);
     expect(bad.map((row) => row.line)).toEqual([3, 5]);
-    expect(bad[0]?.reason).toMatch(/net lift .*not a number/);
+    expect(bad[0]?.reason).toMatch(/net lift .*does not start with a number/);
     expect(bad[1]?.reason).toMatch(/airTemperatureK must be between 173.15 and 423.15 K/);
   });
 
