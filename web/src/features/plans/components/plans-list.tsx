@@ -1,5 +1,6 @@
 import { App, Button, Popconfirm, Space, Table, Typography } from 'antd';
 import { Link } from 'react-router-dom';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import { NEW_PLAN, type Plan, usePlans, useRemovePlan, useSavePlan } from '../api/plans-api';
 
 /** The user's gas plans, newest first, with a button to start one. */
@@ -14,6 +15,8 @@ export function PlansList({
   const plans = usePlans();
   const create = useSavePlan();
   const remove = useRemovePlan();
+  // A new plan's prices are in the currency the account names.
+  const { currency } = useReadingPreferences();
   return (
     <>
       <Space style={{ marginBottom: 12 }}>
@@ -21,10 +24,13 @@ export function PlansList({
           type="primary"
           loading={create.isPending}
           onClick={() =>
-            create.mutate(NEW_PLAN, {
-              onSuccess: (plan) => onCreated(plan.id),
-              onError: (error) => void message.error(error.message),
-            })
+            create.mutate(
+              { ...NEW_PLAN, prices: { currency } },
+              {
+                onSuccess: (plan) => onCreated(plan.id),
+                onError: (error) => void message.error(error.message),
+              },
+            )
           }
         >
           New gas plan
