@@ -70,7 +70,7 @@ describe('designer, reviewer and student in the browser', () => {
 
     const diameter = page.getByLabel('Diameter', { exact: true });
     await diameter.fill('150 cm');
-    await expect.poll(() => page.getByText(/read as 1\.50* m/).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(/read as 150 cm \(1\.5 m\)/).isVisible()).toBe(true);
     await expect.poll(() => netLift()).not.toBe(before);
     const after = await netLift();
     expect(after).toMatch(/Net lift/);
@@ -92,7 +92,9 @@ describe('designer, reviewer and student in the browser', () => {
     await dialog.getByRole('button', { name: 'Create' }).click();
     await expect.poll(() => page.url()).toMatch(/\/calculations\/[0-9a-f-]{36}$/);
     await page.getByLabel('Diameter', { exact: true }).fill('5 kg');
-    await expect.poll(() => page.getByText(/is not a length/).isVisible()).toBe(true);
+    // Said beside the field, and again where the results say what holds them back.
+    await expect.poll(() => page.getByText(/is not a length/).count()).toBe(2);
+    await expect.poll(() => page.getByText(/^Results wait for: Diameter/).isVisible()).toBe(true);
   });
 
   it('lets a reviewer find it in the queue and approve it; the designer then sees it locked', async () => {

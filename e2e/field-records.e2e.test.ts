@@ -143,7 +143,7 @@ describe('field records in the browser: files, fill logs and reading imports', (
     await expect
       .poll(() => check.textContent())
       .toContain('2 readings ready, 1 row cannot be read');
-    expect(await check.textContent()).toMatch(/Line 3: scale reading .*not a number/);
+    expect(await check.textContent()).toMatch(/Line 3: Scale reading does not start with a number/);
     // Nothing stored yet.
     expect(await log.getByRole('table', { name: 'Lift readings' }).getByRole('row').count()).toBe(
       2,
@@ -199,8 +199,8 @@ describe('field records in the browser: files, fill logs and reading imports', (
     await page.getByLabel('Envelope 2 gas per envelope').fill('500 L');
     await page.getByLabel('Envelope 2 count').fill('4');
     await page.getByRole('switch', { name: 'Gas cylinders' }).click();
-    await page.getByLabel('One full cylinder (EUR)').fill('320');
-    await page.getByLabel('Delivered gas (EUR/normal m³)').fill('40');
+    await page.getByLabel('One full cylinder', { exact: true }).fill('320');
+    await page.getByLabel('Delivered gas, per normal m³', { exact: true }).fill('40');
     await page.getByRole('button', { name: 'Save and compute' }).click();
     await expect
       .poll(() => page.getByText("Saved; the figures below are the server's.").isVisible())
@@ -255,7 +255,9 @@ describe('field records in the browser: files, fill logs and reading imports', (
 
     await choose('seconds,watts\n0,1200\n600,oops\n1800,1200\n');
     const check = dialog.getByRole('status', { name: 'Meter check' });
-    await expect.poll(() => check.textContent()).toMatch(/Line 3: power .*not a number/);
+    await expect
+      .poll(() => check.textContent())
+      .toMatch(/Line 3: Power does not start with a number/);
     expect(await dialog.getByRole('button', { name: 'Use this energy' }).isDisabled()).toBe(true);
 
     // 1200 W for 1800 s = 2.16 MJ = 600 Wh.

@@ -1,9 +1,11 @@
 import { Alert, Button, Form, Modal, Radio, Select, Space, Typography } from 'antd';
-import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
+import { formatQuantity, type NumberFormat, type UnitSystem } from '@loftwright/buoyancy';
 import { useMemo, useState } from 'react';
 import { BadRowsList } from '@/components/csv/bad-rows-list';
 import { CsvFileInput } from '@/components/csv/csv-file-input';
+import { CsvNumberFormatSelect } from '@/components/csv/csv-number-format-select';
 import { CsvPreviewTable } from '@/components/csv/csv-preview-table';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import type { ParsedCsv } from '@/lib/parse-csv';
 import {
   ENERGY_UNITS,
@@ -36,6 +38,8 @@ export function MeterImport({
   const [kind, setKind] = useState<'power' | 'cumulative'>('power');
   const [valueColumn, setValueColumn] = useState('');
   const [valueUnit, setValueUnit] = useState<string>('W');
+  const preferences = useReadingPreferences();
+  const [fileFormat, setFileFormat] = useState<NumberFormat>(preferences.numberFormat);
 
   const mapped = useMemo(() => {
     if (!parsed || !time.column || !valueColumn) return undefined;
@@ -43,8 +47,8 @@ export function MeterImport({
       kind === 'power'
         ? { kind, column: valueColumn, unit: valueUnit as (typeof POWER_UNITS)[number] }
         : { kind, column: valueColumn, unit: valueUnit as (typeof ENERGY_UNITS)[number] };
-    return meterFromCsv(parsed, { time, value });
-  }, [parsed, time, kind, valueColumn, valueUnit]);
+    return meterFromCsv(parsed, { time, value }, fileFormat);
+  }, [parsed, time, kind, valueColumn, valueUnit, fileFormat]);
   const columnOptions = options(parsed?.columns ?? []);
   const energy = mapped?.energy;
 
@@ -84,6 +88,7 @@ export function MeterImport({
           <>
             <CsvPreviewTable parsed={parsed} label="First rows of the meter file" />
             <Space wrap align="start" style={{ marginTop: 12 }}>
+              <CsvNumberFormatSelect value={fileFormat} onChange={setFileFormat} />
               <Form.Item label="Time column">
                 <Select
                   aria-label="Meter time column"

@@ -1,9 +1,25 @@
-import { Button, Form, Input, Modal, Select, Space, Typography } from 'antd';
-import type { FillReading, UnitSystem } from '@loftwright/buoyancy';
+import { Alert, Button, Form, Input, Modal, Select, Space, Typography } from 'antd';
+import {
+  type Dimension,
+  type FillReading,
+  formatQuantity,
+  formatRange,
+  type NumberFormat,
+  type UnitSystem,
+} from '@loftwright/buoyancy';
 import { useId, useState } from 'react';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import { FormError } from '@/components/errors/form-error';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
+import {
+  describeUnreadable,
+  type UnreadableField,
+  UnreadableFieldsContext,
+  useUnreadableFields,
+} from '@/components/reading/unreadable-fields';
 import { type FillLogDraft, GAS_SOURCES, useCreateFillLog } from '../api/fill-logs-api';
+import { airOfVersion, NO_AIR, type VersionAir } from '../lib/air-of-version';
+import { FILL_LOG_RANGES, outsideRange, type ValueRange } from '../lib/fill-log-ranges';
 
 interface ReadingRow {
   kind: 'ballast' | 'direct';
@@ -34,10 +50,65 @@ function toReading(row: ReadingRow): FillReading | undefined {
   return { kind: 'direct', timeS: row.timeS, netLiftKg: row.netLiftKg };
 }
 
+/** The version a fill is logged against, as far as it has been read from the server. */
+export type FillLogVersion =
+  | { status: 'pending' }
+  | { status: 'error'; message: string }
+  | { status: 'success'; inputs: unknown };
+
+const startingAir = (version: FillLogVersion): VersionAir =>
+  version.status === 'success' ? airOfVersion(version.inputs) : NO_AIR;
+
+/** A field whose value reads but lies outside what the server accepts. */
+interface RangedField {
+  label: string;
+  value: number | undefined;
+  range: ValueRange;
+  dimension: Dimension;
+}
+
+/** One line saying where the starting air comes from, or why it is sea level. */
+function airNote(
+  version: FillLogVersion,
+  versionNumber: number,
+  air: VersionAir,
+  unitSystem: UnitSystem,
+  numberFormat: NumberFormat,
+): string | undefined {
+  const show = (value: number, dimension: Dimension) =>
+    formatQuantity(value, dimension, unitSystem, {
+      numberFormat,
+      significantDigits: 6,
+      trimZeros: true,
+      grouping: false,
+    }).text;
+  const seaLevel = `starting from ${show(NO_AIR.temperatureK, 'temperature')}, ${show(NO_AIR.pressurePa, 'pressure')}`;
+  if (version.status === 'pending') return undefined;
+  if (version.status === 'error') {
+    return `The version’s air could not be read (${version.message}); ${seaLevel}`;
+  }
+  const { origin } = air;
+  if (origin.kind === 'none') return `This version names no air; ${seaLevel}`;
+  const where =
+    origin.kind === 'measured'
+      ? 'measured air'
+      : `the 1976 standard atmosphere at ${show(origin.altitudeM, 'length')}${
+          origin.temperatureOffsetK === 0
+            ? ''
+            : `, ISA ${origin.temperatureOffsetK > 0 ? '+' : '−'} ${show(Math.abs(origin.temperatureOffsetK), 'temperatureDifference')}`
+        }`;
+  const dewPoint =
+    air.dewPointK === undefined
+      ? ''
+      : `; relative humidity from its dew point of ${show(air.dewPointK, 'temperature')}`;
+  return `Starting from the air version ${versionNumber} was computed for: ${where}${dewPoint}.`;
+}
+
 /** Logs a real fill of one version: when, where, the air, and the lift read on the scale. */
 export function FillLogForm({
   calculationId,
   versionNumber,
+  version,
   unitSystem,
   open,
   onClose,
@@ -45,6 +116,8 @@ export function FillLogForm({
 }: {
   calculationId: string;
   versionNumber: number;
+  /** The version's inputs: the fill's air starts from the air it was computed for. */
+  version: FillLogVersion;
   unitSystem: UnitSystem;
   open: boolean;
   onClose: () => void;
@@ -52,13 +125,27 @@ export function FillLogForm({
 }) {
   const create = useCreateFillLog(calculationId);
   const idPrefix = useId();
+  const { numberFormat } = useReadingPreferences();
+  const [unreadable, unreadableRegistry] = useUnreadableFields();
+  const air = startingAir(version);
   const [filledAt, setFilledAt] = useState(localNow);
   const [place, setPlace] = useState('');
   const [envelopeLabel, setEnvelopeLabel] = useState('');
   const [gasSource, setGasSource] = useState<string>('cylinder');
-  const [temperatureK, setTemperatureK] = useState<number | undefined>(288.15);
-  const [pressurePa, setPressurePa] = useState<number | undefined>(101325);
-  const [relativeHumidity, setRelativeHumidity] = useState<number | undefined>();
+  const [temperatureK, setTemperatureK] = useState<number | undefined>(air.temperatureK);
+  const [pressurePa, setPressurePa] = useState<number | undefined>(air.pressurePa);
+  const [relativeHumidity, setRelativeHumidity] = useState<number | undefined>(
+    air.relativeHumidity,
+  );
+  // The version arriving after the dialog opened (the fields are not shown until then): the air
+  // starts from it, as React recommends, by adjusting state while rendering.
+  const [airFrom, setAirFrom] = useState(version.status);
+  if (airFrom !== version.status) {
+    setAirFrom(version.status);
+    setTemperatureK(air.temperatureK);
+    setPressurePa(air.pressurePa);
+    setRelativeHumidity(air.relativeHumidity);
+  }
   const [note, setNote] = useState('');
   const [rows, setRows] = useState<ReadingRow[]>([{ kind: 'ballast', timeS: 0 }]);
   const setRow = (index: number, change: Partial<ReadingRow>) =>
@@ -71,8 +158,72 @@ export function FillLogForm({
     filledAt !== '' &&
     readings.every((reading) => reading !== undefined);
 
+  // The server's ranges, checked here too: each field says it as it is typed, and saving waits.
+  const ranged: RangedField[] = [
+    {
+      label: 'Air temperature',
+      value: temperatureK,
+      range: FILL_LOG_RANGES.temperatureK,
+      dimension: 'temperature',
+    },
+    {
+      label: 'Air pressure (absolute)',
+      value: pressurePa,
+      range: FILL_LOG_RANGES.pressurePa,
+      dimension: 'pressure',
+    },
+    {
+      label: 'Relative humidity',
+      value: relativeHumidity,
+      range: FILL_LOG_RANGES.relativeHumidity,
+      dimension: 'fraction',
+    },
+    ...rows.flatMap((row, index): RangedField[] => [
+      {
+        label: `Reading ${index + 1} time since filling`,
+        value: row.timeS,
+        range: FILL_LOG_RANGES.timeS,
+        dimension: 'time',
+      },
+      ...(row.kind === 'ballast'
+        ? [
+            {
+              label: `Reading ${index + 1} ballast mass`,
+              value: row.ballastMassKg,
+              range: FILL_LOG_RANGES.ballastMassKg,
+              dimension: 'mass' as const,
+            },
+            {
+              label: `Reading ${index + 1} scale reading`,
+              value: row.scaleReadingKg,
+              range: FILL_LOG_RANGES.scaleReadingKg,
+              dimension: 'mass' as const,
+            },
+          ]
+        : [
+            {
+              label: `Reading ${index + 1} net lift`,
+              value: row.netLiftKg,
+              range: FILL_LOG_RANGES.netLiftKg,
+              dimension: 'mass' as const,
+            },
+          ]),
+    ]),
+  ];
+  const heldBack: UnreadableField[] = [
+    ...unreadable,
+    ...ranged
+      .filter((field) => outsideRange(field.value, field.range))
+      .map((field) => ({
+        label: field.label,
+        reason: `must be ${formatRange(field.range.min, field.range.max, field.dimension, { unitSystem, numberFormat })}`,
+      })),
+  ];
+  const pending = version.status === 'pending';
+  const airOrigin = airNote(version, versionNumber, air, unitSystem, numberFormat);
+
   const submit = () => {
-    if (!complete) return;
+    if (!complete || heldBack.length > 0 || pending) return;
     const draft: FillLogDraft = {
       filledAt: new Date(filledAt).toISOString(),
       place,
@@ -104,174 +255,199 @@ export function FillLogForm({
       onCancel={onClose}
       width={720}
       okText="Save fill log"
-      okButtonProps={{ disabled: !complete, loading: create.isPending }}
+      okButtonProps={{
+        disabled: !complete || heldBack.length > 0 || pending,
+        loading: create.isPending,
+      }}
       onOk={submit}
+      loading={pending}
       destroyOnHidden
     >
-      <Form layout="vertical" component="div" requiredMark={false}>
-        <Space wrap style={{ width: '100%' }}>
-          <Form.Item label="Filled at" htmlFor={`${idPrefix}-at`}>
-            <Input
-              id={`${idPrefix}-at`}
-              type="datetime-local"
-              value={filledAt}
-              onChange={(event) => setFilledAt(event.target.value)}
-            />
-          </Form.Item>
-          <Form.Item label="Place" htmlFor={`${idPrefix}-place`}>
-            <Input
-              id={`${idPrefix}-place`}
-              value={place}
-              onChange={(event) => setPlace(event.target.value)}
-              maxLength={200}
-            />
-          </Form.Item>
-          <Form.Item label="Envelope" htmlFor={`${idPrefix}-envelope`}>
-            <Input
-              id={`${idPrefix}-envelope`}
-              placeholder="Which one: serial, colour"
-              value={envelopeLabel}
-              onChange={(event) => setEnvelopeLabel(event.target.value)}
-              maxLength={200}
-            />
-          </Form.Item>
-          <Form.Item label="Gas source">
-            <Select
-              aria-label="Gas source"
-              style={{ width: 220 }}
-              value={gasSource}
-              options={GAS_SOURCES.map((source) => ({ ...source }))}
-              onChange={setGasSource}
-            />
-          </Form.Item>
-        </Space>
-        <Typography.Title level={5}>Air at the fill</Typography.Title>
-        <Space wrap align="start">
-          <Form.Item label="Air temperature" htmlFor={`${idPrefix}-t`}>
-            <QuantityInput
-              id={`${idPrefix}-t`}
-              label="Air temperature"
-              dimension="temperature"
-              value={temperatureK}
-              onChange={setTemperatureK}
-              unitSystem={unitSystem}
-            />
-          </Form.Item>
-          <Form.Item label="Air pressure (absolute)" htmlFor={`${idPrefix}-p`}>
-            <QuantityInput
-              id={`${idPrefix}-p`}
-              label="Air pressure (absolute)"
-              dimension="pressure"
-              value={pressurePa}
-              onChange={setPressurePa}
-              unitSystem={unitSystem}
-            />
-          </Form.Item>
-          <Form.Item label="Relative humidity (optional)" htmlFor={`${idPrefix}-rh`}>
-            <QuantityInput
-              id={`${idPrefix}-rh`}
-              label="Relative humidity"
-              dimension="fraction"
-              value={relativeHumidity}
-              onChange={setRelativeHumidity}
-              unitSystem={unitSystem}
-            />
-          </Form.Item>
-        </Space>
-        <Typography.Title level={5}>Lift readings</Typography.Title>
-        <Typography.Paragraph type="secondary">
-          Tie the envelope to a known ballast standing on a scale: the net lift is the ballast less
-          what the scale shows. Or enter a net lift read directly from a spring balance or load
-          cell.
-        </Typography.Paragraph>
-        {rows.map((row, index) => (
-          <Space key={index} wrap align="start" aria-label={`Reading ${index + 1}`} role="group">
-            <Form.Item label={`Reading ${index + 1}`}>
+      <UnreadableFieldsContext.Provider value={unreadableRegistry}>
+        <Form layout="vertical" component="div" requiredMark={false}>
+          <Space wrap style={{ width: '100%' }}>
+            <Form.Item label="Filled at" htmlFor={`${idPrefix}-at`}>
+              <Input
+                id={`${idPrefix}-at`}
+                type="datetime-local"
+                value={filledAt}
+                onChange={(event) => setFilledAt(event.target.value)}
+              />
+            </Form.Item>
+            <Form.Item label="Place" htmlFor={`${idPrefix}-place`}>
+              <Input
+                id={`${idPrefix}-place`}
+                value={place}
+                onChange={(event) => setPlace(event.target.value)}
+                maxLength={200}
+              />
+            </Form.Item>
+            <Form.Item label="Envelope" htmlFor={`${idPrefix}-envelope`}>
+              <Input
+                id={`${idPrefix}-envelope`}
+                placeholder="Which one: serial, colour"
+                value={envelopeLabel}
+                onChange={(event) => setEnvelopeLabel(event.target.value)}
+                maxLength={200}
+              />
+            </Form.Item>
+            <Form.Item label="Gas source">
               <Select
-                aria-label={`Reading ${index + 1} kind`}
-                style={{ width: 170 }}
-                value={row.kind}
-                options={[
-                  { value: 'ballast', label: 'Ballast and scale' },
-                  { value: 'direct', label: 'Net lift read directly' },
-                ]}
-                onChange={(kind: ReadingRow['kind']) => setRow(index, { kind })}
+                aria-label="Gas source"
+                style={{ width: 220 }}
+                value={gasSource}
+                options={GAS_SOURCES.map((source) => ({ ...source }))}
+                onChange={setGasSource}
               />
             </Form.Item>
-            <Form.Item label="Time since filling">
+          </Space>
+          <Typography.Title level={5}>Air at the fill</Typography.Title>
+          {airOrigin ? (
+            <Typography.Paragraph type="secondary" data-air-origin={air.origin.kind}>
+              {airOrigin}
+            </Typography.Paragraph>
+          ) : null}
+          <Space wrap align="start">
+            <Form.Item label="Air temperature" htmlFor={`${idPrefix}-t`}>
               <QuantityInput
-                label={`Reading ${index + 1} time since filling`}
-                dimension="time"
-                value={row.timeS}
-                onChange={(timeS) => setRow(index, { timeS })}
+                id={`${idPrefix}-t`}
+                label="Air temperature"
+                dimension="temperature"
+                value={temperatureK}
+                onChange={setTemperatureK}
                 unitSystem={unitSystem}
+                range={FILL_LOG_RANGES.temperatureK}
               />
             </Form.Item>
-            {row.kind === 'ballast' ? (
-              <>
-                <Form.Item label="Ballast mass">
-                  <QuantityInput
-                    label={`Reading ${index + 1} ballast mass`}
-                    dimension="mass"
-                    value={row.ballastMassKg}
-                    onChange={(ballastMassKg) => setRow(index, { ballastMassKg })}
-                    unitSystem={unitSystem}
-                  />
-                </Form.Item>
-                <Form.Item label="Scale reading">
-                  <QuantityInput
-                    label={`Reading ${index + 1} scale reading`}
-                    dimension="mass"
-                    value={row.scaleReadingKg}
-                    onChange={(scaleReadingKg) => setRow(index, { scaleReadingKg })}
-                    unitSystem={unitSystem}
-                  />
-                </Form.Item>
-              </>
-            ) : (
-              <Form.Item label="Net lift">
-                <QuantityInput
-                  label={`Reading ${index + 1} net lift`}
-                  dimension="mass"
-                  value={row.netLiftKg}
-                  onChange={(netLiftKg) => setRow(index, { netLiftKg })}
-                  unitSystem={unitSystem}
+            <Form.Item label="Air pressure (absolute)" htmlFor={`${idPrefix}-p`}>
+              <QuantityInput
+                id={`${idPrefix}-p`}
+                label="Air pressure (absolute)"
+                dimension="pressure"
+                value={pressurePa}
+                onChange={setPressurePa}
+                unitSystem={unitSystem}
+                range={FILL_LOG_RANGES.pressurePa}
+              />
+            </Form.Item>
+            <Form.Item label="Relative humidity (optional)" htmlFor={`${idPrefix}-rh`}>
+              <QuantityInput
+                id={`${idPrefix}-rh`}
+                label="Relative humidity"
+                dimension="fraction"
+                value={relativeHumidity}
+                onChange={setRelativeHumidity}
+                unitSystem={unitSystem}
+                range={FILL_LOG_RANGES.relativeHumidity}
+              />
+            </Form.Item>
+          </Space>
+          <Typography.Title level={5}>Lift readings</Typography.Title>
+          <Typography.Paragraph type="secondary">
+            Tie the envelope to a known ballast standing on a scale: the net lift is the ballast
+            less what the scale shows. Or enter a net lift read directly from a spring balance or
+            load cell.
+          </Typography.Paragraph>
+          {rows.map((row, index) => (
+            <Space key={index} wrap align="start" aria-label={`Reading ${index + 1}`} role="group">
+              <Form.Item label={`Reading ${index + 1}`}>
+                <Select
+                  aria-label={`Reading ${index + 1} kind`}
+                  style={{ width: 170 }}
+                  value={row.kind}
+                  options={[
+                    { value: 'ballast', label: 'Ballast and scale' },
+                    { value: 'direct', label: 'Net lift read directly' },
+                  ]}
+                  onChange={(kind: ReadingRow['kind']) => setRow(index, { kind })}
                 />
               </Form.Item>
-            )}
-          </Space>
-        ))}
-        <Space>
-          <Button
-            onClick={() =>
-              setRows((current) => [
-                ...current,
-                {
-                  kind: current.at(-1)?.kind ?? 'ballast',
-                  ballastMassKg: current.at(-1)?.ballastMassKg,
-                },
-              ])
-            }
-          >
-            Add a reading
-          </Button>
-          {rows.length > 1 ? (
-            <Button onClick={() => setRows((current) => current.slice(0, -1))}>
-              Remove the last reading
+              <Form.Item label="Time since filling">
+                <QuantityInput
+                  label={`Reading ${index + 1} time since filling`}
+                  dimension="time"
+                  value={row.timeS}
+                  onChange={(timeS) => setRow(index, { timeS })}
+                  unitSystem={unitSystem}
+                  range={FILL_LOG_RANGES.timeS}
+                />
+              </Form.Item>
+              {row.kind === 'ballast' ? (
+                <>
+                  <Form.Item label="Ballast mass">
+                    <QuantityInput
+                      label={`Reading ${index + 1} ballast mass`}
+                      dimension="mass"
+                      value={row.ballastMassKg}
+                      onChange={(ballastMassKg) => setRow(index, { ballastMassKg })}
+                      unitSystem={unitSystem}
+                      range={FILL_LOG_RANGES.ballastMassKg}
+                    />
+                  </Form.Item>
+                  <Form.Item label="Scale reading">
+                    <QuantityInput
+                      label={`Reading ${index + 1} scale reading`}
+                      dimension="mass"
+                      value={row.scaleReadingKg}
+                      onChange={(scaleReadingKg) => setRow(index, { scaleReadingKg })}
+                      unitSystem={unitSystem}
+                      range={FILL_LOG_RANGES.scaleReadingKg}
+                    />
+                  </Form.Item>
+                </>
+              ) : (
+                <Form.Item label="Net lift">
+                  <QuantityInput
+                    label={`Reading ${index + 1} net lift`}
+                    dimension="mass"
+                    value={row.netLiftKg}
+                    onChange={(netLiftKg) => setRow(index, { netLiftKg })}
+                    unitSystem={unitSystem}
+                    range={FILL_LOG_RANGES.netLiftKg}
+                  />
+                </Form.Item>
+              )}
+            </Space>
+          ))}
+          <Space>
+            <Button
+              onClick={() =>
+                setRows((current) => [
+                  ...current,
+                  {
+                    kind: current.at(-1)?.kind ?? 'ballast',
+                    ballastMassKg: current.at(-1)?.ballastMassKg,
+                  },
+                ])
+              }
+            >
+              Add a reading
             </Button>
+            {rows.length > 1 ? (
+              <Button onClick={() => setRows((current) => current.slice(0, -1))}>
+                Remove the last reading
+              </Button>
+            ) : null}
+          </Space>
+          <Form.Item label="Note" htmlFor={`${idPrefix}-note`} style={{ marginTop: 16 }}>
+            <Input.TextArea
+              id={`${idPrefix}-note`}
+              value={note}
+              onChange={(event) => setNote(event.target.value)}
+              maxLength={2000}
+              rows={2}
+            />
+          </Form.Item>
+          {heldBack.length > 0 ? (
+            <Alert
+              type="error"
+              showIcon
+              title={`Not saved until these are put right: ${describeUnreadable(heldBack)}`}
+            />
           ) : null}
-        </Space>
-        <Form.Item label="Note" htmlFor={`${idPrefix}-note`} style={{ marginTop: 16 }}>
-          <Input.TextArea
-            id={`${idPrefix}-note`}
-            value={note}
-            onChange={(event) => setNote(event.target.value)}
-            maxLength={2000}
-            rows={2}
-          />
-        </Form.Item>
-        <FormError error={create.error} />
-      </Form>
+          <FormError error={create.error} />
+        </Form>
+      </UnreadableFieldsContext.Provider>
     </Modal>
   );
 }

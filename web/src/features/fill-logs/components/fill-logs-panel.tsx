@@ -3,8 +3,9 @@ import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
 import { type ReactNode, useState } from 'react';
 import { ExportButton } from '@/components/export/export-button';
 import { type FillLog, useFillLogs } from '../api/fill-logs-api';
+import { useCalculationVersion } from '../api/get-calculation-version';
 import { FillLogDetail } from './fill-log-detail';
-import { FillLogForm } from './fill-log-form';
+import { FillLogForm, type FillLogVersion } from './fill-log-form';
 
 const mass = (value: number | undefined, unitSystem: UnitSystem) =>
   value === undefined ? '—' : formatQuantity(value, 'mass', unitSystem).text;
@@ -30,7 +31,19 @@ export function FillLogsPanel({
   filesFor?: (log: FillLog) => ReactNode;
 }) {
   const logs = useFillLogs(calculationId);
-  const [logging, setLogging] = useState(false);
+  // The version a new fill is logged against, fixed when the dialog opens: a version saved
+  // meanwhile neither moves the log nor resets what has been typed.
+  const [loggingVersion, setLoggingVersion] = useState<number>();
+  const logging = loggingVersion !== undefined;
+  const versionNumber = loggingVersion ?? latestVersion;
+  // Read ahead for those who may log, so the dialog opens on the version's air.
+  const version = useCalculationVersion(calculationId, versionNumber, canEdit);
+  const versionForForm: FillLogVersion =
+    version.status === 'success'
+      ? { status: 'success', inputs: version.data.inputs }
+      : version.status === 'error'
+        ? { status: 'error', message: version.error.message }
+        : { status: 'pending' };
   const [expanded, setExpanded] = useState<string[]>([]);
   return (
     <Card
@@ -44,7 +57,7 @@ export function FillLogsPanel({
             what="the fill logs"
           />
           {canEdit ? (
-            <Button type="primary" onClick={() => setLogging(true)}>
+            <Button type="primary" onClick={() => setLoggingVersion(latestVersion)}>
               Log a fill
             </Button>
           ) : null}
@@ -115,10 +128,11 @@ export function FillLogsPanel({
       {logging ? (
         <FillLogForm
           calculationId={calculationId}
-          versionNumber={latestVersion}
+          versionNumber={versionNumber}
+          version={versionForForm}
           unitSystem={unitSystem}
           open={logging}
-          onClose={() => setLogging(false)}
+          onClose={() => setLoggingVersion(undefined)}
           onCreated={(id) => setExpanded((current) => [...current, id])}
         />
       ) : null}

@@ -15,6 +15,7 @@ describe('readings from a logger CSV', () => {
         temperature: { column: 'air_F', unit: 'degF' },
       },
       ambient,
+      'point-comma',
     );
     expect(bad).toEqual([]);
     expect(readings).toHaveLength(2);
@@ -37,11 +38,37 @@ describe('readings from a logger CSV', () => {
         temperature: { column: 'air_C', unit: 'degC' },
       },
       ambient,
+      'point-comma',
+      { unitSystem: 'si', numberFormat: 'comma-space' },
     );
     expect(readings.map((reading) => reading.timeS)).toEqual([0, 180]);
     expect(bad.map((row) => row.line)).toEqual([3, 5]);
-    expect(bad[0]?.reason).toMatch(/net lift .*does not start with a number/);
-    expect(bad[1]?.reason).toMatch(/airTemperatureK must be between 173.15 and 423.15 K/);
+    expect(bad[0]?.reason).toMatch(/^Net lift does not start with a number/);
+    // The engine's air-density range, 173.15–423.15 K, named in °C in the person's number format.
+    expect(bad[1]?.reason).toBe('Air temperature must be between \u2212100 °C and 150 °C');
+  });
+
+  it('reads cells in the number format the file is said to use, refusing a cell that reads two ways', () => {
+    const parsed = parseCsv('t;kg\n0;1,25\n60;1.250\n');
+    const comma = readingsFromCsv(
+      parsed,
+      { time: { column: 't', unit: 's' }, lift: { kind: 'direct', column: 'kg', unit: 'kg' } },
+      ambient,
+      'comma-point',
+    );
+    // 1,25 is 1.25 in a decimal-comma file; 1.250 groups thousands there, so it is 1250 kg and
+    // outside the net-lift range, listed by its line rather than read as 1.25.
+    expect(comma.readings.map((reading) => reading.kind === 'direct' && reading.netLiftKg)).toEqual(
+      [1.25],
+    );
+    expect(comma.bad.map((row) => row.line)).toEqual([3]);
+    const point = readingsFromCsv(
+      parseCsv('t,kg\n0,"1,250"\n'),
+      { time: { column: 't', unit: 's' }, lift: { kind: 'direct', column: 'kg', unit: 'kg' } },
+      ambient,
+      'point-comma',
+    );
+    expect(point.bad[0]?.reason).toMatch(/could be 1\.25 or 1250/);
   });
 
   it('reports an empty cell by its column', () => {
@@ -50,6 +77,7 @@ describe('readings from a logger CSV', () => {
       parsed,
       { time: { column: 't', unit: 's' }, lift: { kind: 'direct', column: 'kg', unit: 'kg' } },
       ambient,
+      'point-comma',
     );
     expect(bad).toEqual([{ line: 2, reason: 'lift (column "kg") is empty' }]);
   });

@@ -2,7 +2,11 @@ import {
   type FillAmbient,
   type FillReading,
   InputError,
+  type InputFieldInfo,
+  type NumberFormat,
   parseQuantity,
+  readableIssue,
+  type ReadableOptions,
   reduceFillLog,
 } from '@loftwright/buoyancy';
 import type { ParsedCsv } from '@/lib/parse-csv';
@@ -22,6 +26,16 @@ export interface ReadingColumns {
   pressure?: { column: string; unit: (typeof PRESSURE_UNITS)[number] };
 }
 
+/** The reading fields a row fills, named as the mapping names them, for messages. */
+const READING_FIELDS: Record<string, InputFieldInfo> = {
+  timeS: { label: 'Time', dimension: 'time' },
+  scaleReadingKg: { label: 'Scale reading', dimension: 'mass' },
+  netLiftKg: { label: 'Net lift', dimension: 'mass' },
+  ballastMassKg: { label: 'Ballast mass', dimension: 'mass' },
+  airTemperatureK: { label: 'Air temperature', dimension: 'temperature' },
+  pressurePa: { label: 'Pressure', dimension: 'pressure' },
+};
+
 const cell = (row: Record<string, string>, column: string, what: string) => {
   const value = (row[column] ?? '').trim();
   if (value === '') throw new Error(`${what} (column "${column}") is empty`);
@@ -30,12 +44,15 @@ const cell = (row: Record<string, string>, column: string, what: string) => {
 
 /**
  * Readings from the mapped columns, each checked by the engine exactly as the server will check
- * it; a row that fails is listed with its line and the reason, and left out.
+ * it (cells in the file's number format); a row that fails is listed with its line and the reason, and left out.
  */
 export function readingsFromCsv(
   parsed: ParsedCsv,
   columns: ReadingColumns,
   ambient: FillAmbient,
+  numberFormat: NumberFormat,
+  /** How messages show ranges: the person's units and number format, not the file's. */
+  display: ReadableOptions = { unitSystem: 'si', numberFormat },
 ): { readings: FillReading[]; bad: { line: number; reason: string }[] } {
   const readings: FillReading[] = [];
   const bad: { line: number; reason: string }[] = [...parsed.problems];
@@ -44,12 +61,12 @@ export function readingsFromCsv(
       const timeS = parseQuantity(
         `${cell(cells, columns.time.column, 'time')} ${columns.time.unit}`,
         'time',
-        { field: 'time' },
+        { field: 'time', numberFormat },
       );
       const mass = parseQuantity(
         `${cell(cells, columns.lift.column, 'lift')} ${columns.lift.unit}`,
         'mass',
-        { field: columns.lift.kind === 'ballast' ? 'scale reading' : 'net lift' },
+        { field: columns.lift.kind === 'ballast' ? 'scale reading' : 'net lift', numberFormat },
       );
       const air = {
         ...(columns.temperature
@@ -57,7 +74,7 @@ export function readingsFromCsv(
               airTemperatureK: parseQuantity(
                 `${cell(cells, columns.temperature.column, 'temperature')} ${columns.temperature.unit}`,
                 'temperature',
-                { field: 'air temperature' },
+                { field: 'air temperature', numberFormat },
               ),
             }
           : {}),
@@ -66,7 +83,7 @@ export function readingsFromCsv(
               pressurePa: parseQuantity(
                 `${cell(cells, columns.pressure.column, 'pressure')} ${columns.pressure.unit}`,
                 'pressure',
-                { field: 'pressure' },
+                { field: 'pressure', numberFormat },
               ),
             }
           : {}),
@@ -87,7 +104,16 @@ export function readingsFromCsv(
       const reason =
         error instanceof InputError
           ? error.issues
-              .map((issue) => `${issue.field.replace(/^readings\.0\./, '')} ${issue.reason}`)
+              .map((issue) =>
+                readableIssue(
+                  issue,
+                  READING_FIELDS[issue.field.split('.').at(-1) ?? ''] ?? {
+                    // A cell that did not read is named by the field given to the reader.
+                    label: issue.field.replace(/^./, (first) => first.toUpperCase()),
+                  },
+                  display,
+                ),
+              )
               .join('; ')
           : error instanceof Error
             ? error.message
