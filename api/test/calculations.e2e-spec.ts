@@ -67,6 +67,26 @@ describe('calculations', () => {
       expect(response.body.issues[0].range).toEqual({ min: -5000, max: 86000, unit: 'm' });
     });
 
+    it('keeps a seldom-met value as typed and records its "check this" note with the version', async () => {
+      const response = await create(designer, {
+        inputs: liftCheckInputs({ envelope: { shape: 'sphere', diameterM: 120 } }),
+      });
+      expect(response.status).toBe(201);
+      const version = response.body.latest;
+      expect(version.inputs.envelope.diameterM).toBe(120);
+      expect(version.warnings).toContainEqual({
+        code: 'check-this',
+        severity: 'note',
+        field: 'envelope.diameterM',
+        message: expect.stringMatching(/^Check this: Diameter is 120 m, above the usual 100 m/),
+      });
+      // Read back, the note is still there: it is part of the stored version.
+      const stored = await http().get(`/api/calculations/${response.body.id}`).set(designer.auth);
+      expect(
+        stored.body.latest.warnings.filter((w: { code: string }) => w.code === 'check-this'),
+      ).toHaveLength(1);
+    });
+
     it('refuses users without an author role', async () => {
       const reviewer = await createUser(testApp.app, ['reviewer']);
       expect((await create(reviewer)).status).toBe(403);

@@ -31,7 +31,9 @@ export type {
 } from './atmosphere/standard-atmosphere.js';
 export * from './constants.js';
 export { evaluate, isKindId, KIND_IDS, KINDS, normaliseInputs } from './kinds/registry.js';
-export type { KindDescription, KindId } from './kinds/registry.js';
+export type { EvaluateOptions, KindDescription, KindId } from './kinds/registry.js';
+export { CHECK_THIS, plausibilityNotes } from './schema/plausibility.js';
+export { USUAL } from './schema/usual-ranges.js';
 export type { LiftCheckInput } from './kinds/lift-check.kind.js';
 export { GAS_CATALOGUE, GAS_IDS } from './gas/gas-catalogue.js';
 export type { GasHazard, GasId, LiftingGas } from './gas/gas-catalogue.js';
@@ -66,6 +68,7 @@ export {
   parseQuantity,
   readQuantity,
 } from './units/quantity-text.js';
+export { EDIT_SIGNIFICANT_DIGITS, plainEditText, quantityEditText } from './units/edit-text.js';
 export type {
   FormattedQuantity,
   QuantityReading,

@@ -27,6 +27,8 @@ import {
 import { DEFAULT_BALLOON_DRAG_COEFFICIENT } from '../flight/drag-defaults.js';
 import { defineKind } from './kind.js';
 import { warnAboutLift } from './lift-check.kind.js';
+import { usually } from '../schema/usual-range.js';
+import { USUAL } from '../schema/usual-ranges.js';
 
 const shapeFamilySchema = z
   .discriminatedUnion('shape', [
@@ -63,7 +65,10 @@ const targetSchema = z
     z
       .object({
         kind: z.literal('ascentRate'),
-        ascentRateMS: quantity('velocity', 0.1, 20, 'initial rate of climb wanted'),
+        ascentRateMS: usually(
+          quantity('velocity', 0.1, 20, 'initial rate of climb wanted'),
+          USUAL.ascentRateMS,
+        ),
         dragCoefficient: quantity(
           'coefficient',
           0.05,
@@ -79,7 +84,10 @@ export const envelopeSizingSchema = z
   .object({
     shape: shapeFamilySchema,
     envelopeMass: envelopeMassSchema,
-    payloadMassKg: quantity('mass', 0, 10000, 'payload hanging below the envelope'),
+    payloadMassKg: usually(
+      quantity('mass', 0, 10000, 'payload hanging below the envelope'),
+      USUAL.payloadMassKg,
+    ),
     target: targetSchema,
     gas: gasSchema,
     ambient: ambientSchema,

@@ -29,6 +29,8 @@ import {
   DEFAULT_BALLOON_DRAG_COEFFICIENT,
   DEFAULT_PARACHUTE_DRAG_COEFFICIENT,
 } from '../flight/drag-defaults.js';
+import { usually } from '../schema/usual-range.js';
+import { USUAL } from '../schema/usual-ranges.js';
 
 /** Rows kept in a profile series; longer integrations are thinned evenly (end points kept). */
 const MAX_SERIES_ROWS = 600;
@@ -51,16 +53,20 @@ export const flightProfileSchema = z
       z.object({ kind: z.literal('fixed'), shape: envelopeSchema }).strict(),
     ]),
     envelopeMassKg: quantity('mass', 0, 1000, 'envelope mass'),
-    payloadMassKg: quantity('mass', 0, 1000, 'payload, parachute and line'),
+    payloadMassKg: usually(
+      quantity('mass', 0, 1000, 'payload, parachute and line'),
+      USUAL.payloadMassKg,
+    ),
     gas: z
       .object({
         gasId: gasChoice(
           GAS_IDS.filter((id): id is Exclude<GasId, 'hot-air'> => id !== 'hot-air'),
           'lifting gas',
         ),
-        purity: fraction('mole fraction of the named gas; the rest is air', MIN_PURITY, 1).default(
-          1,
-        ),
+        purity: usually(
+          fraction('mole fraction of the named gas; the rest is air', MIN_PURITY, 1),
+          USUAL.gasPurity,
+        ).default(1),
       })
       .strict(),
     launch: z

@@ -17,6 +17,8 @@ import {
 } from '../supply/cylinder.js';
 import { HYDROGEN_HHV_J_PER_KG, hydrogenMolarRateMolPerS } from '../supply/electrolysis.js';
 import { defineKind } from './kind.js';
+import { usually } from '../schema/usual-range.js';
+import { USUAL } from '../schema/usual-ranges.js';
 
 const J_PER_WH = 3600;
 
@@ -29,7 +31,10 @@ const electrolyserSchema = z
       z
         .object({
           kind: z.literal('cell'),
-          cellVoltageV: quantity('voltage', 1, 5, 'voltage across one cell'),
+          cellVoltageV: usually(
+            quantity('voltage', 1, 5, 'voltage across one cell'),
+            USUAL.cellVoltageV,
+          ),
         })
         .strict(),
       z
@@ -63,7 +68,10 @@ export const gasSupplySchema = z
     fill: z
       .object({
         volumeM3: quantity('volume', 1e-6, 1e7, 'gas needed for one fill, at fill conditions'),
-        temperatureK: quantity('temperature', 173.15, 423.15, 'gas temperature at filling'),
+        temperatureK: usually(
+          quantity('temperature', 173.15, 423.15, 'gas temperature at filling'),
+          USUAL.fillAirTemperatureK,
+        ),
         pressurePa: quantity('pressure', 1000, 1.2e6, 'absolute gas pressure at filling'),
         count: count('number of fills', 1, 100000).default(1),
       })

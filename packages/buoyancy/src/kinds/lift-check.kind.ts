@@ -10,12 +10,17 @@ import { deriveEnvelopeMass, deriveGeometry } from '../steps/geometry-steps.js';
 import { deriveLift, type LiftMasses } from '../steps/lift-steps.js';
 import { GAS_CATALOGUE } from '../gas/gas-catalogue.js';
 import { defineKind } from './kind.js';
+import { usually } from '../schema/usual-range.js';
+import { USUAL } from '../schema/usual-ranges.js';
 
 export const liftCheckSchema = z
   .object({
     envelope: envelopeSchema,
     envelopeMass: envelopeMassSchema,
-    payloadMassKg: quantity('mass', 0, 10000, 'payload hanging below the envelope'),
+    payloadMassKg: usually(
+      quantity('mass', 0, 10000, 'payload hanging below the envelope'),
+      USUAL.payloadMassKg,
+    ),
     gas: gasSchema,
     ambient: ambientSchema,
   })

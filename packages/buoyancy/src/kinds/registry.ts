@@ -1,7 +1,9 @@
 import * as z from 'zod';
 import type { CalculationResult } from '../derivation.js';
 import { InputError } from '../errors.js';
+import type { ReadableOptions } from '../schema/field-info.js';
 import { parseInputs } from '../schema/parse-inputs.js';
+import { plausibilityNotes } from '../schema/plausibility.js';
 import { ambientAirKind } from './ambient-air.kind.js';
 import { balloonRulesKind } from './balloon-rules.kind.js';
 import { envelopeGeometryKind } from './envelope-geometry.kind.js';
@@ -41,16 +43,29 @@ const byId = new Map<string, CalculationKind>(
   KIND_LIST.map((kind) => [kind.id, kind as unknown as CalculationKind]),
 );
 
+const jsonSchemas = new Map<string, Record<string, unknown>>();
+
+/** A kind's inputs as JSON Schema, built once: evaluate reads it on every call. */
+function jsonSchemaOf(kind: CalculationKind): Record<string, unknown> {
+  let schema = jsonSchemas.get(kind.id);
+  if (!schema) {
+    schema = z.toJSONSchema(kind.schema, { io: 'input', unrepresentable: 'any' }) as Record<
+      string,
+      unknown
+    >;
+    jsonSchemas.set(kind.id, schema);
+  }
+  return schema;
+}
+
 /** Every calculation kind the engine offers. */
 export const KINDS: readonly KindDescription[] = KIND_LIST.map((kind) => ({
   id: kind.id,
   title: kind.title,
   description: kind.description,
   get inputSchema() {
-    return z.toJSONSchema(kind.schema, { io: 'input', unrepresentable: 'any' }) as Record<
-      string,
-      unknown
-    >;
+    // A fresh copy each time: callers may not change the one evaluate reads.
+    return structuredClone(jsonSchemaOf(kind as unknown as CalculationKind));
   },
   example: kind.example,
 }));
@@ -61,17 +76,33 @@ export function isKindId(value: unknown): value is KindId {
   return typeof value === 'string' && byId.has(value);
 }
 
+export interface EvaluateOptions {
+  /**
+   * Units and number format the "check this" notes are written in: the reader's, in a browser.
+   * Without it they are written in SI with a decimal point, as the server records them.
+   */
+  readonly display?: ReadableOptions;
+}
+
 /**
  * Evaluates a calculation of the given kind: validates the inputs against the kind's schema
- * (defaults filled in), computes outputs, derivation steps and warnings.
+ * (defaults filled in), computes outputs, derivation steps and warnings, and adds a "check this"
+ * note for every value outside what the trade usually meets.
  * @throws InputError naming the field for an unknown kind or any invalid input
  */
-export function evaluate(kindId: string, inputs: unknown): CalculationResult {
+export function evaluate(
+  kindId: string,
+  inputs: unknown,
+  options: EvaluateOptions = {},
+): CalculationResult {
   const kind = byId.get(kindId);
   if (!kind) {
     throw new InputError('kind', kindId, `must be one of: ${[...byId.keys()].join(', ')}`);
   }
-  return kind.compute(parseInputs(kind.schema, inputs));
+  const parsed = parseInputs(kind.schema, inputs);
+  const result = kind.compute(parsed);
+  const notes = plausibilityNotes(jsonSchemaOf(kind), parsed, options.display);
+  return notes.length === 0 ? result : { ...result, warnings: [...result.warnings, ...notes] };
 }
 
 /** Inputs with every default filled in, as the engine reads them (for storage and diffs). */

@@ -5,6 +5,8 @@ import {
   TEMPERATURE_OFFSET_RANGE_K,
 } from '../atmosphere/standard-atmosphere.js';
 import { fraction, quantity } from './quantity-schema.js';
+import { usually } from './usual-range.js';
+import { USUAL } from './usual-ranges.js';
 
 export const humiditySchema = z
   .discriminatedUnion('kind', [
@@ -54,17 +56,23 @@ export const ambientSchema = z
     z
       .object({
         mode: z.literal('measured'),
-        temperatureK: quantity(
-          'temperature',
-          AIR_TEMPERATURE_RANGE_K.min,
-          AIR_TEMPERATURE_RANGE_K.max,
-          'air temperature',
+        temperatureK: usually(
+          quantity(
+            'temperature',
+            AIR_TEMPERATURE_RANGE_K.min,
+            AIR_TEMPERATURE_RANGE_K.max,
+            'air temperature',
+          ),
+          USUAL.fillAirTemperatureK,
         ),
-        pressurePa: quantity(
-          'pressure',
-          AIR_PRESSURE_RANGE_PA.min,
-          AIR_PRESSURE_RANGE_PA.max,
-          'absolute air pressure',
+        pressurePa: usually(
+          quantity(
+            'pressure',
+            AIR_PRESSURE_RANGE_PA.min,
+            AIR_PRESSURE_RANGE_PA.max,
+            'absolute air pressure',
+          ),
+          USUAL.fillAirPressurePa,
         ),
         humidity: humiditySchema,
       })

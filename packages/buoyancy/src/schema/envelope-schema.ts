@@ -1,19 +1,29 @@
 import * as z from 'zod';
 import { ENVELOPE_SIZE_RANGE_M } from '../envelope/envelope-geometry.js';
 import { quantity } from './quantity-schema.js';
+import { type UsualRange, usually } from './usual-range.js';
+import { USUAL } from './usual-ranges.js';
 
-const size = (description: string) =>
-  quantity('length', ENVELOPE_SIZE_RANGE_M.min, ENVELOPE_SIZE_RANGE_M.max, description);
+const size = (description: string, usual: UsualRange = USUAL.envelopeAcrossM) =>
+  usually(
+    quantity('length', ENVELOPE_SIZE_RANGE_M.min, ENVELOPE_SIZE_RANGE_M.max, description),
+    usual,
+  );
 
 /** An envelope's shape and the measurement it is given by. */
 export const envelopeSchema = z
   .discriminatedUnion('shape', [
     z.object({ shape: z.literal('sphere'), diameterM: size('diameter') }).strict(),
-    z.object({ shape: z.literal('sphere-radius'), radiusM: size('radius') }).strict(),
+    z
+      .object({ shape: z.literal('sphere-radius'), radiusM: size('radius', USUAL.envelopeRadiusM) })
+      .strict(),
     z
       .object({
         shape: z.literal('sphere-circumference'),
-        circumferenceM: quantity('length', 0.03, 1600, 'measured circumference at the equator'),
+        circumferenceM: usually(
+          quantity('length', 0.03, 1600, 'measured circumference at the equator'),
+          USUAL.envelopeCircumferenceM,
+        ),
       })
       .strict(),
     z
@@ -27,11 +37,9 @@ export const envelopeSchema = z
       .object({
         shape: z.literal('capsule'),
         diameterM: size('diameter of the cylinder and its hemispherical ends'),
-        lengthM: quantity(
-          'length',
-          ENVELOPE_SIZE_RANGE_M.min,
-          2000,
-          'overall length, ends included',
+        lengthM: usually(
+          quantity('length', ENVELOPE_SIZE_RANGE_M.min, 2000, 'overall length, ends included'),
+          USUAL.envelopeLengthM,
         ),
       })
       .strict(),
@@ -41,7 +49,7 @@ export const envelopeSchema = z
     z
       .object({
         shape: z.literal('custom'),
-        volumeM3: quantity('volume', 1e-6, 1e7, 'envelope volume'),
+        volumeM3: usually(quantity('volume', 1e-6, 1e7, 'envelope volume'), USUAL.envelopeVolumeM3),
         surfaceAreaM2: quantity(
           'area',
           1e-6,

@@ -3,15 +3,16 @@ import { GAS_IDS } from '../gas/gas-catalogue.js';
 import { MIN_PURITY } from '../gas/lifting-gas-density.js';
 import { gasChoice } from './choice-schema.js';
 import { fraction, quantity } from './quantity-schema.js';
+import { usually } from './usual-range.js';
+import { USUAL } from './usual-ranges.js';
 
 /** The gas in the envelope, relative to the air around it. */
 export const gasSchema = z
   .object({
     gasId: gasChoice(GAS_IDS, 'lifting gas'),
-    purity: fraction(
-      'mole fraction of the named gas in the dry gas; the rest is air',
-      MIN_PURITY,
-      1,
+    purity: usually(
+      fraction('mole fraction of the named gas in the dry gas; the rest is air', MIN_PURITY, 1),
+      USUAL.gasPurity,
     ).default(1),
     superheatK: quantity(
       'temperatureDifference',

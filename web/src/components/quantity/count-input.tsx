@@ -1,4 +1,4 @@
-import { formatNumber, parseCount } from '@loftwright/buoyancy';
+import { formatNumber, parseCount, plainEditText } from '@loftwright/buoyancy';
 import { ReadingInput } from '@/components/reading/reading-input';
 import { useReadingPreferences } from '@/components/reading/reading-preferences';
 
@@ -10,6 +10,8 @@ export interface CountInputProps {
   min: number;
   max: number;
   externalProblem?: string;
+  /** A \"check this\" note for a value that is allowed but seldom met. */
+  note?: string;
   id?: string;
   disabled?: boolean;
 }
@@ -22,12 +24,15 @@ export function CountInput({
   min,
   max,
   externalProblem,
+  note,
   id,
   disabled,
 }: CountInputProps) {
   const { numberFormat } = useReadingPreferences();
   const whole = (next: number, grouping: boolean) =>
-    formatNumber(next, numberFormat, { significantDigits: 15, trimZeros: true, grouping });
+    grouping
+      ? formatNumber(next, numberFormat, { significantDigits: 15, trimZeros: true })
+      : plainEditText(next, numberFormat);
   return (
     <ReadingInput
       id={id}
@@ -37,6 +42,7 @@ export function CountInput({
       disabled={disabled}
       displayKey={numberFormat}
       externalProblem={externalProblem}
+      note={note}
       display={(next) => whole(next, false)}
       read={(text) => {
         const next = parseCount(text, { numberFormat, field: label });

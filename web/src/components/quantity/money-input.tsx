@@ -1,4 +1,4 @@
-import { formatNumber, parseMoney } from '@loftwright/buoyancy';
+import { formatNumber, parseMoney, plainEditText } from '@loftwright/buoyancy';
 import { ReadingInput } from '@/components/reading/reading-input';
 import { useReadingPreferences } from '@/components/reading/reading-preferences';
 
@@ -14,6 +14,8 @@ export interface MoneyInputProps {
   /** Largest amount accepted (the same limit the server checks). */
   max?: number;
   externalProblem?: string;
+  /** A \"check this\" note for a value that is allowed but seldom met. */
+  note?: string;
   id?: string;
   disabled?: boolean;
 }
@@ -30,12 +32,16 @@ export function MoneyInput({
   per,
   max,
   externalProblem,
+  note,
   id,
   disabled,
 }: MoneyInputProps) {
   const { numberFormat } = useReadingPreferences();
+  // Every digit typed is kept in the text to edit; "read as" groups thousands for reading.
   const amount = (value: number, grouping: boolean) =>
-    formatNumber(value, numberFormat, { significantDigits: 6, trimZeros: true, grouping });
+    grouping
+      ? formatNumber(value, numberFormat, { significantDigits: 15, trimZeros: true })
+      : plainEditText(value, numberFormat);
   const unit = `${currency}${per ? `/${per}` : ''}`;
   return (
     <ReadingInput
@@ -46,6 +52,7 @@ export function MoneyInput({
       disabled={disabled}
       displayKey={`${numberFormat}/${unit}`}
       externalProblem={externalProblem}
+      note={note}
       placeholder={`${amount(0.25, false)} ${unit}`}
       display={(next) => amount(next, false)}
       read={(text) => {

@@ -2,6 +2,7 @@ import {
   type Dimension,
   formatQuantity,
   formatRange,
+  quantityEditText,
   readQuantity,
   type UnitSystem,
 } from '@loftwright/buoyancy';
@@ -21,6 +22,8 @@ export interface QuantityInputProps {
   range?: { min: number; max: number };
   /** A problem found by the form's check or the server, shown when the text itself reads. */
   externalProblem?: string;
+  /** A \"check this\" note for a value that is allowed but seldom met. */
+  note?: string;
   id?: string;
   disabled?: boolean;
 }
@@ -39,6 +42,7 @@ export function QuantityInput({
   unitSystem,
   range,
   externalProblem,
+  note,
   id,
   disabled,
 }: QuantityInputProps) {
@@ -60,13 +64,7 @@ export function QuantityInput({
   }
   const bareUnit = typedUnit ?? shownUnit;
   const shown = (valueSI: number, unit?: string) =>
-    formatQuantity(valueSI, dimension, unitSystem, {
-      unit,
-      numberFormat,
-      significantDigits: 6,
-      trimZeros: true,
-      grouping: false,
-    }).text;
+    quantityEditText(valueSI, dimension, unitSystem, numberFormat, unit);
   const unitSymbol = (unit: string) => formatQuantity(0, dimension, unitSystem, { unit }).unit;
 
   return (
@@ -77,6 +75,7 @@ export function QuantityInput({
       disabled={disabled}
       displayKey={displayKey}
       externalProblem={externalProblem}
+      note={note}
       onChange={(next) => {
         // The field's own value coming back is no value from outside.
         setLastValue(next);

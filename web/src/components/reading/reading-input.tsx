@@ -24,6 +24,8 @@ export interface ReadingInputProps {
   check?: (value: number) => string | undefined;
   /** A problem found elsewhere (the engine's check of the whole form, the server). */
   externalProblem?: string;
+  /** A "check this" note: the value reads and is allowed but is seldom met. It never blocks. */
+  note?: string;
   /** Changes when values are shown differently (unit system, number format): the text is redone. */
   displayKey: string;
   id?: string;
@@ -44,6 +46,7 @@ export function ReadingInput({
   display,
   check,
   externalProblem,
+  note,
   displayKey,
   id,
   disabled,
@@ -54,6 +57,7 @@ export function ReadingInput({
   const [readAs, setReadAs] = useState<string | undefined>();
   const [problem, setProblem] = useState<string | undefined>();
   const hintId = useId();
+  const noteId = useId();
 
   // Values shown another way (unit system, number format): the text follows, as React
   // recommends, by adjusting state while rendering rather than in an effect.
@@ -98,14 +102,15 @@ export function ReadingInput({
   const unreadable = problem !== undefined && readAs === undefined;
   useReportUnreadable(unreadable ? { label, reason: problem } : undefined);
   const shownProblem = problem ?? externalProblem;
+  const shownNote = shownProblem ? undefined : note;
   return (
     <>
       <Input
         id={id}
         aria-label={label}
-        aria-describedby={hintId}
+        aria-describedby={shownNote ? `${hintId} ${noteId}` : hintId}
         aria-invalid={shownProblem ? true : undefined}
-        status={shownProblem ? 'error' : undefined}
+        status={shownProblem ? 'error' : shownNote ? 'warning' : undefined}
         value={text}
         disabled={disabled}
         placeholder={placeholder}
@@ -126,6 +131,18 @@ export function ReadingInput({
               ? `read as ${display(value)}`
               : ' '}
       </Typography.Text>
+      {shownNote ? (
+        // Ink, not the accent colour: the note must stay readable (the accent fails contrast).
+        <Typography.Text
+          id={noteId}
+          strong
+          style={{ fontSize: 12, display: 'block' }}
+          data-note="check-this"
+          aria-live="polite"
+        >
+          {shownNote}
+        </Typography.Text>
+      ) : null}
     </>
   );
 }

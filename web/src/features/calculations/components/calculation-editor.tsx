@@ -1,5 +1,6 @@
 import { Alert, App, Button, Col, Form, Input, Modal, Row, Space, Spin, Typography } from 'antd';
 import {
+  CHECK_THIS,
   evaluate,
   InputError,
   inputFieldInfo,
@@ -41,7 +42,20 @@ const CalculationCharts = lazy(() =>
 interface LiveResult {
   result?: CalculationResult;
   errors: Record<string, string>;
+  /** "Check this" notes by field path: values that are allowed but seldom met. */
+  notes: Record<string, string>;
   problem?: string;
+}
+
+const NO_NOTES: Record<string, string> = {};
+
+/** The engine's "check this" notes, by the field each is about. */
+function notesByField(result: CalculationResult): Record<string, string> {
+  const notes: Record<string, string> = {};
+  for (const warning of result.warnings) {
+    if (warning.code === CHECK_THIS && warning.field) notes[warning.field] = warning.message;
+  }
+  return notes;
 }
 
 /**
@@ -55,10 +69,16 @@ function evaluateLive(
   shownAs: { unitSystem: UnitSystem; numberFormat: NumberFormat },
 ): LiveResult {
   try {
-    return { result: evaluate(kind, inputs), errors: {} };
+    // Notes are written in the reader's units; the server records its own in SI.
+    const result = evaluate(kind, inputs, { display: shownAs });
+    return { result, errors: {}, notes: notesByField(result) };
   } catch (error) {
     if (!(error instanceof InputError))
-      return { errors: {}, problem: error instanceof Error ? error.message : String(error) };
+      return {
+        errors: {},
+        notes: NO_NOTES,
+        problem: error instanceof Error ? error.message : String(error),
+      };
     const errors: Record<string, string> = {};
     const sentences: string[] = [];
     for (const issue of error.issues) {
@@ -68,7 +88,7 @@ function evaluateLive(
       errors[issue.field] ??= field ? sentence.slice(field.label.length).trim() : sentence;
       sentences.push(sentence);
     }
-    return { errors, problem: `Results wait for: ${sentences.join('; ')}` };
+    return { errors, notes: NO_NOTES, problem: `Results wait for: ${sentences.join('; ')}` };
   }
 }
 
@@ -144,7 +164,7 @@ export function EditorBody({
   const live = useMemo(
     () =>
       deferredInputs === undefined || !kind
-        ? { errors: {} }
+        ? { errors: {}, notes: NO_NOTES }
         : evaluateLive(kind, deferredInputs, schema, { unitSystem, numberFormat }),
     [kind, deferredInputs, schema, unitSystem, numberFormat],
   );
@@ -230,6 +250,7 @@ export function EditorBody({
                   onChange={setInputs}
                   unitSystem={unitSystem}
                   errors={live.errors}
+                  notes={live.notes}
                   disabled={!editable}
                 />
               </UnreadableFieldsContext.Provider>
@@ -238,6 +259,16 @@ export function EditorBody({
               <Button style={{ marginBottom: 12 }} onClick={() => setMeterOpen(true)}>
                 Energy from a meter log (CSV)
               </Button>
+            ) : null}
+            {editable && dirty && Object.keys(live.notes).length > 0 ? (
+              <Alert
+                type="warning"
+                showIcon
+                role="status"
+                title={`Check before saving: ${Object.keys(live.notes).length === 1 ? 'one value lies' : `${Object.keys(live.notes).length} values lie`} outside what is usually met.`}
+                description="They are kept as typed, and the notes are recorded with the version."
+                style={{ marginBottom: 8 }}
+              />
             ) : null}
             {editable ? (
               <Space orientation="vertical" style={{ width: '100%' }}>

@@ -15,6 +15,8 @@ export interface NumberFieldProps {
   onChange: (value: number | undefined) => void;
   unitSystem: UnitSystem;
   problem?: string;
+  /** A "check this" note from the engine for a value it seldom meets. */
+  note?: string;
   /** Currency of money fields here. */
   currency?: string;
   disabled?: boolean;
@@ -29,12 +31,13 @@ export function NumberField({
   onChange,
   unitSystem,
   problem,
+  note,
   currency,
   disabled,
 }: NumberFieldProps) {
   const min = typeof schema.minimum === 'number' ? schema.minimum : -Infinity;
   const max = typeof schema.maximum === 'number' ? schema.maximum : Infinity;
-  const common = { id, label, value, onChange, disabled, externalProblem: problem };
+  const common = { id, label, value, onChange, disabled, externalProblem: problem, note };
   if (schema.dimension === 'money') {
     const per = schema.moneyPer === 'kWh' || schema.moneyPer === 'm³' ? schema.moneyPer : undefined;
     return <MoneyInput {...common} currency={currency ?? ''} per={per} max={max} />;

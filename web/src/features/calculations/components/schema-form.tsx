@@ -32,6 +32,8 @@ function defaultsOf(schema: Schema): Value {
   return result;
 }
 
+const NO_NOTES: Record<string, string> = {};
+
 export interface SchemaFieldProps {
   name: string;
   path: string;
@@ -41,6 +43,8 @@ export interface SchemaFieldProps {
   unitSystem: UnitSystem;
   /** Messages by field path, from the engine's live check or the server. */
   errors: Record<string, string>;
+  /** "Check this" notes by field path, for values the engine seldom meets. */
+  notes?: Record<string, string>;
   required?: boolean;
   disabled?: boolean;
   /** Currency of the money fields in this part of the form (a sibling `currency` field). */
@@ -56,6 +60,7 @@ export function SchemaField({
   onChange,
   unitSystem,
   errors,
+  notes = NO_NOTES,
   required = true,
   disabled,
   currency,
@@ -107,6 +112,7 @@ export function SchemaField({
           onChange={onChange}
           unitSystem={unitSystem}
           errors={errors}
+          notes={notes}
           disabled={disabled}
           currency={currency}
         />
@@ -126,6 +132,7 @@ export function SchemaField({
           onChange={onChange}
           unitSystem={unitSystem}
           errors={errors}
+          notes={notes}
           disabled={disabled}
           currency={currency}
         />
@@ -150,6 +157,7 @@ export function SchemaField({
           onChange={onChange}
           unitSystem={unitSystem}
           problem={help}
+          note={notes[path]}
           currency={currency}
           disabled={disabled}
         />
@@ -219,6 +227,7 @@ export function SchemaField({
             onChange={onItemChange}
             unitSystem={unitSystem}
             errors={errors}
+            notes={notes}
             disabled={disabled}
           />
         )}
@@ -248,6 +257,7 @@ function ObjectFields({
   onChange,
   unitSystem,
   errors,
+  notes,
   disabled,
   currency,
 }: Omit<SchemaFieldProps, 'name' | 'required'> & { value: Value }) {
@@ -268,6 +278,7 @@ function ObjectFields({
             onChange={(next) => onChange({ ...value, [key]: next })}
             unitSystem={unitSystem}
             errors={errors}
+            notes={notes}
             required={required.has(key) || child.default !== undefined}
             disabled={disabled}
             currency={sectionCurrency}
