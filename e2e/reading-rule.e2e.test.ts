@@ -183,6 +183,23 @@ describe('typed values are read as meant, in every number format', () => {
     expect(latest.warnings.map((warning) => warning.code)).toContain('check-this');
   });
 
+  it('shows results, derivation and charts in the person’s number format', async () => {
+    screenshotOnFailure(() => page, 'reading-rule-display');
+    await useNumberFormat('comma-space');
+    await openEditor(ids.lift ?? '');
+    // Air at 15 °C and 101 325 Pa is about 1.225 kg/m³ (U.S. Standard Atmosphere 1976, Table I).
+    await expect
+      .poll(() => page.locator('[data-output="airDensity"]').textContent())
+      .toMatch(/1,22\d kg\/m³/);
+    const derivation = page.getByRole('list', { name: 'Derivation steps' });
+    expect(await derivation.textContent()).toContain('p = 101\u202f325 Pa');
+    await useNumberFormat('point-comma');
+    await page.reload();
+    await expect
+      .poll(() => page.locator('[data-output="airDensity"]').textContent())
+      .toMatch(/1\.22\d kg\/m³/);
+  });
+
   it('names a range in °C for a Celsius field', async () => {
     screenshotOnFailure(() => page, 'reading-rule-5');
     await openEditor(ids.lift ?? '');

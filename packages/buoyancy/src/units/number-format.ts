@@ -24,6 +24,8 @@ export interface NumberDisplayOptions {
   readonly grouping?: boolean;
   /** Drop zeros after the decimal mark that add nothing: 1.500 -> 1.5 (default false). */
   readonly trimZeros?: boolean;
+  /** A fixed number of decimals instead of significant digits (chart ticks, percentages). */
+  readonly decimals?: number;
 }
 
 const MINUS = '\u2212';
@@ -42,7 +44,10 @@ export function formatNumber(
 ): string {
   if (!Number.isFinite(value)) return String(value);
   const digits = options.significantDigits ?? 4;
-  const plain = fixedText(value, digits);
+  const plain =
+    options.decimals !== undefined
+      ? value.toFixed(Math.max(0, Math.min(options.decimals, 12)))
+      : fixedText(value, digits);
   const trimmed =
     options.trimZeros && plain.includes('.') ? plain.replace(/0+$/, '').replace(/\.$/, '') : plain;
   const negative = trimmed.startsWith('-');

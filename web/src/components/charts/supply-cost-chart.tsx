@@ -12,6 +12,7 @@ import {
 } from 'recharts';
 import { ChartFrame } from './chart-frame';
 import { supplyCostsPerFill } from './supply-costs';
+import { usePlainNumbers } from '@/components/reading/use-number-display';
 
 /** What one fill costs from each priced source, side by side. */
 export function SupplyCostChart({
@@ -26,9 +27,10 @@ export function SupplyCostChart({
   axisLabel?: string;
 }) {
   const { token } = theme.useToken();
+  const display = usePlainNumbers();
   const { currency, costs } = supplyCostsPerFill(result, inputs);
   if (costs.length === 0) return null;
-  const money = (value: number) => `${value.toFixed(2)} ${currency}`;
+  const money = (value: number) => `${display.fixed(value, 2)} ${currency}`;
   const description = `${title}: ${costs
     .map((cost) => `${cost.source} ${money(cost.perFill)}`)
     .join('; ')}`;
@@ -39,7 +41,7 @@ export function SupplyCostChart({
           <CartesianGrid stroke={token.colorBorder} vertical={false} />
           <XAxis dataKey="source" interval={0} tick={{ fontSize: 11 }} />
           <YAxis
-            tickFormatter={(value: number) => value.toFixed(value < 10 ? 1 : 0)}
+            tickFormatter={(value: number) => display.fixed(value, value < 10 ? 1 : 0)}
             label={{
               value: `${axisLabel} (${currency})`,
               angle: -90,
@@ -59,7 +61,9 @@ export function SupplyCostChart({
             <LabelList
               dataKey="perFill"
               position="top"
-              formatter={(value: unknown) => (typeof value === 'number' ? value.toFixed(2) : '')}
+              formatter={(value: unknown) =>
+                typeof value === 'number' ? display.fixed(value, 2) : ''
+              }
             />
           </Bar>
         </BarChart>

@@ -1,9 +1,12 @@
 import { Card, Typography } from 'antd';
 import type { DerivationStep } from '@loftwright/buoyancy';
-import { stepNumber as number } from './step-number';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
+import { stepNumber } from './step-number';
 
 /** Every step: what is computed, the formula, the numbers put in, the result, and its source. */
 export function DerivationPanel({ steps }: { steps: readonly DerivationStep[] }) {
+  const { numberFormat } = useReadingPreferences();
+  const number = (value: number) => stepNumber(value, numberFormat);
   return (
     <Card title="Derivation" size="small">
       <ol style={{ paddingLeft: 20, margin: 0 }} aria-label="Derivation steps">

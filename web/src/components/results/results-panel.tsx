@@ -1,6 +1,6 @@
 import { Alert, Card, Empty, List, Typography } from 'antd';
 import type { CalculationResult, UnitSystem } from '@loftwright/buoyancy';
-import { formatOutput } from '@/components/quantity/format-output';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 
 const SEVERITY = { caution: 'error', warning: 'warning', note: 'info' } as const;
 
@@ -16,6 +16,7 @@ export function ResultsPanel({
   title?: string;
   problem?: string;
 }) {
+  const show = useNumberDisplay(unitSystem);
   return (
     <Card title={title} size="small">
       <div role="status" aria-live="polite" aria-label={title}>
@@ -29,7 +30,7 @@ export function ResultsPanel({
             size="small"
             dataSource={Object.entries(result.outputs)}
             renderItem={([name, output]) => {
-              const shown = formatOutput(output.value, output.unit, unitSystem);
+              const shown = show.output(output.value, output.unit);
               return (
                 <List.Item key={name} data-output={name}>
                   <div style={{ width: '100%' }}>

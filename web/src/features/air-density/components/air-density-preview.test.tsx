@@ -18,11 +18,14 @@ describe('AirDensityPreview', () => {
 
     await user.clear(temperature);
     await user.type(temperature, '-150');
-    expect(screen.getByRole('status')).toHaveTextContent(
-      'Air temperature must be between -100 °C and 150 °C.',
-    );
+    // The engine's air range, 173.15–423.15 K, said in °C beside the field.
+    expect(
+      screen.getByText('Air temperature must be between \u2212100 °C and 150 °C'),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('status')).toHaveTextContent('The density waits for: air temperature.');
 
     await user.clear(temperature);
+    // A bare number is in the unit the field shows, °C.
     await user.type(temperature, '30');
     // Ideal-gas law with the 1976 constants: 101 325 Pa × 0.0289644 / (8.31432 × 303.15).
     expect(screen.getByRole('status')).toHaveTextContent('1.1644 kg/m³');

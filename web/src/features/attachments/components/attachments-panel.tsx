@@ -21,6 +21,7 @@ import {
 } from '../api/attachments-api';
 import { saveBlob } from '@/lib/save-blob';
 import { AttachmentPreview } from './attachment-preview';
+import { usePlainNumbers } from '@/components/reading/use-number-display';
 
 const TYPE_NAMES: Record<string, string> = {
   'image/jpeg': 'JPEG image',
@@ -32,12 +33,12 @@ const TYPE_NAMES: Record<string, string> = {
   'text/plain': 'Text',
 };
 
-const sizeText = (bytes: number) =>
+const sizeText = (bytes: number, fixed: (value: number, decimals: number) => string) =>
   bytes < 1024
     ? `${bytes} B`
     : bytes < 1024 * 1024
-      ? `${(bytes / 1024).toFixed(1)} kB`
-      : `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+      ? `${fixed(bytes / 1024, 1)} kB`
+      : `${fixed(bytes / (1024 * 1024), 1)} MB`;
 
 const previewable = (attachment: Attachment) =>
   attachment.mediaType.startsWith('image/') || attachment.mediaType.startsWith('text/');
@@ -60,6 +61,7 @@ export function AttachmentsPanel({
   title?: string;
 }) {
   const { message } = App.useApp();
+  const plain = usePlainNumbers();
   const attachments = useAttachments(calculationId);
   const upload = useUploadAttachment(calculationId);
   const remove = useRemoveAttachment(calculationId);
@@ -163,7 +165,11 @@ export function AttachmentsPanel({
                 ? (TYPE_NAMES[type] ?? type)
                 : `Sign-off sheet of version ${row.versionNumber}`,
           },
-          { title: 'Size', dataIndex: 'sizeBytes', render: sizeText },
+          {
+            title: 'Size',
+            dataIndex: 'sizeBytes',
+            render: (bytes: number) => sizeText(bytes, plain.fixed),
+          },
           {
             title: 'Added by',
             dataIndex: 'uploadedBy',

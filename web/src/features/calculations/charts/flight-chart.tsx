@@ -13,6 +13,7 @@ import {
   YAxis,
 } from 'recharts';
 import { ChartFrame } from '@/components/charts/chart-frame';
+import { usePlainNumbers } from '@/components/reading/use-number-display';
 
 /** Altitude and ascent rate against time, the end of the ascent (burst or float) marked. */
 export function FlightChart({
@@ -23,6 +24,7 @@ export function FlightChart({
   outputs: CalculationResult['outputs'];
 }) {
   const { token } = theme.useToken();
+  const display = usePlainNumbers();
   const ascent = series?.ascent;
   if (!ascent) return null;
   const column = (key: string) => ascent.columns.findIndex((candidate) => candidate.key === key);
@@ -43,7 +45,7 @@ export function FlightChart({
     <ChartFrame
       title="Flight profile"
       testId="flight"
-      description={`Altitude and vertical rate against time; ${endName} at ${end.km.toFixed(2)} km after ${end.minutes.toFixed(1)} min`}
+      description={`Altitude and vertical rate against time; ${endName} at ${display.fixed(end.km, 2)} km after ${display.fixed(end.minutes, 1)} min`}
     >
       <ResponsiveContainer>
         <LineChart data={points} margin={{ top: 8, right: 16, bottom: 24, left: 8 }}>
@@ -52,23 +54,25 @@ export function FlightChart({
             dataKey="minutes"
             type="number"
             domain={[0, 'dataMax']}
-            tickFormatter={(value: number) => value.toFixed(0)}
+            tickFormatter={(value: number) => display.fixed(value, 0)}
             label={{ value: 'Time (min)', position: 'insideBottom', offset: -12 }}
           />
           <YAxis
             yAxisId="km"
-            tickFormatter={(value: number) => value.toFixed(0)}
+            tickFormatter={(value: number) => display.fixed(value, 0)}
             label={{ value: 'Altitude (km)', angle: -90, position: 'insideLeft' }}
           />
           <YAxis
             yAxisId="rate"
             orientation="right"
-            tickFormatter={(value: number) => value.toFixed(0)}
+            tickFormatter={(value: number) => display.fixed(value, 0)}
             label={{ value: 'Vertical rate (m/s)', angle: 90, position: 'insideRight' }}
           />
           <Tooltip
-            formatter={(value) => (typeof value === 'number' ? value.toFixed(2) : String(value))}
-            labelFormatter={(label) => `${Number(label).toFixed(1)} min`}
+            formatter={(value) =>
+              typeof value === 'number' ? display.fixed(value, 2) : String(value)
+            }
+            labelFormatter={(label) => `${display.fixed(Number(label), 1)} min`}
           />
           <Legend verticalAlign="top" />
           <Line

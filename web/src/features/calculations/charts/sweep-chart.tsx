@@ -15,6 +15,7 @@ import {
 import { ChartFrame } from '@/components/charts/chart-frame';
 import type { LiftSweep } from './lift-sweeps';
 import { niceAxis, tickDecimals } from './nice-axis';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 
 /** A quantity's unit for a whole axis, picked by the size of a typical value on it. */
 function axisUnit(typicalSI: number, dimension: LiftSweep['xDimension'], unitSystem: UnitSystem) {
@@ -30,6 +31,7 @@ function axisUnit(typicalSI: number, dimension: LiftSweep['xDimension'], unitSys
  */
 export function SweepChart({ sweep, unitSystem }: { sweep: LiftSweep; unitSystem: UnitSystem }) {
   const { token } = theme.useToken();
+  const display = useNumberDisplay(unitSystem);
   const x = axisUnit(sweep.design.x, sweep.xDimension, unitSystem);
   const largestLiftKg = Math.max(...sweep.points.map((point) => Math.abs(point.netKg)));
   const lift = axisUnit(largestLiftKg, 'mass', unitSystem);
@@ -51,9 +53,9 @@ export function SweepChart({ sweep, unitSystem }: { sweep: LiftSweep; unitSystem
   );
   const xDecimals = tickDecimals(xTicks);
   const description =
-    `${sweep.title}: net and free lift from ${xDomain[0].toFixed(xDecimals)} to ` +
-    `${xDomain[1].toFixed(xDecimals)} ${x.unit}; design point ${design.x.toPrecision(3)} ${x.unit}, ` +
-    `free lift ${design.y.toPrecision(3)} ${lift.unit}`;
+    `${sweep.title}: net and free lift from ${display.fixed(xDomain[0], xDecimals)} to ` +
+    `${display.fixed(xDomain[1], xDecimals)} ${x.unit}; design point ${display.number(design.x, { significantDigits: 3 })} ${x.unit}, ` +
+    `free lift ${display.number(design.y, { significantDigits: 3 })} ${lift.unit}`;
   const guide = {
     stroke: token.colorWarning,
     strokeDasharray: '4 3',
@@ -70,23 +72,23 @@ export function SweepChart({ sweep, unitSystem }: { sweep: LiftSweep; unitSystem
             domain={xDomain}
             ticks={xTicks}
             allowDataOverflow
-            tickFormatter={(value: number) => value.toFixed(xDecimals)}
+            tickFormatter={(value: number) => display.fixed(value, xDecimals)}
             label={{ value: `${sweep.xLabel} (${x.unit})`, position: 'insideBottom', offset: -12 }}
           />
           <YAxis
             domain={yAxis.domain}
             ticks={yAxis.ticks}
             allowDataOverflow
-            tickFormatter={(value: number) => value.toFixed(yDecimals)}
+            tickFormatter={(value: number) => display.fixed(value, yDecimals)}
             label={{ value: `Lift (${lift.unit})`, angle: -90, position: 'insideLeft', offset: -4 }}
           />
           <Tooltip
             formatter={(value) =>
               typeof value === 'number'
-                ? `${value.toFixed(yDecimals + 1)} ${lift.unit}`
+                ? `${display.fixed(value, yDecimals + 1)} ${lift.unit}`
                 : String(value)
             }
-            labelFormatter={(label) => `${Number(label).toFixed(xDecimals + 1)} ${x.unit}`}
+            labelFormatter={(label) => `${display.fixed(Number(label), xDecimals + 1)} ${x.unit}`}
           />
           <Legend verticalAlign="top" />
           <ReferenceLine y={0} stroke={token.colorError} />

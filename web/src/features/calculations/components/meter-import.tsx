@@ -1,5 +1,6 @@
 import { Alert, Button, Form, Modal, Radio, Select, Space, Typography } from 'antd';
-import { formatQuantity, type NumberFormat, type UnitSystem } from '@loftwright/buoyancy';
+import type { NumberFormat, UnitSystem } from '@loftwright/buoyancy';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 import { useMemo, useState } from 'react';
 import { BadRowsList } from '@/components/csv/bad-rows-list';
 import { CsvFileInput } from '@/components/csv/csv-file-input';
@@ -39,6 +40,7 @@ export function MeterImport({
   const [valueColumn, setValueColumn] = useState('');
   const [valueUnit, setValueUnit] = useState<string>('W');
   const preferences = useReadingPreferences();
+  const display = useNumberDisplay(unitSystem);
   const [fileFormat, setFileFormat] = useState<NumberFormat>(preferences.numberFormat);
 
   const mapped = useMemo(() => {
@@ -145,7 +147,7 @@ export function MeterImport({
                   <Alert
                     type={mapped.bad.length > 0 ? 'warning' : 'success'}
                     showIcon
-                    title={`Energy used: ${formatQuantity(energy.energyJ, 'energy', unitSystem).text} over ${formatQuantity(energy.durationS, 'time', unitSystem).text}, mean power ${formatQuantity(energy.meanPowerW, 'power', unitSystem).text} (${energy.samples} samples).`}
+                    title={`Energy used: ${display.quantity(energy.energyJ, 'energy').text} over ${display.quantity(energy.durationS, 'time').text}, mean power ${display.quantity(energy.meanPowerW, 'power').text} (${display.number(energy.samples)} samples).`}
                   />
                 ) : null}
                 {mapped.bad.length > 0 ? (

@@ -1,6 +1,6 @@
 import { Empty, Table, Typography, theme } from 'antd';
 import type { UnitSystem } from '@loftwright/buoyancy';
-import { formatOutput } from '@/components/quantity/format-output';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 import type { VersionDiff } from '../api/calculations-api';
 
 const show = (value: unknown) =>
@@ -110,8 +110,9 @@ function Value({
   unit: string;
   unitSystem: UnitSystem;
 }) {
+  const show = useNumberDisplay(unitSystem);
   if (value === null) return <>—</>;
-  const shown = formatOutput(value, unit, unitSystem);
+  const shown = show.output(value, unit);
   return (
     <span className="lw-mono">
       {shown.value} {shown.unit}

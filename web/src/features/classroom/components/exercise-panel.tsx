@@ -3,13 +3,13 @@ import { Alert, Button, Card, Form, List, Space, Tag, theme, Typography } from '
 import { dimensionOfSIUnit, type UnitSystem } from '@loftwright/buoyancy';
 import { useState } from 'react';
 import { FormError } from '@/components/errors/form-error';
-import { formatOutputText } from '@/components/quantity/format-output';
+import { type NumberDisplay, useNumberDisplay } from '@/components/reading/use-number-display';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import { type ExampleDetail, type Submission, useSubmitAnswers } from '../api/classroom-api';
 
-function shown(value: number | null, unit: string, unitSystem: UnitSystem) {
+function shown(value: number | null, unit: string, show: NumberDisplay) {
   if (value === null) return '—';
-  return formatOutputText(value, unit, unitSystem);
+  return show.outputText(value, unit);
 }
 
 /** The engine's verdict on one attempt: each answer right or wrong, and where it went wrong. */
@@ -23,6 +23,7 @@ export function SubmissionResult({
   unitSystem: UnitSystem;
 }) {
   const { token } = theme.useToken();
+  const show = useNumberDisplay(unitSystem);
   const { check } = submission;
   const wrongIndex = steps.findIndex((step) => step.id === check.firstWrongStepId);
   return (
@@ -65,12 +66,10 @@ export function SubmissionResult({
                 {answer.correct ? 'right' : 'wrong'}
               </Tag>
               <span>
-                yours{' '}
-                <span className="lw-mono">{shown(answer.given, answer.unit, unitSystem)}</span>,
-                engine{' '}
-                <span className="lw-mono">{shown(answer.expected, answer.unit, unitSystem)}</span>
+                yours <span className="lw-mono">{shown(answer.given, answer.unit, show)}</span>,
+                engine <span className="lw-mono">{shown(answer.expected, answer.unit, show)}</span>
                 {answer.relativeError !== null
-                  ? ` (${(answer.relativeError * 100).toFixed(2)} % off)`
+                  ? ` (${show.fixed(answer.relativeError * 100, 2)} % off)`
                   : ''}
               </span>
             </Space>

@@ -10,7 +10,7 @@ import {
   withNumberAtPath,
 } from '@loftwright/buoyancy';
 import { useState } from 'react';
-import { formatOutputText } from '@/components/quantity/format-output';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import type { TryRanges } from '../api/classroom-api';
@@ -41,6 +41,7 @@ export function TryItYourself({
   unitSystem: UnitSystem;
 }) {
   const { numberFormat } = useReadingPreferences();
+  const show = useNumberDisplay(unitSystem);
   const [changes, setChanges] = useState<Record<string, number | undefined>>({});
   // Bumped on reset so the quantity fields show the original values again.
   const [generation, setGeneration] = useState(0);
@@ -171,7 +172,7 @@ export function TryItYourself({
               render: (_: unknown, row) => {
                 return (
                   <span className="lw-mono">
-                    {formatOutputText(row.original.value, row.original.unit, unitSystem)}
+                    {show.outputText(row.original.value, row.original.unit)}
                   </span>
                 );
               },
@@ -183,7 +184,7 @@ export function TryItYourself({
                 if (!row.yours) return '—';
                 return (
                   <span className="lw-mono" data-yours={row.name}>
-                    {formatOutputText(row.yours.value, row.yours.unit, unitSystem)}
+                    {show.outputText(row.yours.value, row.yours.unit)}
                   </span>
                 );
               },
@@ -196,7 +197,7 @@ export function TryItYourself({
                 const percent =
                   ((row.yours.value - row.original.value) / Math.abs(row.original.value)) * 100;
                 return (
-                  <span className="lw-mono">{`${percent >= 0 ? '+' : ''}${percent.toFixed(1)} %`}</span>
+                  <span className="lw-mono">{`${percent >= 0 ? '+' : ''}${show.fixed(percent, 1)} %`}</span>
                 );
               },
             },

@@ -1,7 +1,9 @@
 import { FullscreenOutlined, LeftOutlined, RightOutlined } from '@ant-design/icons';
 import { Button, Progress, Space, Tag, theme, Typography } from 'antd';
+import type { NumberFormat } from '@loftwright/buoyancy';
 import { type ReactNode, useEffect, useRef, useState } from 'react';
 import { stepNumber } from '@/components/results/step-number';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import type { ExampleStep } from '../api/classroom-api';
 import {
   actionForKey,
@@ -12,8 +14,8 @@ import {
   walkProgressPercent,
 } from '../lib/walk-through-state';
 
-const shown = (value: number | null, unit: string) =>
-  value === null ? '?' : `${stepNumber(value)}${unit ? ` ${unit}` : ''}`;
+const shown = (value: number | null, unit: string, numberFormat: NumberFormat) =>
+  value === null ? '?' : `${stepNumber(value, numberFormat)}${unit ? ` ${unit}` : ''}`;
 
 function StepBody({
   step,
@@ -27,6 +29,7 @@ function StepBody({
   note: string | undefined;
   fontSize: number;
 }) {
+  const { numberFormat } = useReadingPreferences();
   return (
     <>
       <div className="lw-mono" style={{ fontSize }} data-part="formula">
@@ -35,13 +38,14 @@ function StepBody({
       {stageIndex >= 1 && step.values.length > 0 ? (
         <div className="lw-mono" style={{ fontSize: fontSize * 0.8 }} data-part="values">
           {step.values
-            .map((value) => `${value.symbol} = ${shown(value.value, value.unit)}`)
+            .map((value) => `${value.symbol} = ${shown(value.value, value.unit, numberFormat)}`)
             .join(', ')}
         </div>
       ) : null}
       {stageIndex >= 2 ? (
         <div className="lw-mono" style={{ fontSize, fontWeight: 600 }} data-part="result">
-          → {step.result.symbol} = {step.hidden ? '?' : shown(step.result.value, step.result.unit)}
+          → {step.result.symbol} ={' '}
+          {step.hidden ? '?' : shown(step.result.value, step.result.unit, numberFormat)}
           {step.hidden ? (
             <Typography.Text type="secondary" style={{ fontSize: fontSize * 0.6, marginLeft: 12 }}>
               your turn: work this out in the exercise

@@ -12,6 +12,7 @@ import {
   YAxis,
 } from 'recharts';
 import type { FillLog } from '../api/fill-logs-api';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 
 /** Hours for a day's readings, days for a week's. */
 const timeScale = (spanS: number) =>
@@ -20,6 +21,7 @@ const timeScale = (spanS: number) =>
 /** Measured net lift as dots, the prediction at each reading's air as a line, against time. */
 export function FillLogChart({ log, unitSystem }: { log: FillLog; unitSystem: UnitSystem }) {
   const { token } = theme.useToken();
+  const display = useNumberDisplay(unitSystem);
   const points = [...log.points].sort((a, b) => a.timeS - b.timeS);
   const span = (points.at(-1)?.timeS ?? 0) - (points[0]?.timeS ?? 0);
   const time = timeScale(span);
@@ -36,10 +38,10 @@ export function FillLogChart({ log, unitSystem }: { log: FillLog; unitSystem: Un
   const first = data[0];
   const description =
     `Measured${hasPrediction ? ' and predicted' : ''} net lift over ${data.length} readings; ` +
-    `first reading ${first?.measured.toPrecision(3)} ${mass.unit}` +
+    `first reading ${display.number(first?.measured ?? Number.NaN, { significantDigits: 3 })} ${mass.unit}` +
     (first?.predicted === undefined
       ? ''
-      : ` against ${first.predicted.toPrecision(3)} ${mass.unit} predicted`);
+      : ` against ${display.number(first.predicted, { significantDigits: 3 })} ${mass.unit} predicted`);
   return (
     <Card
       title="Measured against predicted lift"
@@ -55,7 +57,7 @@ export function FillLogChart({ log, unitSystem }: { log: FillLog; unitSystem: Un
               dataKey="t"
               type="number"
               domain={['dataMin', 'dataMax']}
-              tickFormatter={(value: number) => value.toFixed(span === 0 ? 0 : 1)}
+              tickFormatter={(value: number) => display.fixed(value, span === 0 ? 0 : 1)}
               label={{
                 value: `Time since filling (${time.unit})`,
                 position: 'insideBottom',
@@ -64,7 +66,7 @@ export function FillLogChart({ log, unitSystem }: { log: FillLog; unitSystem: Un
             />
             <YAxis
               domain={['auto', 'auto']}
-              tickFormatter={(value: number) => value.toPrecision(3)}
+              tickFormatter={(value: number) => display.number(value, { significantDigits: 3 })}
               label={{
                 value: `Net lift (${mass.unit})`,
                 angle: -90,
@@ -74,9 +76,11 @@ export function FillLogChart({ log, unitSystem }: { log: FillLog; unitSystem: Un
             />
             <Tooltip
               formatter={(value) =>
-                typeof value === 'number' ? `${value.toPrecision(4)} ${mass.unit}` : String(value)
+                typeof value === 'number'
+                  ? `${display.number(value, { significantDigits: 4 })} ${mass.unit}`
+                  : String(value)
               }
-              labelFormatter={(label) => `${Number(label).toFixed(2)} ${time.unit}`}
+              labelFormatter={(label) => `${display.fixed(Number(label), 2)} ${time.unit}`}
             />
             <Legend verticalAlign="top" />
             {hasPrediction ? (

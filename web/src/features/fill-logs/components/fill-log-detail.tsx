@@ -1,17 +1,12 @@
 import { Button, Col, Collapse, Descriptions, Popconfirm, Row, Space, Table } from 'antd';
-import { formatQuantity, type FillReading, type UnitSystem } from '@loftwright/buoyancy';
+import type { FillReading, UnitSystem } from '@loftwright/buoyancy';
 import { type ReactNode, useState } from 'react';
 import { DerivationPanel } from '@/components/results/derivation-panel';
 import { ResultsPanel } from '@/components/results/results-panel';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 import { type FillLog, GAS_SOURCES, useRemoveFillLog } from '../api/fill-logs-api';
 import { FillLogChart } from './fill-log-chart';
 import { ReadingsImport } from './readings-import';
-
-const show = (
-  value: number | undefined,
-  dimension: 'mass' | 'time' | 'temperature' | 'pressure',
-  unitSystem: UnitSystem,
-) => (value === undefined ? '—' : formatQuantity(value, dimension, unitSystem).text);
 
 /** One fill: what was logged, the server's reduction, the chart, the readings and their files. */
 export function FillLogDetail({
@@ -26,6 +21,11 @@ export function FillLogDetail({
   files?: ReactNode;
 }) {
   const [importing, setImporting] = useState(false);
+  const display = useNumberDisplay(unitSystem);
+  const show = (
+    value: number | undefined,
+    dimension: 'mass' | 'time' | 'temperature' | 'pressure',
+  ) => (value === undefined ? '—' : display.quantity(value, dimension).text);
   const remove = useRemoveFillLog(log.calculationId);
   return (
     <section aria-label={`Fill log of ${new Date(log.filledAt).toLocaleString()}`}>
@@ -45,7 +45,7 @@ export function FillLogDetail({
           {
             key: 'air',
             label: 'Air',
-            children: `${show(log.ambient.temperatureK, 'temperature', unitSystem)}, ${show(log.ambient.pressurePa, 'pressure', unitSystem)}${log.ambient.relativeHumidity === undefined ? ', dry' : `, ${(log.ambient.relativeHumidity * 100).toFixed(0)} % RH`}`,
+            children: `${show(log.ambient.temperatureK, 'temperature')}, ${show(log.ambient.pressurePa, 'pressure')}${log.ambient.relativeHumidity === undefined ? ', dry' : `, ${display.fixed(log.ambient.relativeHumidity * 100, 0)} % RH`}`,
           },
           { key: 'version', label: 'Against version', children: `v${log.versionNumber}` },
         ]}
@@ -71,15 +71,15 @@ export function FillLogDetail({
               {
                 title: 'Time since filling',
                 dataIndex: 'timeS',
-                render: (t: number) => show(t, 'time', unitSystem),
+                render: (t: number) => show(t, 'time'),
               },
               {
                 title: 'Ballast − scale',
                 key: 'lift',
                 render: (_: unknown, row) =>
                   row.kind === 'ballast'
-                    ? `${show(row.ballastMassKg, 'mass', unitSystem)} − ${show(row.scaleReadingKg, 'mass', unitSystem)}`
-                    : `${show(row.netLiftKg, 'mass', unitSystem)} (direct)`,
+                    ? `${show(row.ballastMassKg, 'mass')} − ${show(row.scaleReadingKg, 'mass')}`
+                    : `${show(row.netLiftKg, 'mass')} (direct)`,
               },
               {
                 title: 'Air',
@@ -90,10 +90,8 @@ export function FillLogDetail({
                     : [
                         row.airTemperatureK === undefined
                           ? ''
-                          : show(row.airTemperatureK, 'temperature', unitSystem),
-                        row.pressurePa === undefined
-                          ? ''
-                          : show(row.pressurePa, 'pressure', unitSystem),
+                          : show(row.airTemperatureK, 'temperature'),
+                        row.pressurePa === undefined ? '' : show(row.pressurePa, 'pressure'),
                       ]
                         .filter(Boolean)
                         .join(', '),

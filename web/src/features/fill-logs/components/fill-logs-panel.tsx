@@ -1,14 +1,12 @@
 import { Button, Card, Space, Table, Typography } from 'antd';
-import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
+import type { UnitSystem } from '@loftwright/buoyancy';
 import { type ReactNode, useState } from 'react';
 import { ExportButton } from '@/components/export/export-button';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 import { type FillLog, useFillLogs } from '../api/fill-logs-api';
 import { useCalculationVersion } from '../api/get-calculation-version';
 import { FillLogDetail } from './fill-log-detail';
 import { FillLogForm, type FillLogVersion } from './fill-log-form';
-
-const mass = (value: number | undefined, unitSystem: UnitSystem) =>
-  value === undefined ? '—' : formatQuantity(value, 'mass', unitSystem).text;
 
 /**
  * The fills logged against a calculation's versions, newest first; each opens to its reduction,
@@ -31,6 +29,9 @@ export function FillLogsPanel({
   filesFor?: (log: FillLog) => ReactNode;
 }) {
   const logs = useFillLogs(calculationId);
+  const display = useNumberDisplay(unitSystem);
+  const mass = (value: number | undefined) =>
+    value === undefined ? '—' : display.quantity(value, 'mass').text;
   // The version a new fill is logged against, fixed when the dialog opens: a version saved
   // meanwhile neither moves the log nor resets what has been typed.
   const [loggingVersion, setLoggingVersion] = useState<number>();
@@ -108,19 +109,19 @@ export function FillLogsPanel({
           {
             title: 'Measured net lift',
             key: 'measured',
-            render: (_: unknown, log) => mass(log.outputs.measuredNetLift?.value, unitSystem),
+            render: (_: unknown, log) => mass(log.outputs.measuredNetLift?.value),
           },
           {
             title: 'Predicted',
             key: 'predicted',
-            render: (_: unknown, log) => mass(log.outputs.predictedNetLift?.value, unitSystem),
+            render: (_: unknown, log) => mass(log.outputs.predictedNetLift?.value),
           },
           {
             title: 'Difference',
             key: 'difference',
             render: (_: unknown, log) =>
               log.outputs.differencePercent
-                ? `${log.outputs.differencePercent.value.toFixed(1)} %`
+                ? `${display.fixed(log.outputs.differencePercent.value, 1)} %`
                 : '—',
           },
         ]}

@@ -12,7 +12,8 @@ import {
   Table,
   Typography,
 } from 'antd';
-import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
+import type { UnitSystem } from '@loftwright/buoyancy';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 import { useId, useState } from 'react';
 import { SupplyCostChart } from '@/components/charts/supply-cost-chart';
 import { ExportButton } from '@/components/export/export-button';
@@ -85,7 +86,8 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
   const [unreadableFields, unreadableRegistry] = useUnreadableFields();
   const currency = draft.prices?.currency ?? '';
   const savedCurrency = (save.data ?? plan).inputs.prices?.currency ?? '';
-  const volume = (m3: number) => formatQuantity(m3, 'volume', unitSystem).text;
+  const display = useNumberDisplay(unitSystem);
+  const volume = (m3: number) => display.quantity(m3, 'volume').text;
 
   return (
     <Row gutter={[16, 16]}>
@@ -462,7 +464,7 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
             columns={[
               { title: 'Envelope', dataIndex: 'label' },
               { title: 'Gas each', dataIndex: 'volumeM3', render: volume },
-              { title: 'Count', dataIndex: 'count' },
+              { title: 'Count', dataIndex: 'count', render: (n: number) => display.number(n) },
               { title: 'Gas in all', dataIndex: 'totalM3', render: volume },
             ]}
             summary={() => (

@@ -1,6 +1,8 @@
 import { Alert, Button, Spin } from 'antd';
-import { KINDS } from '@loftwright/buoyancy';
+import { KINDS, type NumberFormat } from '@loftwright/buoyancy';
 import { Link } from 'react-router-dom';
+import { useReadingPreferences } from '@/components/reading/reading-preferences';
+import { stepNumber } from '@/components/results/step-number';
 import { paths } from '@/config/paths';
 import { useReviewedVersion } from '../api/sign-off-api';
 import './sign-off-sheet.css';
@@ -12,19 +14,19 @@ const STATUS_WORDS = {
   changes_requested: 'Changes requested',
 } as const;
 
-function leaves(value: unknown, prefix = ''): [string, string][] {
+function leaves(value: unknown, numberFormat: NumberFormat, prefix = ''): [string, string][] {
   if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
     return Object.entries(value).flatMap(([key, child]) =>
-      leaves(child, prefix ? `${prefix}.${key}` : key),
+      leaves(child, numberFormat, prefix ? `${prefix}.${key}` : key),
     );
   }
-  return [[prefix, Array.isArray(value) ? JSON.stringify(value) : String(value)]];
+  const text = Array.isArray(value)
+    ? JSON.stringify(value)
+    : typeof value === 'number'
+      ? stepNumber(value, numberFormat)
+      : String(value);
+  return [[prefix, text]];
 }
-
-const number = (value: number) =>
-  Math.abs(value) >= 1e6 || (Math.abs(value) < 1e-3 && value !== 0)
-    ? value.toExponential(4)
-    : Number(value.toPrecision(6)).toString();
 
 /** The printable record of one version: inputs, results, derivation, warnings and the review. */
 export function SignOffSheet({
@@ -38,6 +40,8 @@ export function SignOffSheet({
   kind: string;
   number: number;
 }) {
+  const { numberFormat } = useReadingPreferences();
+  const number = (value: number) => stepNumber(value, numberFormat);
   const version = useReviewedVersion(calculationId, versionNumber);
   if (version.isPending) return <Spin />;
   if (version.error) return <Alert type="error" showIcon title={version.error.message} />;
@@ -77,7 +81,7 @@ export function SignOffSheet({
       <h2>Inputs</h2>
       <table>
         <tbody>
-          {leaves(data.inputs).map(([path, value]) => (
+          {leaves(data.inputs, numberFormat).map(([path, value]) => (
             <tr key={path}>
               <th scope="row">{path}</th>
               <td className="lw-mono">{value}</td>
