@@ -15,7 +15,10 @@ describe('routes', () => {
 
   it('shows the sign-in form with labelled fields', async () => {
     renderApp('/sign-in');
-    expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeInTheDocument();
+    // The route loads lazily: on a busy machine its first import can take seconds.
+    expect(
+      await screen.findByRole('heading', { name: 'Sign in' }, { timeout: 15_000 }),
+    ).toBeInTheDocument();
     expect(screen.getByLabelText('E-mail')).toBeInTheDocument();
     expect(screen.getByLabelText('Password')).toBeInTheDocument();
   });

@@ -5,6 +5,7 @@ import {
   InputError,
   inputFieldInfo,
   KINDS,
+  normaliseInputs,
   readableIssue,
   type CalculationResult,
   type NumberFormat,
@@ -13,6 +14,7 @@ import {
 import { lazy, Suspense, useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { useBlocker } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client';
+import { readableApiError } from '@/lib/readable-api-error';
 import {
   type CalculationDetail,
   useCalculation,
@@ -79,16 +81,46 @@ function evaluateLive(
         notes: NO_NOTES,
         problem: error instanceof Error ? error.message : String(error),
       };
-    const errors: Record<string, string> = {};
-    const sentences: string[] = [];
-    for (const issue of error.issues) {
-      const field = inputFieldInfo(schema, issue.field);
-      const sentence = readableIssue(issue, field, shownAs);
-      // Beside the field the label is already shown; the summary names it.
-      errors[issue.field] ??= field ? sentence.slice(field.label.length).trim() : sentence;
-      sentences.push(sentence);
-    }
+    const { errors, sentences } = fieldErrors(error, schema, shownAs);
     return { errors, notes: NO_NOTES, problem: `Results wait for: ${sentences.join('; ')}` };
+  }
+}
+
+/** The engine's refusals by field (beside each field) and as sentences (for the summary). */
+function fieldErrors(
+  error: InputError,
+  schema: Record<string, unknown>,
+  shownAs: { unitSystem: UnitSystem; numberFormat: NumberFormat },
+) {
+  const errors: Record<string, string> = {};
+  const sentences: string[] = [];
+  for (const issue of error.issues) {
+    const field = inputFieldInfo(schema, issue.field);
+    const sentence = readableIssue(issue, field, shownAs);
+    // Beside the field the label is already shown; the summary names it.
+    errors[issue.field] ??= field ? sentence.slice(field.label.length).trim() : sentence;
+    sentences.push(sentence);
+  }
+  return { errors, sentences };
+}
+
+const NO_ERRORS: Record<string, string> = {};
+
+/**
+ * The field checks alone, on the inputs as they are now: cheap (no computation), so a message
+ * beside a field goes the moment the field is put right, not when the results catch up.
+ */
+function checkFieldsNow(
+  kind: string,
+  inputs: unknown,
+  schema: Record<string, unknown>,
+  shownAs: { unitSystem: UnitSystem; numberFormat: NumberFormat },
+): Record<string, string> {
+  try {
+    normaliseInputs(kind, inputs);
+    return NO_ERRORS;
+  } catch (error) {
+    return error instanceof InputError ? fieldErrors(error, schema, shownAs).errors : NO_ERRORS;
   }
 }
 
@@ -168,6 +200,19 @@ export function EditorBody({
         : evaluateLive(kind, deferredInputs, schema, { unitSystem, numberFormat }),
     [kind, deferredInputs, schema, unitSystem, numberFormat],
   );
+  const errorsNow = useMemo(
+    () =>
+      inputs === undefined || !kind
+        ? NO_ERRORS
+        : checkFieldsNow(kind, inputs, schema, { unitSystem, numberFormat }),
+    [kind, inputs, schema, unitSystem, numberFormat],
+  );
+  // Checks the engine makes while computing (a rule needing a field) follow once the results
+  // are for these very inputs; a stale one never outlives the typing that put it right.
+  const errorsShown = useMemo(
+    () => (deferredInputs === inputs ? { ...live.errors, ...errorsNow } : errorsNow),
+    [deferredInputs, inputs, live.errors, errorsNow],
+  );
   const heldBack =
     unreadable.length > 0 ? `Results wait for: ${describeUnreadable(unreadable)}` : undefined;
   const dirty = inputs !== undefined && JSON.stringify(inputs) !== savedInputs;
@@ -201,7 +246,16 @@ export function EditorBody({
           if (error instanceof ApiError && error.status === 409) {
             setConflict({ latest: error.body.latest as VersionDetail, mine: toSave });
           } else {
-            void message.error(error.message);
+            // The server names fields inside the inputs by path; say them by their labels.
+            const labels = (field: string) =>
+              field.startsWith('inputs.')
+                ? inputFieldInfo(schema, field.slice('inputs.'.length))
+                : undefined;
+            void message.error(
+              readableApiError(error, labels, (issue, field) =>
+                readableIssue(issue, field, { unitSystem, numberFormat }),
+              ).join('; '),
+            );
           }
         },
       },
@@ -249,7 +303,7 @@ export function EditorBody({
                   value={inputs}
                   onChange={setInputs}
                   unitSystem={unitSystem}
-                  errors={live.errors}
+                  errors={errorsShown}
                   notes={live.notes}
                   disabled={!editable}
                 />

@@ -7,7 +7,7 @@ import {
 } from '@loftwright/buoyancy';
 import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import { useState } from 'react';
-import { FormError } from '@/components/errors/form-error';
+import { FieldFormError } from '@/components/errors/field-form-error';
 import { QuantityInput } from '@/components/quantity/quantity-input';
 import {
   describeUnreadable,
@@ -214,7 +214,27 @@ export function ExampleSettingsForm({
             </>
           ) : null}
         </Card>
-        <FormError error={update.error} />
+        <FieldFormError
+          error={update.error}
+          unitSystem={unitSystem}
+          labels={(field) => {
+            if (field.startsWith('tryRanges.')) {
+              const info = inputFieldInfo(example.kind, field.slice('tryRanges.'.length));
+              return {
+                label: `Range of ${info.label.toLowerCase()} for trying`,
+                ...(info.dimension ? { dimension: info.dimension } : {}),
+              };
+            }
+            if (field.startsWith('stepNotes.')) {
+              const step = example.steps.find((candidate) => `stepNotes.${candidate.id}` === field);
+              return { label: `Note on “${step?.label ?? field.slice('stepNotes.'.length)}”` };
+            }
+            if (field === 'chartStepId') return { label: 'Chart' };
+            if (field === 'exercise.hiddenOutputs')
+              return { label: 'Results the students work out' };
+            return undefined;
+          }}
+        />
         {unreadable.length > 0 ? (
           <Typography.Paragraph type="danger" role="alert">
             Not saved until these read: {describeUnreadable(unreadable)}

@@ -2,6 +2,7 @@ import { Alert, Button, Form, Input, Modal, Select, Space, Typography } from 'an
 import {
   type Dimension,
   type FillReading,
+  type InputFieldInfo,
   formatQuantity,
   formatRange,
   type NumberFormat,
@@ -9,7 +10,7 @@ import {
 } from '@loftwright/buoyancy';
 import { useId, useState } from 'react';
 import { QuantityInput } from '@/components/quantity/quantity-input';
-import { FormError } from '@/components/errors/form-error';
+import { FieldFormError } from '@/components/errors/field-form-error';
 import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import {
   describeUnreadable,
@@ -65,6 +66,31 @@ interface RangedField {
   value: number | undefined;
   range: ValueRange;
   dimension: Dimension;
+}
+
+const FILL_LOG_FIELDS: Record<string, InputFieldInfo> = {
+  'ambient.temperatureK': { label: 'Air temperature', dimension: 'temperature' },
+  'ambient.pressurePa': { label: 'Air pressure (absolute)', dimension: 'pressure' },
+  'ambient.relativeHumidity': { label: 'Relative humidity', dimension: 'fraction' },
+  timeS: { label: 'time since filling', dimension: 'time' },
+  ballastMassKg: { label: 'ballast mass', dimension: 'mass' },
+  scaleReadingKg: { label: 'scale reading', dimension: 'mass' },
+  netLiftKg: { label: 'net lift', dimension: 'mass' },
+  filledAt: { label: 'Filled at' },
+  place: { label: 'Place' },
+  envelopeLabel: { label: 'Envelope' },
+  gasSource: { label: 'Gas source' },
+  note: { label: 'Note' },
+};
+
+/** The form's own label for a field the server names: "Reading 2 ballast mass". */
+function fillLogLabel(field: string): InputFieldInfo | undefined {
+  const reading = /^readings\.(\d+)\.(\w+)$/.exec(field);
+  if (reading) {
+    const info = FILL_LOG_FIELDS[reading[2] ?? ''];
+    return info && { ...info, label: `Reading ${Number(reading[1]) + 1} ${info.label}` };
+  }
+  return FILL_LOG_FIELDS[field];
 }
 
 /** One line saying where the starting air comes from, or why it is sea level. */
@@ -445,7 +471,7 @@ export function FillLogForm({
               title={`Not saved until these are put right: ${describeUnreadable(heldBack)}`}
             />
           ) : null}
-          <FormError error={create.error} />
+          <FieldFormError error={create.error} unitSystem={unitSystem} labels={fillLogLabel} />
         </Form>
       </UnreadableFieldsContext.Provider>
     </Modal>

@@ -12,12 +12,12 @@ import {
   Table,
   Typography,
 } from 'antd';
-import type { UnitSystem } from '@loftwright/buoyancy';
+import type { InputFieldInfo, UnitSystem } from '@loftwright/buoyancy';
 import { useNumberDisplay } from '@/components/reading/use-number-display';
 import { useId, useState } from 'react';
 import { SupplyCostChart } from '@/components/charts/supply-cost-chart';
 import { ExportButton } from '@/components/export/export-button';
-import { FormError } from '@/components/errors/form-error';
+import { FieldFormError } from '@/components/errors/field-form-error';
 import { CountInput } from '@/components/quantity/count-input';
 import { MoneyInput } from '@/components/quantity/money-input';
 import {
@@ -51,6 +51,35 @@ const DEFAULT_CYLINDER: NonNullable<PlanDraft['cylinder']> = {
   fillPressurePa: 2e7,
   temperatureK: 288.15,
 };
+
+const PLAN_FIELDS: Record<string, InputFieldInfo> = {
+  title: { label: 'Title' },
+  eventDate: { label: 'Date of the event' },
+  'fill.temperatureK': { label: 'Gas temperature at filling', dimension: 'temperature' },
+  'fill.pressurePa': { label: 'Gas pressure at filling', dimension: 'pressure' },
+  'prices.currency': { label: 'Currency' },
+  'prices.electricityPerKWh': { label: 'Electricity price', dimension: 'money' },
+  'prices.cylinderEach': { label: 'One full cylinder', dimension: 'money' },
+  'prices.bulkGasPerM3': { label: 'Delivered gas, per normal m³', dimension: 'money' },
+  pricesDate: { label: 'Quoted on' },
+  calculationId: { label: 'from' },
+  versionNumber: { label: 'version' },
+  count: { label: 'count', dimension: 'count' },
+  volumeM3: { label: 'gas per envelope', dimension: 'volume' },
+  diameterM: { label: 'diameter', dimension: 'length' },
+  label: { label: 'name' },
+};
+
+/** The editor's own label for a field the server names: "Envelope 2 count". */
+function planLabel(field: string): InputFieldInfo | undefined {
+  const line = /^lines\.(\d+)(?:\.(\w+))?$/.exec(field);
+  if (line) {
+    const envelope = `Envelope ${Number(line[1]) + 1}`;
+    const info = line[2] ? PLAN_FIELDS[line[2]] : undefined;
+    return info ? { ...info, label: `${envelope} ${info.label}` } : { label: envelope };
+  }
+  return PLAN_FIELDS[field];
+}
 
 /**
  * A gas plan: the envelopes of an event times their counts, the air at filling, the supply and
@@ -427,7 +456,7 @@ export function PlanEditor({ plan, unitSystem }: { plan: Plan; unitSystem: UnitS
                 </Form.Item>
               ))}
             </Space>
-            <FormError error={save.error} />
+            <FieldFormError error={save.error} unitSystem={unitSystem} labels={planLabel} />
             {unreadable.size > 0 || unreadableFields.length > 0 ? (
               <Alert
                 type="warning"
