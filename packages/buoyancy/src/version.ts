@@ -3,4 +3,5 @@
  * stored versions record it, and the API compares it when it re-verifies an approved result.
  */
 // 0.2.0: "check this" notes for values outside what the trade usually meets.
-export const ENGINE_VERSION = '0.2.0';
+// 0.3.0: a cushion's envelope mass from the film cut (two flat discs), not its inflated surface.
+export const ENGINE_VERSION = '0.3.0';

@@ -48,6 +48,18 @@ describe('envelope geometry', () => {
     expect(cushionGeometry(0.9).surfaceAreaM2).toBeLessThan(2 * Math.PI * 0.45 ** 2);
   });
 
+  it('cuts a cushion from two flat discs, 2·π·a², about 9 % more film than its inflated surface', () => {
+    // Film: two discs of radius a = 0.45 m (disc area π·a², CRC Standard Mathematical Tables).
+    const cushion = cushionGeometry(0.9);
+    expect(cushion.filmAreaM2).toBeCloseTo(2 * Math.PI * 0.45 ** 2, 12);
+    // Inflated surface π²·r² with r = a/A (Paulsen 1994): film over surface is 2·A²/π.
+    const A = 1.3110287771;
+    expect(cushion.filmAreaM2 / cushion.surfaceAreaM2).toBeCloseTo((2 * A * A) / Math.PI, 9);
+    expect(cushion.filmAreaM2 / cushion.surfaceAreaM2).toBeGreaterThan(1.09);
+    // Every other shape is sewn to its inflated form: the film is the surface.
+    expect(sphereGeometry(2).filmAreaM2).toBe(sphereGeometry(2).surfaceAreaM2);
+  });
+
   it('refuses a capsule shorter than its diameter and a custom surface smaller than a sphere’s', () => {
     expect(() => envelopeGeometry({ shape: 'capsule', diameterM: 1, lengthM: 0.5 })).toThrow(
       InputError,

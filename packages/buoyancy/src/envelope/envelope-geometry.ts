@@ -15,6 +15,12 @@ export const CUSHION_THICKNESS_RATIO = 0.5990701173;
 export interface EnvelopeGeometry {
   readonly volumeM3: number;
   readonly surfaceAreaM2: number;
+  /**
+   * Film cut to make the envelope [m2]: the surface itself for shapes sewn to their inflated
+   * form, but two flat discs for a cushion, whose inflated surface is smaller than the film
+   * (the film wrinkles at the rim). Envelope mass from an areal density uses this.
+   */
+  readonly filmAreaM2: number;
   /** Area seen along the direction of motion (vertical for balloons) [m2]. */
   readonly frontalAreaM2: number;
   /** Equivalent diameter for drag and Reynolds number: that of the frontal area [m]. */
@@ -38,10 +44,16 @@ export type EnvelopeShape =
       readonly frontalAreaM2?: number;
     };
 
-function finish(volumeM3: number, surfaceAreaM2: number, frontalAreaM2: number): EnvelopeGeometry {
+function finish(
+  volumeM3: number,
+  surfaceAreaM2: number,
+  frontalAreaM2: number,
+  filmAreaM2 = surfaceAreaM2,
+): EnvelopeGeometry {
   return {
     volumeM3,
     surfaceAreaM2,
+    filmAreaM2,
     frontalAreaM2,
     referenceDiameterM: Math.sqrt((4 * frontalAreaM2) / Math.PI),
   };
@@ -99,7 +111,8 @@ export function capsuleGeometry(diameterM: number, lengthM: number): EnvelopeGeo
 /**
  * Two flat discs of diameter D sewn at the rim and inflated (Paulsen 1994; Mladenov & Oprea 2003):
  * inflated radius r = (D/2)/A, V = 2/3·π·(D/2)·r², inflated surface π²·r², frontal area π·r²
- * (face on, the largest; a conservative choice for drag).
+ * (face on, the largest; a conservative choice for drag). The film cut is the two flat discs,
+ * 2·π·(D/2)², which is 2·A²/π ≈ 1.094 times the inflated surface.
  */
 export function cushionGeometry(flatDiameterM: number): EnvelopeGeometry {
   const discRadiusM = flatDiameterM / 2;
@@ -108,6 +121,7 @@ export function cushionGeometry(flatDiameterM: number): EnvelopeGeometry {
     (2 / 3) * Math.PI * discRadiusM * r * r,
     Math.PI * Math.PI * r * r,
     Math.PI * r * r,
+    2 * Math.PI * discRadiusM * discRadiusM,
   );
 }
 

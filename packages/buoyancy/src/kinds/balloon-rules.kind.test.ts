@@ -62,6 +62,19 @@ describe('balloon-rules, U.S. 14 CFR 101.1', () => {
     expect(crossed(inputs)).toEqual(['rule-crossed-101.1(a)(4)(iv)-suspension-force']);
   });
 
+  it('refuses a moored balloon with neither size rather than answer “0 thresholds crossed”', () => {
+    const ask = () => evaluate('balloon-rules', { profileId: 'us-14cfr101', operation: 'moored' });
+    expect(ask).toThrow(InputError);
+    expect(ask).toThrow(/is needed for a moored balloon, or its gas capacity/);
+    expect(() =>
+      evaluate('balloon-rules', {
+        profileId: 'us-14cfr101',
+        operation: 'moored',
+        mooredGasVolumeM3: 1,
+      }),
+    ).not.toThrow();
+  });
+
   it('checks a moored balloon against 6 ft and 115 ft³ for (a)(1)', () => {
     const over = crossed({
       profileId: 'us-14cfr101',

@@ -121,6 +121,19 @@ export const balloonRulesKind = defineKind({
         `must be one of: ${PROFILE_IDS.map((id) => `“${profileTitle(id)}” (${id})`).join(', ')}`,
       );
     }
+    if (
+      inputs.operation === 'moored' &&
+      inputs.mooredDiameterM === undefined &&
+      inputs.mooredGasVolumeM3 === undefined
+    ) {
+      // With neither size there is nothing to compare: "0 thresholds crossed" would be a false
+      // all-clear.
+      throw new InputError(
+        'mooredDiameterM',
+        undefined,
+        'is needed for a moored balloon, or its gas capacity: the rules turn on its size',
+      );
+    }
     const d = new Derivation();
     const rules = inputs.operation === 'free' ? profile.free : profile.moored;
     const crossed = rules.filter((rule) => checkThreshold(d, rule, inputs) === true);

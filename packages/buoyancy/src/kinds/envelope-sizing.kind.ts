@@ -170,8 +170,8 @@ export const envelopeSizingKind = defineKind({
     };
     const envelopeKg = (sizeM: number) => {
       if (inputs.envelopeMass.kind === 'fixed') return inputs.envelopeMass.massKg;
-      const surfaceAreaM2 = familyGeometry(inputs.shape, sizeM).surfaceAreaM2;
-      return inputs.envelopeMass.arealDensityKgM2 * surfaceAreaM2 + inputs.envelopeMass.fittingsKg;
+      const filmAreaM2 = familyGeometry(inputs.shape, sizeM).filmAreaM2;
+      return inputs.envelopeMass.arealDensityKgM2 * filmAreaM2 + inputs.envelopeMass.fittingsKg;
     };
     // Free lift left over at size s: zero at the answer.
     const surplusKg = (sizeM: number) =>
@@ -229,7 +229,7 @@ export const envelopeSizingKind = defineKind({
         "Brent's method on the lift balance (Brent, Algorithms for Minimization without Derivatives, 1973)",
     });
     const geometry = deriveGeometry(d, envelopeAtSize(inputs.shape, sizeM));
-    const envelopeMassKg = deriveEnvelopeMass(d, inputs.envelopeMass, geometry.surfaceAreaM2);
+    const envelopeMassKg = deriveEnvelopeMass(d, inputs.envelopeMass, geometry);
     const lift = deriveLift(
       d,
       geometry.volumeM3,
@@ -260,6 +260,7 @@ export const envelopeSizingKind = defineKind({
     d.output('size', SIZE_LABEL[inputs.shape.shape], 'required-size');
     d.output('volume', 'Envelope volume (gas at fill conditions)', 'volume', ambient.context);
     d.output('surfaceArea', 'Envelope surface area', 'surface-area');
+    if (inputs.shape.shape === 'cushion') d.output('filmArea', 'Film cut', 'film-area');
     d.output('envelopeMass', 'Envelope mass', 'envelope-mass');
     d.output('gasVolumeNormal', 'Gas at normal conditions', 'gas-volume-normal');
     d.output('gasMass', 'Gas in the envelope', 'gas-mass');

@@ -1,5 +1,6 @@
 import { create, faradayDependencies, molarVolumeDependencies } from 'mathjs';
 import { describe, expect, it } from 'vitest';
+import { InputError } from '../errors.js';
 import { evaluate } from './registry.js';
 
 if (!faradayDependencies || !molarVolumeDependencies) throw new Error('mathjs lacks its constants');
@@ -101,5 +102,30 @@ describe('gas-supply: cylinders', () => {
     expect(result.outputs.cylindersNeeded?.value).toBe(1);
     expect(result.outputs.cylinderCost?.value).toBe(300);
     expect(result.warnings.map((warning) => warning.code)).toContain('pressurised-cylinder');
+  });
+
+  it('refuses a cylinder returned at or above its fill pressure, naming the field', () => {
+    const inputs = {
+      fill: { volumeM3: 1, temperatureK: 288.15, pressurePa: 101325, count: 1 },
+      cylinder: {
+        gasId: 'helium',
+        waterVolumeM3: 0.05,
+        fillPressurePa: 2e6,
+        residualPressurePa: 3e6,
+        temperatureK: 288.15,
+      },
+    };
+    const refusal = (() => {
+      try {
+        evaluate('gas-supply', inputs);
+      } catch (error) {
+        return error;
+      }
+    })();
+    expect(refusal).toBeInstanceOf(InputError);
+    expect(refusal).toMatchObject({
+      field: 'cylinder.residualPressurePa',
+      reason: expect.stringMatching(/must be below the gauge pressure of a full cylinder/),
+    });
   });
 });

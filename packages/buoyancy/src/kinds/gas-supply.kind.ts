@@ -6,6 +6,7 @@ import {
   NORMAL_TEMPERATURE_K,
 } from '../constants.js';
 import { Derivation, v } from '../derivation.js';
+import { InputError } from '../errors.js';
 import { GAS_CATALOGUE, GAS_IDS } from '../gas/gas-catalogue.js';
 import { gasChoice } from '../schema/choice-schema.js';
 import { count, fraction, money, quantity } from '../schema/quantity-schema.js';
@@ -344,6 +345,15 @@ export const gasSupplyKind = defineKind({
 
     if (inputs.cylinder) {
       const c = inputs.cylinder;
+      // A cylinder returned fuller than it came gives no gas: refused, not turned into a
+      // negative volume and zero cylinders.
+      if (c.residualPressurePa >= c.fillPressurePa) {
+        throw new InputError(
+          'cylinder.residualPressurePa',
+          c.residualPressurePa,
+          'must be below the gauge pressure of a full cylinder: a cylinder returned at or above its fill pressure gives no gas',
+        );
+      }
       const fillAbsPa = c.fillPressurePa + NORMAL_PRESSURE_PA;
       const residualAbsPa = c.residualPressurePa + NORMAL_PRESSURE_PA;
       const virial = SECOND_VIRIAL_M3_PER_MOL[c.gasId];

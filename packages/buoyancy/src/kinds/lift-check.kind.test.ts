@@ -113,4 +113,20 @@ describe('lift-check', () => {
     expect(() => evaluate('lift-check', { ...base, colour: 'red' })).toThrow(/unknown field/);
     expect(() => evaluate('lift-check', { ...base, gas: undefined })).toThrow(/gas: is required/);
   });
+
+  it('weighs a cushion by the film cut (two flat discs), and shows it beside the inflated surface', () => {
+    // 0.9 m discs of 0.05 kg/m² film with 0.01 kg of fittings: m = 0.05·2·π·0.45² + 0.01
+    // (disc area π·a², CRC Standard Mathematical Tables).
+    const result = evaluate('lift-check', {
+      ...base,
+      envelope: { shape: 'cushion', flatDiameterM: 0.9 },
+      envelopeMass: { kind: 'areal', arealDensityKgM2: 0.05, fittingsKg: 0.01 },
+    });
+    const filmM2 = 2 * Math.PI * 0.45 ** 2;
+    expect(result.outputs.filmArea?.value).toBeCloseTo(filmM2, 12);
+    expect(result.outputs.envelopeMass?.value).toBeCloseTo(0.05 * filmM2 + 0.01, 12);
+    expect(result.outputs.surfaceArea?.value).toBeLessThan(filmM2);
+    // A sphere has no separate film output: its film is its surface.
+    expect(evaluate('lift-check', base).outputs.filmArea).toBeUndefined();
+  });
 });

@@ -75,7 +75,7 @@ export const liftCheckKind = defineKind({
     const ambient = deriveAmbient(d, inputs.ambient);
     const gas = deriveGas(d, inputs.gas, ambient);
     const geometry = deriveGeometry(d, inputs.envelope);
-    const envelopeMassKg = deriveEnvelopeMass(d, inputs.envelopeMass, geometry.surfaceAreaM2);
+    const envelopeMassKg = deriveEnvelopeMass(d, inputs.envelopeMass, geometry);
     const lift = deriveLift(
       d,
       geometry.volumeM3,
@@ -89,6 +89,7 @@ export const liftCheckKind = defineKind({
     d.output('gasDensity', 'Gas density', 'gas-density');
     d.output('volume', 'Envelope volume', 'volume');
     d.output('surfaceArea', 'Envelope surface area', 'surface-area');
+    if (inputs.envelope.shape === 'cushion') d.output('filmArea', 'Film cut', 'film-area');
     d.output('frontalArea', 'Frontal area', 'frontal-area');
     d.output('envelopeMass', 'Envelope mass', 'envelope-mass');
     d.output('displacedAirMass', 'Displaced air', 'displaced-air-mass', context);

@@ -65,7 +65,10 @@ export const KINDS: readonly KindDescription[] = KIND_LIST.map((kind) => ({
   description: kind.description,
   get inputSchema() {
     // A fresh copy each time: callers may not change the one evaluate reads.
-    return structuredClone(jsonSchemaOf(kind as unknown as CalculationKind));
+    return JSON.parse(JSON.stringify(jsonSchemaOf(kind as unknown as CalculationKind))) as Record<
+      string,
+      unknown
+    >;
   },
   example: kind.example,
 }));

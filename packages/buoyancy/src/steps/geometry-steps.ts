@@ -128,6 +128,17 @@ export function deriveGeometry(d: Derivation, envelope: EnvelopeInput): Envelope
     result: v('A', geometry.frontalAreaM2, 'm²'),
     source: formulas.source,
   });
+  if (shape.shape === 'cushion') {
+    // The film cut differs from the inflated surface only for the flat-seamed cushion.
+    d.step({
+      id: 'film-area',
+      label: 'Film cut for the envelope (two flat discs)',
+      formula: 'S_film = 2·π·(D/2)²',
+      values: [v('D', shape.flatDiameterM, 'm')],
+      result: v('S_film', geometry.filmAreaM2, 'm²'),
+      source: SOURCES.disc,
+    });
+  }
   return geometry;
 }
 
@@ -135,8 +146,10 @@ export function deriveGeometry(d: Derivation, envelope: EnvelopeInput): Envelope
 export function deriveEnvelopeMass(
   d: Derivation,
   mass: EnvelopeMassInput,
-  surfaceAreaM2: number,
+  geometry: EnvelopeGeometry,
 ): number {
+  const filmAreaM2 = geometry.filmAreaM2;
+  const film = filmAreaM2 === geometry.surfaceAreaM2 ? 'S' : 'S_film';
   if (mass.kind === 'fixed') {
     return d.step({
       id: 'envelope-mass',
@@ -150,13 +163,13 @@ export function deriveEnvelopeMass(
   return d.step({
     id: 'envelope-mass',
     label: 'Envelope mass from the material',
-    formula: 'm_env = σ·S + m_fittings',
+    formula: `m_env = σ·${film} + m_fittings`,
     values: [
       v('σ', mass.arealDensityKgM2, 'kg/m²'),
-      v('S', surfaceAreaM2, 'm²'),
+      v(film, filmAreaM2, 'm²'),
       v('m_fittings', mass.fittingsKg, 'kg'),
     ],
-    result: v('m_env', mass.arealDensityKgM2 * surfaceAreaM2 + mass.fittingsKg, 'kg'),
+    result: v('m_env', mass.arealDensityKgM2 * filmAreaM2 + mass.fittingsKg, 'kg'),
     source: 'mass of a film of uniform areal density',
   });
 }

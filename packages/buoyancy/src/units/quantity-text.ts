@@ -102,6 +102,14 @@ export function readQuantity(
   const unit = unitText === '' ? (options.defaultUnit ?? bareUnit(dimension)) : unitText;
   const valueSI = toSI(reading.value, unit, dimension, text, field);
   if (!Number.isFinite(valueSI)) throw new InputError(field, text, 'is too large a number');
+  // Below absolute zero in any unit is no temperature at all, whatever the field's range.
+  if (dimension === 'temperature' && valueSI < 0) {
+    throw new InputError(
+      field,
+      text,
+      'is below absolute zero (0 K, −273.15 °C, −459.67 °F): no temperature can be',
+    );
+  }
   return { valueSI, unit, unitTyped: unitText !== '' };
 }
 

@@ -108,6 +108,12 @@ const CASES: readonly Case[] = [
   ['5 kg', POINT, 'length', 'm', /not a length/],
   ['20 m', POINT, 'temperatureDifference', 'K', /not a temperature difference/],
   ['abc', POINT, 'length', 'm', /does not start with a number/],
+  // Absolute zero is 0 K = −273.15 °C = −459.67 °F (NIST SP 811, Appendix B): below it, in any
+  // unit, the text is refused as no temperature at all.
+  ['-300 °C', POINT, 'temperature', 'degC', /below absolute zero/],
+  ['−500 °F', POINT, 'temperature', 'degF', /below absolute zero/],
+  ['-1 K', POINT, 'temperature', 'K', /below absolute zero/],
+  ['-273,15', COMMA, 'temperature', 'degC', 0],
   ['m 5', POINT, 'length', 'm', /does not start with a number/],
   ['', POINT, 'length', 'm', /is empty/],
   ['   ', COMMA, 'length', 'm', /is empty/],
