@@ -4,4 +4,5 @@
  */
 // 0.2.0: "check this" notes for values outside what the trade usually meets.
 // 0.3.0: a cushion's envelope mass from the film cut (two flat discs), not its inflated surface.
-export const ENGINE_VERSION = '0.3.0';
+// 0.4.0: heated air is the surrounding air at the gas temperature, in the air's own model.
+export const ENGINE_VERSION = '0.4.0';

@@ -24,11 +24,16 @@ const ambientArb = fc.oneof(
   }),
 );
 
-const gasArb = fc.record({
-  gasId: fc.constantFrom(...gasIds),
-  purity: fc.double({ min: 0.5, max: 1, noNaN: true }),
-  superheatK: fc.double({ min: 0, max: 60, noNaN: true }),
-});
+// Heated air has no purity of its own (it is the surrounding air), so none is given for it.
+const gasArb = fc
+  .record({
+    gasId: fc.constantFrom(...gasIds),
+    purity: fc.double({ min: 0.5, max: 1, noNaN: true }),
+    superheatK: fc.double({ min: 0, max: 60, noNaN: true }),
+  })
+  .map(({ gasId, purity, superheatK }) =>
+    gasId === 'hot-air' ? { gasId, superheatK } : { gasId, purity, superheatK },
+  );
 
 const envelopeArb = fc.oneof(
   fc.record({

@@ -25,7 +25,7 @@ export function fastLift(input: FastLiftInput): LiftMasses {
     pressurePa: input.airPressurePa,
     vapourMoleFraction: input.airVapourMoleFraction,
   });
-  const gas = gasDensity(input.gas);
+  const gas = liftingGasDensity(input);
   return liftMasses(
     input.volumeM3,
     air.densityKgM3,
@@ -33,6 +33,21 @@ export function fastLift(input: FastLiftInput): LiftMasses {
     input.envelopeMassKg,
     input.payloadMassKg,
   );
+}
+
+/**
+ * The gas's density; heated air is the surrounding air at the gas's temperature and pressure,
+ * with the air's own water content, as the lift-check kind computes it.
+ */
+function liftingGasDensity(input: Pick<FastLiftInput, 'airVapourMoleFraction' | 'gas'>): {
+  densityKgM3: number;
+} {
+  if (input.gas.gasId !== 'hot-air') return gasDensity(input.gas);
+  return moistAirDensity({
+    temperatureK: input.gas.temperatureK,
+    pressurePa: input.gas.pressurePa,
+    vapourMoleFraction: input.airVapourMoleFraction,
+  });
 }
 
 export interface DiameterSweepPoint {
@@ -57,7 +72,7 @@ export function sweepSphereDiameter(
     pressurePa: base.airPressurePa,
     vapourMoleFraction: base.airVapourMoleFraction,
   });
-  const gas = gasDensity(base.gas);
+  const gas = liftingGasDensity(base);
   const sweep: DiameterSweepPoint[] = new Array(points);
   for (let index = 0; index < points; index += 1) {
     const diameterM =

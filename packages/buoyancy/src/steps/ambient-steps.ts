@@ -33,6 +33,13 @@ export interface AmbientState {
   readonly pressurePa: number;
   readonly densityKgM3: number;
   readonly vapourMoleFraction: number;
+  /**
+   * The density model the air was computed with: the 1976 standard's dry ideal gas, or
+   * CIPM-2007 real moist air. Heated air in the envelope is computed with the same one.
+   */
+  readonly model: 'ussa1976' | 'cipm2007';
+  /** Molar mass of the air [kg/mol]. */
+  readonly molarMassKgPerMol: number;
   /** One line saying what air this is, for result context: "15.0 °C, 101.33 kPa, dry air". */
   readonly context: string;
 }
@@ -108,6 +115,10 @@ export function deriveAmbient(d: Derivation, ambient: AmbientInput): AmbientStat
         pressurePa,
         densityKgM3,
         vapourMoleFraction: 0,
+        model: 'ussa1976',
+        // Above 80 km the standard's air is lighter than M₀ (Table 8); this is its actual one.
+        molarMassKgPerMol:
+          (densityKgM3 * USSA1976_GAS_CONSTANT_J_PER_MOL_K * temperatureK) / pressurePa,
         context: describeAir(temperatureK, pressurePa, 'dry air'),
       };
     }
@@ -265,6 +276,8 @@ function deriveRealAir(
     pressurePa,
     densityKgM3,
     vapourMoleFraction,
+    model: 'cipm2007',
+    molarMassKgPerMol: air.molarMassKgPerMol,
     context: describeAir(temperatureK, pressurePa, humidityText),
   };
 }

@@ -1,6 +1,8 @@
 import {
-  WATER_MOLAR_MASS_KG_PER_MOL,
   CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL,
+  CIPM_GAS_CONSTANT_J_PER_MOL_K,
+  moistAirDensity,
+  WATER_MOLAR_MASS_KG_PER_MOL,
 } from '../atmosphere/moist-air-density.js';
 import { saturationVapourPressurePa } from '../atmosphere/saturation-vapour-pressure.js';
 import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
@@ -26,40 +28,8 @@ export function deriveGas(
   ambient: AmbientState,
 ): GasDerivedState {
   const gas = GAS_CATALOGUE[gasInput.gasId];
-  const temperatureK = d.step({
-    id: 'gas-temperature',
-    label:
-      gasInput.superheatK === 0
-        ? 'Gas temperature (same as the air)'
-        : 'Gas temperature (air plus superheat)',
-    formula: 'T_gas = T + ΔT_superheat',
-    values: [v('T', ambient.temperatureK, 'K'), v('ΔT_superheat', gasInput.superheatK, 'K')],
-    result: v('T_gas', ambient.temperatureK + gasInput.superheatK, 'K'),
-    source: SOURCES.given,
-  });
-  if (temperatureK < GAS_TEMPERATURE_RANGE_K.min || temperatureK > GAS_TEMPERATURE_RANGE_K.max) {
-    throw new InputError(
-      'gas.superheatK',
-      gasInput.superheatK,
-      `puts the gas at ${temperatureK.toFixed(2)} K; the gas temperature must be between ${GAS_TEMPERATURE_RANGE_K.min} and ${GAS_TEMPERATURE_RANGE_K.max} K`,
-      {
-        min: GAS_TEMPERATURE_RANGE_K.min - ambient.temperatureK,
-        max: GAS_TEMPERATURE_RANGE_K.max - ambient.temperatureK,
-        unit: 'K',
-      },
-    );
-  }
-  const pressurePa = d.step({
-    id: 'gas-pressure',
-    label:
-      gasInput.superpressurePa === 0
-        ? 'Gas pressure (same as the air)'
-        : 'Gas pressure (air plus superpressure)',
-    formula: 'p_gas = p + Δp',
-    values: [v('p', ambient.pressurePa, 'Pa'), v('Δp', gasInput.superpressurePa, 'Pa')],
-    result: v('p_gas', ambient.pressurePa + gasInput.superpressurePa, 'Pa'),
-    source: SOURCES.given,
-  });
+  if (gas.isHeatedAir) return deriveHeatedAir(d, gasInput, ambient);
+  const { temperatureK, pressurePa } = gasTemperatureAndPressure(d, gasInput, ambient);
   const state = gasDensity({
     gasId: gas.id,
     temperatureK,
@@ -124,6 +94,125 @@ export function deriveGas(
   });
   warnAboutGas(d, gasInput);
   return { temperatureK, pressurePa, densityKgM3, molarMassKgPerMol };
+}
+
+/** The gas's temperature and pressure: the air's, plus superheat and superpressure. */
+function gasTemperatureAndPressure(d: Derivation, gasInput: GasInput, ambient: AmbientState) {
+  const temperatureK = d.step({
+    id: 'gas-temperature',
+    label:
+      gasInput.superheatK === 0
+        ? 'Gas temperature (same as the air)'
+        : 'Gas temperature (air plus superheat)',
+    formula: 'T_gas = T + ΔT_superheat',
+    values: [v('T', ambient.temperatureK, 'K'), v('ΔT_superheat', gasInput.superheatK, 'K')],
+    result: v('T_gas', ambient.temperatureK + gasInput.superheatK, 'K'),
+    source: SOURCES.given,
+  });
+  if (temperatureK < GAS_TEMPERATURE_RANGE_K.min || temperatureK > GAS_TEMPERATURE_RANGE_K.max) {
+    throw new InputError(
+      'gas.superheatK',
+      gasInput.superheatK,
+      `puts the gas at ${temperatureK.toFixed(2)} K; the gas temperature must be between ${GAS_TEMPERATURE_RANGE_K.min} and ${GAS_TEMPERATURE_RANGE_K.max} K`,
+      {
+        min: GAS_TEMPERATURE_RANGE_K.min - ambient.temperatureK,
+        max: GAS_TEMPERATURE_RANGE_K.max - ambient.temperatureK,
+        unit: 'K',
+      },
+    );
+  }
+  const pressurePa = d.step({
+    id: 'gas-pressure',
+    label:
+      gasInput.superpressurePa === 0
+        ? 'Gas pressure (same as the air)'
+        : 'Gas pressure (air plus superpressure)',
+    formula: 'p_gas = p + Δp',
+    values: [v('p', ambient.pressurePa, 'Pa'), v('Δp', gasInput.superpressurePa, 'Pa')],
+    result: v('p_gas', ambient.pressurePa + gasInput.superpressurePa, 'Pa'),
+    source: SOURCES.given,
+  });
+  return { temperatureK, pressurePa };
+}
+
+/**
+ * Heated air is the surrounding air itself, warmed: the same composition and water content
+ * (its mole fraction of vapour does not change on heating, only its relative humidity falls),
+ * computed with the same density model as the air outside. With no superheat and no
+ * superpressure it is exactly the air outside, and lifts nothing.
+ */
+function deriveHeatedAir(
+  d: Derivation,
+  gasInput: GasInput,
+  ambient: AmbientState,
+): GasDerivedState {
+  const { temperatureK, pressurePa } = gasTemperatureAndPressure(d, gasInput, ambient);
+  let densityKgM3: number;
+  if (ambient.model === 'ussa1976') {
+    // The standard's dry ideal gas of fixed composition: density scales with p/T.
+    densityKgM3 = d.step({
+      id: 'gas-density',
+      label: 'Density of the heated air (the surrounding air at the gas temperature)',
+      formula: 'ρ_gas = ρ_air·(p_gas / p)·(T / T_gas)',
+      values: [
+        v('ρ_air', ambient.densityKgM3, 'kg/m³'),
+        v('p_gas', pressurePa, 'Pa'),
+        v('p', ambient.pressurePa, 'Pa'),
+        v('T', ambient.temperatureK, 'K'),
+        v('T_gas', temperatureK, 'K'),
+      ],
+      result: v(
+        'ρ_gas',
+        ambient.densityKgM3 *
+          (pressurePa / ambient.pressurePa) *
+          (ambient.temperatureK / temperatureK),
+        'kg/m³',
+      ),
+      source: `${SOURCES.ussa1976Density}; ${SOURCES.idealGas}`,
+    });
+  } else {
+    const air = moistAirDensity({
+      temperatureK,
+      pressurePa,
+      vapourMoleFraction: ambient.vapourMoleFraction,
+    });
+    const compressibility = d.step({
+      id: 'gas-compressibility',
+      label: 'Compressibility factor of the heated air',
+      formula:
+        'Z_gas = 1 − (p_gas/T_gas)·[a₀ + a₁t + a₂t² + (b₀ + b₁t)·x_v + (c₀ + c₁t)·x_v²] + (p_gas/T_gas)²·(d + e·x_v²)',
+      values: [
+        v('p_gas', pressurePa, 'Pa'),
+        v('T_gas', temperatureK, 'K'),
+        v('x_v', ambient.vapourMoleFraction, ''),
+      ],
+      result: v('Z_gas', air.compressibility, ''),
+      source: SOURCES.cipm2007,
+    });
+    densityKgM3 = d.step({
+      id: 'gas-density',
+      label: 'Density of the heated air (the surrounding air at the gas temperature)',
+      formula: 'ρ_gas = p_gas·M_a / (Z_gas·R·T_gas) · [1 − x_v·(1 − M_v/M_a)]',
+      values: [
+        v('p_gas', pressurePa, 'Pa'),
+        v('M_a', CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+        v('Z_gas', compressibility, ''),
+        v('R', CIPM_GAS_CONSTANT_J_PER_MOL_K, 'J/(mol·K)'),
+        v('T_gas', temperatureK, 'K'),
+        v('x_v', ambient.vapourMoleFraction, ''),
+        v('M_v', WATER_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+      ],
+      result: v('ρ_gas', air.densityKgM3, 'kg/m³'),
+      source: SOURCES.cipm2007,
+    });
+  }
+  warnAboutGas(d, gasInput);
+  return {
+    temperatureK,
+    pressurePa,
+    densityKgM3,
+    molarMassKgPerMol: ambient.molarMassKgPerMol,
+  };
 }
 
 function warnAboutGas(d: Derivation, gasInput: GasInput): void {

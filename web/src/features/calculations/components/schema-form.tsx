@@ -250,6 +250,14 @@ export function SchemaField({
   );
 }
 
+/** Whether the engine says this field means nothing given its siblings' values (`notWhen`). */
+function hiddenBy(field: Schema, siblings: Value): boolean {
+  const condition = asSchema(field.notWhen);
+  return Object.entries(condition).some(
+    ([key, values]) => Array.isArray(values) && values.includes(siblings[key]),
+  );
+}
+
 function ObjectFields({
   schema,
   path,
@@ -263,11 +271,18 @@ function ObjectFields({
 }: Omit<SchemaFieldProps, 'name' | 'required'> & { value: Value }) {
   const required = new Set((schema.required as string[] | undefined) ?? []);
   const sectionCurrency = typeof value.currency === 'string' ? value.currency : currency;
+  const properties = asSchema(schema.properties);
+  // A change that makes a field meaningless (purity once the gas is heated air) drops its value,
+  // so the engine's default stands and nothing hidden is refused.
+  const withoutHidden = (next: Value): Value =>
+    Object.fromEntries(
+      Object.entries(next).filter(([key]) => !hiddenBy(asSchema(properties[key]), next)),
+    );
   return (
     <>
-      {Object.entries(asSchema(schema.properties)).map(([key, property]) => {
+      {Object.entries(properties).map(([key, property]) => {
         const child = asSchema(property);
-        if (child.const !== undefined) return null;
+        if (child.const !== undefined || hiddenBy(child, value)) return null;
         return (
           <SchemaField
             key={key}
@@ -275,7 +290,7 @@ function ObjectFields({
             path={path ? `${path}.${key}` : key}
             schema={child}
             value={value[key]}
-            onChange={(next) => onChange({ ...value, [key]: next })}
+            onChange={(next) => onChange(withoutHidden({ ...value, [key]: next }))}
             unitSystem={unitSystem}
             errors={errors}
             notes={notes}
