@@ -5,4 +5,6 @@
 // 0.2.0: "check this" notes for values outside what the trade usually meets.
 // 0.3.0: a cushion's envelope mass from the film cut (two flat discs), not its inflated surface.
 // 0.4.0: heated air is the surrounding air at the gas temperature, in the air's own model.
-export const ENGINE_VERSION = '0.4.0';
+// 0.5.0: one air model in standard mode (humid air mixed into the standard's ideal gas); the
+// CIPM-2007 enhancement factor for water vapour in the lifting gas.
+export const ENGINE_VERSION = '0.5.0';

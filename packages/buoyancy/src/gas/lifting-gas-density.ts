@@ -2,7 +2,10 @@ import {
   CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL,
   WATER_MOLAR_MASS_KG_PER_MOL,
 } from '../atmosphere/moist-air-density.js';
-import { saturationVapourPressurePa } from '../atmosphere/saturation-vapour-pressure.js';
+import {
+  enhancementFactor,
+  saturationVapourPressurePa,
+} from '../atmosphere/saturation-vapour-pressure.js';
 import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
 import { InputError, requireInRange } from '../errors.js';
 import { GAS_CATALOGUE, type GasId } from './gas-catalogue.js';
@@ -35,7 +38,8 @@ export interface GasState {
 /**
  * Density of a lifting gas by the ideal-gas law at its own temperature and pressure,
  * ρ = p·M / (R·T), where M is the molar mass of the mixture: the named gas at the given purity, air
- * as the contaminant, and water vapour at the given relative humidity (xv = h·psv(T)/p).
+ * as the contaminant, and water vapour at the given relative humidity (xv = h·f(p,T)·psv(T)/p,
+ * with the CIPM-2007 enhancement factor f).
  * The ideal-gas law overstates H₂ and He density by about 6e-4 at 1 atm (Z ≈ 1.0005–1.0006);
  * see docs/physics.md.
  */
@@ -62,7 +66,12 @@ export function gasDensity(input: GasDensityInput): GasState {
   const vapourMoleFraction =
     relativeHumidity === 0
       ? 0
-      : (relativeHumidity * saturationVapourPressurePa(temperatureK)) / pressurePa;
+      : // The CIPM-2007 enhancement factor, as for the air: vapour in a gas at pressure holds a
+        // little more than over pure water.
+        (relativeHumidity *
+          enhancementFactor(pressurePa, temperatureK) *
+          saturationVapourPressurePa(temperatureK)) /
+        pressurePa;
   if (vapourMoleFraction >= 1) {
     throw new InputError(
       'temperatureK',

@@ -26,7 +26,7 @@ export const ambientAirKind = defineKind({
     d.output('temperature', 'Air temperature', 'air-temperature');
     d.output('pressure', 'Air pressure', 'air-pressure');
     d.output('density', 'Air density', 'air-density', air.context);
-    if (inputs.ambient.humidity.kind !== 'dry')
+    if (air.vapourMoleFraction > 0)
       d.output('vapourMoleFraction', 'Water vapour (mole fraction)', 'vapour-mole-fraction');
     return d.result();
   },

@@ -96,32 +96,57 @@ export function deriveAmbient(d: Derivation, ambient: AmbientInput): AmbientStat
       result: v('p', state.pressurePa, 'Pa'),
       source: SOURCES.ussa1976Pressure,
     });
-    if (ambient.humidity.kind === 'dry') {
-      const densityKgM3 = d.step({
-        id: 'air-density',
-        label: 'Density of the surrounding air (dry, 1976 standard)',
-        formula: 'ρ_air = p·M₀ / (R*·T)',
-        values: [
-          v('p', pressurePa, 'Pa'),
-          v('M₀', USSA1976_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
-          v('R*', USSA1976_GAS_CONSTANT_J_PER_MOL_K, 'J/(mol·K)'),
-          v('T', temperatureK, 'K'),
-        ],
-        result: v('ρ_air', state.densityKgM3, 'kg/m³'),
-        source: SOURCES.ussa1976Density,
-      });
-      return {
-        temperatureK,
-        pressurePa,
-        densityKgM3,
-        vapourMoleFraction: 0,
-        model: 'ussa1976',
-        // Above 80 km the standard's air is lighter than M₀ (Table 8); this is its actual one.
-        molarMassKgPerMol:
-          (densityKgM3 * USSA1976_GAS_CONSTANT_J_PER_MOL_K * temperatureK) / pressurePa,
-        context: describeAir(temperatureK, pressurePa, 'dry air'),
-      };
-    }
+    // One model in standard mode: the standard's own ideal gas, with water vapour mixed in as an
+    // ideal gas when a humidity is given. No humidity and 0 % are then the same air exactly, and
+    // dry air reproduces the standard's tables (CIPM-2007 real air is for measured air).
+    const { vapourMoleFraction, humidityText } = deriveVapour(d, ambient, temperatureK, pressurePa);
+    const dryDensityKgM3 = d.step({
+      id: vapourMoleFraction === 0 ? 'air-density' : 'dry-air-density',
+      label: 'Density of the surrounding air (dry, 1976 standard)',
+      formula: vapourMoleFraction === 0 ? 'ρ_air = p·M₀ / (R*·T)' : 'ρ_dry = p·M₀ / (R*·T)',
+      values: [
+        v('p', pressurePa, 'Pa'),
+        v('M₀', USSA1976_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+        v('R*', USSA1976_GAS_CONSTANT_J_PER_MOL_K, 'J/(mol·K)'),
+        v('T', temperatureK, 'K'),
+      ],
+      result: v(vapourMoleFraction === 0 ? 'ρ_air' : 'ρ_dry', state.densityKgM3, 'kg/m³'),
+      source: SOURCES.ussa1976Density,
+    });
+    const densityKgM3 =
+      vapourMoleFraction === 0
+        ? dryDensityKgM3
+        : d.step({
+            id: 'air-density',
+            label: 'Density of the surrounding air (1976 standard with water vapour)',
+            formula: 'ρ_air = ρ_dry·[1 − x_v·(1 − M_v/M₀)]',
+            values: [
+              v('ρ_dry', dryDensityKgM3, 'kg/m³'),
+              v('x_v', vapourMoleFraction, ''),
+              v('M_v', WATER_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+              v('M₀', USSA1976_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
+            ],
+            result: v(
+              'ρ_air',
+              dryDensityKgM3 *
+                (1 -
+                  vapourMoleFraction *
+                    (1 - WATER_MOLAR_MASS_KG_PER_MOL / USSA1976_AIR_MOLAR_MASS_KG_PER_MOL)),
+              'kg/m³',
+            ),
+            source: `${SOURCES.ussa1976Density}; ${SOURCES.mixture}`,
+          });
+    return {
+      temperatureK,
+      pressurePa,
+      densityKgM3,
+      vapourMoleFraction,
+      model: 'ussa1976',
+      // Above 80 km the standard's air is lighter than M₀ (Table 8); this is its actual one.
+      molarMassKgPerMol:
+        (densityKgM3 * USSA1976_GAS_CONSTANT_J_PER_MOL_K * temperatureK) / pressurePa,
+      context: describeAir(temperatureK, pressurePa, humidityText),
+    };
   } else {
     temperatureK = d.step({
       id: 'air-temperature',
@@ -143,15 +168,20 @@ export function deriveAmbient(d: Derivation, ambient: AmbientInput): AmbientStat
   return deriveRealAir(d, ambient, temperatureK, pressurePa);
 }
 
-function deriveRealAir(
+/** The air's water vapour mole fraction from its humidity, with a step for each quantity. */
+function deriveVapour(
   d: Derivation,
   ambient: AmbientInput,
   temperatureK: number,
   pressurePa: number,
-): AmbientState {
+): { vapourMoleFraction: number; humidityText: string } {
   const humidity = ambient.humidity;
   let vapourMoleFraction = 0;
   let humidityText = 'dry air';
+  // 0 % is dry air: no saturation pressure is needed, even where its formula does not reach.
+  if (humidity.kind === 'relative' && humidity.relativeHumidity === 0) {
+    return { vapourMoleFraction, humidityText: 'relative humidity 0 %' };
+  }
   if (humidity.kind !== 'dry') {
     const waterTemperatureK = humidity.kind === 'relative' ? temperatureK : humidity.dewPointK;
     if (humidity.kind === 'dewPoint' && humidity.dewPointK > temperatureK) {
@@ -231,6 +261,16 @@ function deriveRealAir(
         ? `relative humidity ${(humidity.relativeHumidity * 100).toFixed(0)} %`
         : `dew point ${(humidity.dewPointK - ZERO_CELSIUS_K).toFixed(1)} °C`;
   }
+  return { vapourMoleFraction, humidityText };
+}
+
+function deriveRealAir(
+  d: Derivation,
+  ambient: AmbientInput,
+  temperatureK: number,
+  pressurePa: number,
+): AmbientState {
+  const { vapourMoleFraction, humidityText } = deriveVapour(d, ambient, temperatureK, pressurePa);
   const air = moistAirDensity({ temperatureK, pressurePa, vapourMoleFraction });
   const compressibility = d.step({
     id: 'air-compressibility',

@@ -4,8 +4,11 @@ import {
   moistAirDensity,
   WATER_MOLAR_MASS_KG_PER_MOL,
 } from '../atmosphere/moist-air-density.js';
-import { saturationVapourPressurePa } from '../atmosphere/saturation-vapour-pressure.js';
-import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
+import {
+  enhancementFactor,
+  saturationVapourPressurePa,
+} from '../atmosphere/saturation-vapour-pressure.js';
+import { MOLAR_GAS_CONSTANT_J_PER_MOL_K, ZERO_CELSIUS_K } from '../constants.js';
 import { type Derivation, v } from '../derivation.js';
 import { InputError } from '../errors.js';
 import { GAS_CATALOGUE } from '../gas/gas-catalogue.js';
@@ -51,17 +54,26 @@ export function deriveGas(
       result: v('p_sv', saturationVapourPressurePa(temperatureK), 'Pa'),
       source: SOURCES.cipm2007Saturation,
     });
+    const f = d.step({
+      id: 'gas-enhancement-factor',
+      label: 'Enhancement factor of water vapour in the gas',
+      formula: 'f = α + β·p_gas + γ·t_gas²',
+      values: [v('p_gas', pressurePa, 'Pa'), v('t_gas', temperatureK - ZERO_CELSIUS_K, '°C')],
+      result: v('f', enhancementFactor(pressurePa, temperatureK), ''),
+      source: SOURCES.cipm2007,
+    });
     d.step({
       id: 'gas-vapour-mole-fraction',
       label: 'Mole fraction of water vapour in the gas',
-      formula: 'x_w = h_gas·p_sv / p_gas',
+      formula: 'x_w = h_gas·f·p_sv / p_gas',
       values: [
         v('h_gas', gasInput.relativeHumidity, ''),
+        v('f', f, ''),
         v('p_sv', psvPa, 'Pa'),
         v('p_gas', pressurePa, 'Pa'),
       ],
       result: v('x_w', state.vapourMoleFraction, ''),
-      source: SOURCES.mixture,
+      source: `${SOURCES.mixture}; ${SOURCES.cipm2007}`,
     });
     values.push(
       v('x_w', state.vapourMoleFraction, ''),
