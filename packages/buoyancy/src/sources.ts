@@ -23,6 +23,10 @@ export const SOURCES = {
     'cylinder with hemispherical ends: sum of cylinder and sphere (CRC Standard Mathematical Tables)',
   cushion:
     'inflated two-disc cushion: Paulsen, Amer. Math. Monthly 101 (1994) 953; Mladenov & Oprea, Amer. Math. Monthly 110 (2003) 761',
+  frontalCircle:
+    'projected area along the axis of a body of revolution: the disc of its widest section, π·r² (CRC Standard Mathematical Tables)',
+  frontalOutline:
+    'projected area across the axis: a rectangle d·(L − d) and two half-discs π·r² (CRC Standard Mathematical Tables)',
   disc: 'area of a disc π·r², twice for the two flat discs: CRC Standard Mathematical Tables',
   normalConditions: 'ideal-gas law between fill conditions and 0 °C, 101.325 kPa',
 } as const;

@@ -7,4 +7,5 @@
 // 0.4.0: heated air is the surrounding air at the gas temperature, in the air's own model.
 // 0.5.0: one air model in standard mode (humid air mixed into the standard's ideal gas); the
 // CIPM-2007 enhancement factor for water vapour in the lifting gas.
-export const ENGINE_VERSION = '0.5.0';
+// 0.6.0: a capsule's axis (end or side first) as an input; frontal areas cite their own source.
+export const ENGINE_VERSION = '0.6.0';

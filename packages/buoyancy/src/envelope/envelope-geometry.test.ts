@@ -60,6 +60,15 @@ describe('envelope geometry', () => {
     expect(sphereGeometry(2).filmAreaM2).toBe(sphereGeometry(2).surfaceAreaM2);
   });
 
+  it('gives a capsule moving side first the outline of its side as frontal area', () => {
+    // d = 2 m, L = 6 m: end on, the disc π·1² = 3.1416 m²; side on, the rectangle 2·4 = 8 m² and
+    // the two half-discs of the ends, π·1² (areas of a rectangle and a disc, CRC tables).
+    expect(capsuleGeometry(2, 6).frontalAreaM2).toBeCloseTo(Math.PI, 12);
+    expect(capsuleGeometry(2, 6, 'horizontal').frontalAreaM2).toBeCloseTo(8 + Math.PI, 12);
+    // Volume and surface do not depend on the way it lies.
+    expect(capsuleGeometry(2, 6, 'horizontal').volumeM3).toBe(capsuleGeometry(2, 6).volumeM3);
+  });
+
   it('refuses a capsule shorter than its diameter and a custom surface smaller than a sphere’s', () => {
     expect(() => envelopeGeometry({ shape: 'capsule', diameterM: 1, lengthM: 0.5 })).toThrow(
       InputError,

@@ -27,6 +27,9 @@ export interface EnvelopeGeometry {
   readonly referenceDiameterM: number;
 }
 
+/** Which way a capsule's axis lies as it climbs: along the climb (end on) or across it. */
+export type CapsuleAxis = 'vertical' | 'horizontal';
+
 /** The shapes and the measurements each is given by. */
 export type EnvelopeShape =
   | { readonly shape: 'sphere'; readonly diameterM: number }
@@ -35,7 +38,13 @@ export type EnvelopeShape =
       readonly equatorialDiameterM: number;
       readonly polarDiameterM: number;
     }
-  | { readonly shape: 'capsule'; readonly diameterM: number; readonly lengthM: number }
+  | {
+      readonly shape: 'capsule';
+      readonly diameterM: number;
+      readonly lengthM: number;
+      /** How it moves through the air: along its axis (default) or across it. */
+      readonly axis?: CapsuleAxis;
+    }
   | { readonly shape: 'cushion'; readonly flatDiameterM: number }
   | {
       readonly shape: 'custom';
@@ -95,16 +104,22 @@ export function spheroidGeometry(
 }
 
 /**
- * Cylinder with hemispherical ends, of diameter d and overall length L ≥ d, moving along its axis:
- * V = π·r²·(L − d) + 4/3·π·r³, S = 2π·r·(L − d) + 4π·r², frontal π·r².
+ * Cylinder with hemispherical ends, of diameter d and overall length L ≥ d:
+ * V = π·r²·(L − d) + 4/3·π·r³, S = 2π·r·(L − d) + 4π·r². Frontal area: π·r² moving along its axis
+ * (a vertical axis, end on), d·(L − d) + π·r² moving across it (the side's outline: a rectangle
+ * and the two half-discs of the ends).
  */
-export function capsuleGeometry(diameterM: number, lengthM: number): EnvelopeGeometry {
+export function capsuleGeometry(
+  diameterM: number,
+  lengthM: number,
+  axis: CapsuleAxis = 'vertical',
+): EnvelopeGeometry {
   const r = diameterM / 2;
   const cylinderLengthM = lengthM - diameterM;
   return finish(
     Math.PI * r * r * cylinderLengthM + (4 / 3) * Math.PI * r ** 3,
     2 * Math.PI * r * cylinderLengthM + 4 * Math.PI * r * r,
-    Math.PI * r * r,
+    axis === 'vertical' ? Math.PI * r * r : diameterM * cylinderLengthM + Math.PI * r * r,
   );
 }
 
@@ -164,7 +179,7 @@ export function envelopeGeometry(
         ENVELOPE_SIZE_RANGE_M.max * 4,
         'm',
       );
-      return capsuleGeometry(diameterM, lengthM);
+      return capsuleGeometry(diameterM, lengthM, envelope.axis);
     }
     case 'cushion':
       return cushionGeometry(size('flatDiameterM', envelope.flatDiameterM));

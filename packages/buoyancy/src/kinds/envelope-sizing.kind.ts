@@ -9,7 +9,7 @@ import { ENVELOPE_SIZE_RANGE_M, type EnvelopeShape } from '../envelope/envelope-
 import { GAS_CATALOGUE } from '../gas/gas-catalogue.js';
 import { findRoot } from '../numerics/find-root.js';
 import { ambientSchema } from '../schema/ambient-schema.js';
-import { envelopeMassSchema, type EnvelopeInput } from '../schema/envelope-schema.js';
+import { capsuleAxis, envelopeMassSchema, type EnvelopeInput } from '../schema/envelope-schema.js';
 import { gasSchema } from '../schema/gas-schema.js';
 import { quantity } from '../schema/quantity-schema.js';
 import { SOURCES } from '../sources.js';
@@ -48,6 +48,7 @@ const shapeFamilySchema = z
       .object({
         shape: z.literal('capsule'),
         lengthToDiameterRatio: quantity('coefficient', 1, 20, 'overall length over diameter'),
+        axis: capsuleAxis,
       })
       .strict(),
     z.object({ shape: z.literal('cushion') }).strict(),
@@ -109,7 +110,12 @@ function envelopeAtSize(family: ShapeFamily, sizeM: number): EnvelopeInput & Env
         polarDiameterM: sizeM * family.polarToEquatorialRatio,
       };
     case 'capsule':
-      return { shape: 'capsule', diameterM: sizeM, lengthM: sizeM * family.lengthToDiameterRatio };
+      return {
+        shape: 'capsule',
+        diameterM: sizeM,
+        lengthM: sizeM * family.lengthToDiameterRatio,
+        axis: family.axis,
+      };
     case 'cushion':
       return { shape: 'cushion', flatDiameterM: sizeM };
   }
@@ -123,7 +129,7 @@ function familyGeometry(family: ShapeFamily, sizeM: number): EnvelopeGeometry {
     case 'spheroid':
       return spheroidGeometry(sizeM, sizeM * family.polarToEquatorialRatio);
     case 'capsule':
-      return capsuleGeometry(sizeM, sizeM * family.lengthToDiameterRatio);
+      return capsuleGeometry(sizeM, sizeM * family.lengthToDiameterRatio, family.axis);
     case 'cushion':
       return cushionGeometry(sizeM);
   }

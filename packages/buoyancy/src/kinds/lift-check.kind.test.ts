@@ -129,4 +129,20 @@ describe('lift-check', () => {
     // A sphere has no separate film output: its film is its surface.
     expect(evaluate('lift-check', base).outputs.filmArea).toBeUndefined();
   });
+
+  it('takes the capsule’s axis as an input and cites the frontal area’s own source', () => {
+    const capsule = (axis?: string) =>
+      evaluate('lift-check', {
+        ...base,
+        envelope: { shape: 'capsule', diameterM: 2, lengthM: 6, ...(axis ? { axis } : {}) },
+      });
+    const endOn = capsule();
+    const sideOn = capsule('horizontal');
+    expect(endOn.outputs.frontalArea?.value).toBeCloseTo(Math.PI, 12);
+    expect(sideOn.outputs.frontalArea?.value).toBeCloseTo(8 + Math.PI, 12);
+    const frontal = endOn.steps.find((step) => step.id === 'frontal-area');
+    const volume = endOn.steps.find((step) => step.id === 'volume');
+    expect(frontal?.source).toMatch(/projected area/);
+    expect(frontal?.source).not.toBe(volume?.source);
+  });
 });

@@ -1,5 +1,6 @@
 import * as z from 'zod';
 import { ENVELOPE_SIZE_RANGE_M } from '../envelope/envelope-geometry.js';
+import { choice } from './choice-schema.js';
 import { quantity } from './quantity-schema.js';
 import { type UsualRange, usually } from './usual-range.js';
 import { USUAL } from './usual-ranges.js';
@@ -9,6 +10,13 @@ const size = (description: string, usual: UsualRange = USUAL.envelopeAcrossM) =>
     quantity('length', ENVELOPE_SIZE_RANGE_M.min, ENVELOPE_SIZE_RANGE_M.max, description),
     usual,
   );
+
+/** Which way a capsule lies as it climbs: it decides the frontal area, and so the drag. */
+export const capsuleAxis = choice(
+  ['vertical', 'horizontal'],
+  (axis) => (axis === 'vertical' ? 'Axis vertical (end first)' : 'Axis horizontal (side first)'),
+  'which way its axis lies as it climbs',
+).default('vertical');
 
 /** An envelope's shape and the measurement it is given by. */
 export const envelopeSchema = z
@@ -41,6 +49,7 @@ export const envelopeSchema = z
           quantity('length', ENVELOPE_SIZE_RANGE_M.min, 2000, 'overall length, ends included'),
           USUAL.envelopeLengthM,
         ),
+        axis: capsuleAxis,
       })
       .strict(),
     z

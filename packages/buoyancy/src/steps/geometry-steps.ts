@@ -42,37 +42,42 @@ function toShape(d: Derivation, envelope: EnvelopeInput): EnvelopeShape {
 
 const FORMULAS: Record<
   EnvelopeShape['shape'],
-  { volume: string; surface: string; frontal: string; source: string }
+  { volume: string; surface: string; frontal: string; source: string; frontalSource: string }
 > = {
   sphere: {
     volume: 'V = π·d³ / 6',
     surface: 'S = π·d²',
     frontal: 'A = π·d² / 4',
     source: SOURCES.sphere,
+    frontalSource: SOURCES.frontalCircle,
   },
   spheroid: {
     volume: 'V = (4/3)·π·a²·c',
     surface: 'S = 2πa²·(1 + (1 − e²)/e·artanh e) (oblate) or 2πa²·(1 + c/(a·e)·arcsin e) (prolate)',
     frontal: 'A = π·a²',
     source: SOURCES.spheroid,
+    frontalSource: SOURCES.frontalCircle,
   },
   capsule: {
     volume: 'V = π·r²·(L − d) + (4/3)·π·r³',
     surface: 'S = 2π·r·(L − d) + 4π·r²',
     frontal: 'A = π·r²',
     source: SOURCES.capsule,
+    frontalSource: SOURCES.frontalCircle,
   },
   cushion: {
     volume: 'V = (2/3)·π·a·r², r = a / 1.3110287771',
     surface: 'S = π²·r²',
     frontal: 'A = π·r² (face on)',
     source: SOURCES.cushion,
+    frontalSource: `${SOURCES.frontalCircle}; inflated radius: ${SOURCES.cushion}`,
   },
   custom: {
     volume: 'V = V_given',
     surface: 'S = S_given, else that of the sphere of volume V',
     frontal: 'A = A_given, else that of the sphere of volume V',
     source: SOURCES.given,
+    frontalSource: SOURCES.given,
   },
 };
 
@@ -120,13 +125,16 @@ export function deriveGeometry(d: Derivation, envelope: EnvelopeInput): Envelope
     result: v('S', geometry.surfaceAreaM2, 'm²'),
     source: formulas.source,
   });
+  const sideways = shape.shape === 'capsule' && shape.axis === 'horizontal';
   d.step({
     id: 'frontal-area',
-    label: 'Frontal area (facing the direction of motion)',
-    formula: formulas.frontal,
+    label: sideways
+      ? 'Frontal area (side first: the outline across the axis)'
+      : 'Frontal area (facing the direction of motion)',
+    formula: sideways ? 'A = d·(L − d) + π·r²' : formulas.frontal,
     values,
     result: v('A', geometry.frontalAreaM2, 'm²'),
-    source: formulas.source,
+    source: sideways ? SOURCES.frontalOutline : formulas.frontalSource,
   });
   if (shape.shape === 'cushion') {
     // The film cut differs from the inflated surface only for the flat-seamed cushion.
