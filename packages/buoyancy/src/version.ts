@@ -8,4 +8,5 @@
 // 0.5.0: one air model in standard mode (humid air mixed into the standard's ideal gas); the
 // CIPM-2007 enhancement factor for water vapour in the lifting gas.
 // 0.6.0: a capsule's axis (end or side first) as an input; frontal areas cite their own source.
-export const ENGINE_VERSION = '0.6.0';
+// 0.7.0: a stack voltage too low for its cells refused.
+export const ENGINE_VERSION = '0.7.0';

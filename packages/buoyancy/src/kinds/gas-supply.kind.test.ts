@@ -80,6 +80,26 @@ describe('gas-supply: metered energy and prices', () => {
   });
 });
 
+describe('gas-supply: an electrolyser the inputs cannot drive', () => {
+  it('refuses a stack voltage spread over more cells than it can drive, naming the cell count', () => {
+    // 24 V across 30 cells is 0.8 V a cell: below any cell's floor, and far below the reversible
+    // voltage of water electrolysis, 1.2288 V at 25 °C (−ΔfG° of liquid water over 2F, NIST-JANAF).
+    const ask = (cellsInSeries: number) => () =>
+      evaluate('gas-supply', {
+        fill: normalFill,
+        electrolyser: {
+          currentA: 10,
+          cellsInSeries,
+          voltage: { kind: 'stack', stackVoltageV: 24 },
+        },
+      });
+    expect(ask(30)).toThrow(InputError);
+    expect(ask(30)).toThrow(/electrolyser\.cellsInSeries.*0\.800 V across each cell/);
+    // 24 V across 12 cells, 2 V each, works.
+    expect(ask(12)).not.toThrow();
+  });
+});
+
 describe('gas-supply: cylinders', () => {
   it('corrects helium at 200 bar with NIST’s second virial coefficient (Z ≈ 1.09)', () => {
     // NIST SRD 134: B(He, 300 K) = 11.8 cm³/mol -> Z = 1 + B·p/(R·T) at 200 bar gauge, 15 °C.

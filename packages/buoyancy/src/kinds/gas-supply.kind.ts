@@ -22,6 +22,8 @@ import { usually } from '../schema/usual-range.js';
 import { USUAL } from '../schema/usual-ranges.js';
 
 const J_PER_WH = 3600;
+/** Lowest voltage across one cell the kind accepts, typed or from a stack [V]. */
+const CELL_VOLTAGE_FLOOR_V = 1;
 
 const electrolyserSchema = z
   .object({
@@ -33,7 +35,7 @@ const electrolyserSchema = z
         .object({
           kind: z.literal('cell'),
           cellVoltageV: usually(
-            quantity('voltage', 1, 5, 'voltage across one cell'),
+            quantity('voltage', CELL_VOLTAGE_FLOOR_V, 5, 'voltage across one cell'),
             USUAL.cellVoltageV,
           ),
         })
@@ -155,6 +157,18 @@ export const gasSupplyKind = defineKind({
 
     if (inputs.electrolyser) {
       const e = inputs.electrolyser;
+      if (e.voltage.kind === 'stack') {
+        // A stack voltage shared by more cells than it can drive splits no water: refused, not
+        // turned into hydrogen from nothing. The floor is the one a single cell's field has.
+        const perCellV = e.voltage.stackVoltageV / e.cellsInSeries;
+        if (perCellV < CELL_VOLTAGE_FLOOR_V) {
+          throw new InputError(
+            'electrolyser.cellsInSeries',
+            e.cellsInSeries,
+            `leaves ${perCellV.toPrecision(3)} V across each cell of a ${e.voltage.stackVoltageV} V stack, below ${CELL_VOLTAGE_FLOOR_V} V: no water is split (the reversible voltage of water electrolysis is 1.2288 V at 25 °C); fewer cells or a higher stack voltage`,
+          );
+        }
+      }
       const molPerS = d.step({
         id: 'hydrogen-rate',
         label: "Hydrogen produced (Faraday's law)",
