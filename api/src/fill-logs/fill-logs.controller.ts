@@ -82,7 +82,7 @@ export class FillLogsController {
         { header: 'Predicted net lift (kg)', value: (log) => output(log, 'predictedNetLift') },
         { header: 'Measured less predicted (kg)', value: (log) => output(log, 'difference') },
         { header: 'Difference (%)', value: (log) => output(log, 'differencePercent') },
-        { header: 'Explaining purity', value: (log) => output(log, 'explainingPurity') },
+        { header: 'Explaining purity (%)', value: (log) => output(log, 'explainingPurity') },
         { header: 'Half-life of lift (days)', value: (log) => output(log, 'halfLife') },
         { header: 'Loss rate (%/day)', value: (log) => output(log, 'lossRate') },
         { header: 'Note', value: (log) => log.note, width: 40 },

@@ -29,6 +29,28 @@ const readingSchema = z.discriminatedUnion('kind', [
     .strict(),
 ]);
 
+/**
+ * What the instruments can tell apart. Defaults (common practice, no published source): a kitchen
+ * or postal scale showing whole grams, and a ballast known to half a gram.
+ */
+const instrumentSchema = z
+  .object({
+    scaleResolutionKg: quantity(
+      'mass',
+      0,
+      10,
+      'smallest step the scale (or spring, or load cell) shows',
+    ).default(0.001),
+    ballastToleranceKg: quantity(
+      'mass',
+      0,
+      10,
+      'how far the ballast may be off its stated mass',
+    ).default(0.0005),
+  })
+  .strict()
+  .meta({ description: 'Instruments' });
+
 export const liftMeasurementSchema = z
   .object({
     readings: z
@@ -46,10 +68,38 @@ export const liftMeasurementSchema = z
       .strict()
       .optional()
       .meta({ description: 'The envelope as filled and the air as logged, to compare with' }),
+    instrument: instrumentSchema.default({ scaleResolutionKg: 0.001, ballastToleranceKg: 0.0005 }),
   })
   .strict();
 
 export type LiftMeasurementInput = z.input<typeof liftMeasurementSchema>;
+
+const SQRT3 = Math.sqrt(3);
+
+/**
+ * Expanded uncertainty of the measured net lift, k = 2 (about 95 %), after the GUM (JCGM
+ * 100:2008): a scale's resolution δ as a rectangular distribution of half-width δ/2, u = δ/(2√3)
+ * (F.2.2.1); a ballast's tolerance ±a likewise, u = a/√3 (4.3.7); combined in quadrature (5.1.2).
+ */
+function deriveLiftUncertainty(
+  d: Derivation,
+  instrument: { scaleResolutionKg: number; ballastToleranceKg: number },
+  readingKind: 'ballast' | 'direct' | undefined,
+): number {
+  const uScaleKg = instrument.scaleResolutionKg / (2 * SQRT3);
+  const uBallastKg = readingKind === 'ballast' ? instrument.ballastToleranceKg / SQRT3 : 0;
+  return d.step({
+    id: 'lift-uncertainty',
+    label: 'Uncertainty of the measured lift (k = 2, about 95 %)',
+    formula: readingKind === 'ballast' ? 'U = 2·√((δ/(2√3))² + (a/√3)²)' : 'U = 2·δ/(2√3)',
+    values: [
+      v('δ', instrument.scaleResolutionKg, 'kg'),
+      ...(readingKind === 'ballast' ? [v('a', instrument.ballastToleranceKg, 'kg')] : []),
+    ],
+    result: v('U', 2 * Math.hypot(uScaleKg, uBallastKg), 'kg'),
+    source: 'GUM (JCGM 100:2008) 4.3.7, 5.1.2 and F.2.2.1: rectangular distributions, k = 2',
+  });
+}
 
 export const liftMeasurementKind = defineKind({
   id: 'lift-measurement',
@@ -94,6 +144,8 @@ export const liftMeasurementKind = defineKind({
     });
     d.output('measuredNetLift', 'Measured net lift', 'measured-net-lift');
     const measuredKg = series[0]?.netLiftKg ?? 0;
+    const uncertaintyKg = deriveLiftUncertainty(d, inputs.instrument, inputs.readings[0]?.kind);
+    d.output('measuredUncertainty', 'Uncertainty of the measured lift (k = 2)', 'lift-uncertainty');
 
     if (inputs.prediction) {
       const predict = (purity: number) =>
@@ -136,18 +188,55 @@ export const liftMeasurementKind = defineKind({
       const surplus = (purity: number) => predict(purity) - measuredKg;
       const pureSurplus = surplus(1);
       const lowSurplus = surplus(MIN_PURITY);
+      const withinUncertainty = Math.abs(measuredKg - predictedKg) <= uncertaintyKg;
+      if (withinUncertainty) {
+        d.warn({
+          code: 'within-measurement-uncertainty',
+          severity: 'note',
+          message:
+            'The measured lift agrees with the prediction within the measurement uncertainty: the difference is no evidence of impure gas or a leak.',
+          field: 'readings',
+        });
+      }
       if (pureSurplus >= 0 && lowSurplus <= 0) {
         const purity = findRoot(surplus, MIN_PURITY, 1, { xTolerance: 1e-10 });
         d.step({
           id: 'explaining-purity',
           label: 'Gas purity that would explain the measured lift (the rest air)',
-          formula: 'x such that L_net(x) = L_net,measured',
+          formula: 'x such that L_net(x) = L_net,measured, in %',
           values: [v('L_net,measured', measuredKg, 'kg'), v('L_net(x = 1)', predictedKg, 'kg')],
-          result: v('x', purity, ''),
+          // In % as purity is typed and shown everywhere else.
+          result: v('x', purity * 100, '%'),
           source: "Brent's method on the lift check with air as the contaminant",
         });
         d.output('explainingPurity', 'Purity that explains the measurement', 'explaining-purity');
-      } else {
+        // The band of purities the measurement allows: the lift at its ends, ∓U.
+        const purityAt = (liftKg: number) => {
+          const off = (x: number) => predict(x) - liftKg;
+          if (off(1) <= 0) return 1;
+          if (off(MIN_PURITY) >= 0) return MIN_PURITY;
+          return findRoot(off, MIN_PURITY, 1, { xTolerance: 1e-10 });
+        };
+        const low = purityAt(measuredKg - uncertaintyKg);
+        const high = purityAt(measuredKg + uncertaintyKg);
+        d.step({
+          id: 'explaining-purity-uncertainty',
+          label: 'Uncertainty of that purity (from the measured lift ∓ U)',
+          formula: 'Δx = (x(L_net,measured + U) − x(L_net,measured − U)) / 2',
+          values: [
+            v('x_low', low * 100, '%'),
+            v('x_high', high * 100, '%'),
+            v('U', uncertaintyKg, 'kg'),
+          ],
+          result: v('Δx', ((high - low) / 2) * 100, '%'),
+          source: 'the lift check solved at both ends of the measured lift’s uncertainty',
+        });
+        d.output(
+          'explainingPurityUncertainty',
+          'Uncertainty of the explaining purity',
+          'explaining-purity-uncertainty',
+        );
+      } else if (!withinUncertainty) {
         d.warn({
           code: pureSurplus < 0 ? 'lift-above-pure-gas' : 'lift-below-half-purity',
           severity: 'warning',

