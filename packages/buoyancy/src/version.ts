@@ -10,4 +10,5 @@
 // 0.6.0: a capsule's axis (end or side first) as an input; frontal areas cite their own source.
 // 0.7.0: a stack voltage too low for its cells refused.
 // 0.8.0: measured lift with a GUM uncertainty, verdicts only outside it; explaining purity in %.
-export const ENGINE_VERSION = '0.8.0';
+// 0.9.0: cylinders only of gases with a real-gas model (helium, hydrogen).
+export const ENGINE_VERSION = '0.9.0';

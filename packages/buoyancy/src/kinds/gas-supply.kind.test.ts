@@ -124,6 +124,20 @@ describe('gas-supply: cylinders', () => {
     expect(result.warnings.map((warning) => warning.code)).toContain('pressurised-cylinder');
   });
 
+  it('refuses cylinders of a gas it has no real-gas model for, naming the field', () => {
+    // Methane is far from ideal at 200 bar and ammonia is liquid there: no number is better than
+    // the ideal-gas law's wrong one.
+    for (const gasId of ['methane', 'ammonia', 'neon', 'hot-air']) {
+      const ask = () =>
+        evaluate('gas-supply', {
+          fill: { volumeM3: 1, temperatureK: 288.15, pressurePa: 101325, count: 1 },
+          cylinder: { gasId, waterVolumeM3: 0.05, fillPressurePa: 2e7, temperatureK: 288.15 },
+        });
+      expect(ask).toThrow(InputError);
+      expect(ask).toThrow(/cylinder\.gasId.*Helium.*Hydrogen/);
+    }
+  });
+
   it('refuses a cylinder returned at or above its fill pressure, naming the field', () => {
     const inputs = {
       fill: { volumeM3: 1, temperatureK: 288.15, pressurePa: 101325, count: 1 },

@@ -7,11 +7,12 @@ import {
 } from '../constants.js';
 import { Derivation, v } from '../derivation.js';
 import { InputError } from '../errors.js';
-import { GAS_CATALOGUE, GAS_IDS } from '../gas/gas-catalogue.js';
+import { GAS_CATALOGUE } from '../gas/gas-catalogue.js';
 import { gasChoice } from '../schema/choice-schema.js';
 import { count, fraction, money, quantity } from '../schema/quantity-schema.js';
 import { SOURCES } from '../sources.js';
 import {
+  CYLINDER_GAS_IDS,
   cylinderDeliverableMol,
   SECOND_VIRIAL_M3_PER_MOL,
   virialCompressibility,
@@ -53,7 +54,7 @@ const electrolyserSchema = z
 
 const cylinderSchema = z
   .object({
-    gasId: gasChoice(GAS_IDS, 'gas in the cylinders'),
+    gasId: gasChoice(CYLINDER_GAS_IDS, 'gas in the cylinders'),
     waterVolumeM3: quantity('volume', 0.0001, 10, 'internal (water) volume of one cylinder'),
     fillPressurePa: quantity('pressureDifference', 1e5, 1e8, 'gauge pressure of a full cylinder'),
     residualPressurePa: quantity(

@@ -14,6 +14,13 @@ export const SECOND_VIRIAL_M3_PER_MOL: Partial<
   hydrogen: { value: 14e-6, source: 'value from memory (13.7–15 cm³/mol in the literature)' },
 };
 
+/**
+ * Gases the engine can put in a cylinder: those with a real-gas model above. The others are far
+ * from ideal at cylinder pressures (methane) or liquefy there (ammonia); the ideal-gas law would
+ * promise gas the cylinder does not hold, so they are refused rather than guessed.
+ */
+export const CYLINDER_GAS_IDS = ['helium', 'hydrogen'] as const satisfies readonly GasId[];
+
 /** Compressibility Z = 1 + B·p/(R·T), the virial equation truncated after B. */
 export function virialCompressibility(
   gasId: GasId,
