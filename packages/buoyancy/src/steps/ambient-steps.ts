@@ -1,9 +1,6 @@
 import {
-  CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL,
-  CIPM_GAS_CONSTANT_J_PER_MOL_K,
   CIPM_VALIDITY,
   WATER_MOLAR_MASS_KG_PER_MOL,
-  moistAirDensity,
   vapourMoleFractionFromDewPoint,
   vapourMoleFractionFromRelativeHumidity,
 } from '../atmosphere/moist-air-density.js';
@@ -27,6 +24,7 @@ import { type Derivation, v } from '../derivation.js';
 import { InputError } from '../errors.js';
 import type { AmbientInput } from '../schema/ambient-schema.js';
 import { SOURCES } from '../sources.js';
+import { deriveCipmDensity } from './cipm-density-steps.js';
 
 export interface AmbientState {
   readonly temperatureK: number;
@@ -271,32 +269,15 @@ function deriveRealAir(
   pressurePa: number,
 ): AmbientState {
   const { vapourMoleFraction, humidityText } = deriveVapour(d, ambient, temperatureK, pressurePa);
-  const air = moistAirDensity({ temperatureK, pressurePa, vapourMoleFraction });
-  const compressibility = d.step({
-    id: 'air-compressibility',
-    label: 'Compressibility factor of the air',
-    formula:
-      'Z = 1 − (p/T)·[a₀ + a₁t + a₂t² + (b₀ + b₁t)·x_v + (c₀ + c₁t)·x_v²] + (p/T)²·(d + e·x_v²)',
-    values: [v('p', pressurePa, 'Pa'), v('T', temperatureK, 'K'), v('x_v', vapourMoleFraction, '')],
-    result: v('Z', air.compressibility, ''),
-    source: SOURCES.cipm2007,
-  });
-  const densityKgM3 = d.step({
-    id: 'air-density',
-    label: 'Density of the surrounding air',
-    formula: 'ρ_air = p·M_a / (Z·R·T) · [1 − x_v·(1 − M_v/M_a)]',
-    values: [
-      v('p', pressurePa, 'Pa'),
-      v('M_a', CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
-      v('Z', compressibility, ''),
-      v('R', CIPM_GAS_CONSTANT_J_PER_MOL_K, 'J/(mol·K)'),
-      v('T', temperatureK, 'K'),
-      v('x_v', vapourMoleFraction, ''),
-      v('M_v', WATER_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
-    ],
-    result: v('ρ_air', air.densityKgM3, 'kg/m³'),
-    source: SOURCES.cipm2007,
-  });
+  const { densityKgM3, molarMassKgPerMol } = deriveCipmDensity(
+    d,
+    { temperatureK, pressurePa, vapourMoleFraction },
+    {
+      kind: 'air',
+      compressibilityLabel: 'Compressibility factor of the air',
+      densityLabel: 'Density of the surrounding air',
+    },
+  );
   const outsideFit =
     pressurePa < CIPM_VALIDITY.pressurePa.min ||
     pressurePa > CIPM_VALIDITY.pressurePa.max ||
@@ -317,7 +298,7 @@ function deriveRealAir(
     densityKgM3,
     vapourMoleFraction,
     model: 'cipm2007',
-    molarMassKgPerMol: air.molarMassKgPerMol,
+    molarMassKgPerMol,
     context: describeAir(temperatureK, pressurePa, humidityText),
   };
 }

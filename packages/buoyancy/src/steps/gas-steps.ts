@@ -1,7 +1,5 @@
 import {
   CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL,
-  CIPM_GAS_CONSTANT_J_PER_MOL_K,
-  moistAirDensity,
   WATER_MOLAR_MASS_KG_PER_MOL,
 } from '../atmosphere/moist-air-density.js';
 import {
@@ -15,6 +13,7 @@ import { GAS_CATALOGUE } from '../gas/gas-catalogue.js';
 import { GAS_TEMPERATURE_RANGE_K, gasDensity } from '../gas/lifting-gas-density.js';
 import type { GasInput } from '../schema/gas-schema.js';
 import { SOURCES } from '../sources.js';
+import { deriveCipmDensity } from './cipm-density-steps.js';
 import type { AmbientState } from './ambient-steps.js';
 
 export interface GasDerivedState {
@@ -183,40 +182,15 @@ function deriveHeatedAir(
       source: `${SOURCES.ussa1976Density}; ${SOURCES.idealGas}`,
     });
   } else {
-    const air = moistAirDensity({
-      temperatureK,
-      pressurePa,
-      vapourMoleFraction: ambient.vapourMoleFraction,
-    });
-    const compressibility = d.step({
-      id: 'gas-compressibility',
-      label: 'Compressibility factor of the heated air',
-      formula:
-        'Z_gas = 1 − (p_gas/T_gas)·[a₀ + a₁t + a₂t² + (b₀ + b₁t)·x_v + (c₀ + c₁t)·x_v²] + (p_gas/T_gas)²·(d + e·x_v²)',
-      values: [
-        v('p_gas', pressurePa, 'Pa'),
-        v('T_gas', temperatureK, 'K'),
-        v('x_v', ambient.vapourMoleFraction, ''),
-      ],
-      result: v('Z_gas', air.compressibility, ''),
-      source: SOURCES.cipm2007,
-    });
-    densityKgM3 = d.step({
-      id: 'gas-density',
-      label: 'Density of the heated air (the surrounding air at the gas temperature)',
-      formula: 'ρ_gas = p_gas·M_a / (Z_gas·R·T_gas) · [1 − x_v·(1 − M_v/M_a)]',
-      values: [
-        v('p_gas', pressurePa, 'Pa'),
-        v('M_a', CIPM_DRY_AIR_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
-        v('Z_gas', compressibility, ''),
-        v('R', CIPM_GAS_CONSTANT_J_PER_MOL_K, 'J/(mol·K)'),
-        v('T_gas', temperatureK, 'K'),
-        v('x_v', ambient.vapourMoleFraction, ''),
-        v('M_v', WATER_MOLAR_MASS_KG_PER_MOL, 'kg/mol'),
-      ],
-      result: v('ρ_gas', air.densityKgM3, 'kg/m³'),
-      source: SOURCES.cipm2007,
-    });
+    ({ densityKgM3 } = deriveCipmDensity(
+      d,
+      { temperatureK, pressurePa, vapourMoleFraction: ambient.vapourMoleFraction },
+      {
+        kind: 'gas',
+        compressibilityLabel: 'Compressibility factor of the heated air',
+        densityLabel: 'Density of the heated air (the surrounding air at the gas temperature)',
+      },
+    ));
   }
   warnAboutGas(d, gasInput);
   return {
