@@ -104,7 +104,14 @@ export type { FlightProfileInput } from './kinds/flight-profile.kind.js';
 export { JURISDICTION_PROFILES } from './rules/jurisdiction-profiles.js';
 export type { JurisdictionProfile, RuleThreshold } from './rules/jurisdiction-profiles.js';
 export { HYDROGEN_HHV_J_PER_KG, hydrogenMolarRateMolPerS } from './supply/electrolysis.js';
-export { cylinderDeliverableMol, virialCompressibility } from './supply/cylinder.js';
+export {
+  CYLINDER_COMPRESSIBILITY,
+  cylinderCompressibility,
+  cylinderDeliverableMol,
+} from './supply/cylinder.js';
+export type { CompressibilityModel } from './supply/compressibility-model.js';
+export { heliumCompressibility } from './supply/helium-compressibility.js';
+export { hydrogenCompressibility } from './supply/hydrogen-compressibility.js';
 export { fitLiftRetention } from './measurement/lift-retention.js';
 export type { LiftReading, RetentionFit } from './measurement/lift-retention.js';
 export { kindsMarkdown } from './kinds/kinds-markdown.js';

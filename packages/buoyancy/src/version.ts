@@ -11,4 +11,6 @@
 // 0.7.0: a stack voltage too low for its cells refused.
 // 0.8.0: measured lift with a GUM uncertainty, verdicts only outside it; explaining purity in %.
 // 0.9.0: cylinders only of gases with a real-gas model (helium, hydrogen).
-export const ENGINE_VERSION = '0.9.0';
+// 0.10.0: cylinder gas from published real-gas models (hydrogen: Lemmon, Huber & Leachman 2008;
+// helium: NIST IR 8474), with the residual gas's own compressibility.
+export const ENGINE_VERSION = '0.10.0';

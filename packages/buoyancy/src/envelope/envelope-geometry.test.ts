@@ -1,3 +1,4 @@
+import { Constants, Geodesic } from 'geographiclib-geodesic';
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../errors.js';
 import {
@@ -18,11 +19,15 @@ describe('envelope geometry', () => {
     expect(sphere.referenceDiameterM).toBeCloseTo(2, 12);
   });
 
-  it('gives the surface of the WGS 84 ellipsoid, 510 065 621.724 km², as an oblate spheroid', () => {
-    // WGS 84: a = 6 378 137 m, c = 6 356 752.314 245 m; surface area 510 065 621.724 km²
-    // (value from memory, as commonly quoted for the WGS 84 ellipsoid).
-    const earth = spheroidGeometry(2 * 6378137, 2 * 6356752.314245);
-    expect(earth.surfaceAreaM2 / 1e6).toBeCloseTo(510065621.724, 2);
+  it('gives the surface of the WGS 84 ellipsoid as GeographicLib does, as an oblate spheroid', () => {
+    // Reference library: geographiclib-geodesic (C. F. F. Karney), its WGS 84 constants and the
+    // area of the geodesic polygon along the equator (one hemisphere), doubled.
+    const { a, f } = Constants.WGS84;
+    const hemisphere = Geodesic.WGS84.Polygon(false);
+    for (const longitude of [0, 90, 180, 270]) hemisphere.AddPoint(0, longitude);
+    const referenceAreaM2 = 2 * Math.abs(hemisphere.Compute(false, true).area ?? NaN);
+    const earth = spheroidGeometry(2 * a, 2 * a * (1 - f));
+    expect(Math.abs(earth.surfaceAreaM2 / referenceAreaM2 - 1)).toBeLessThan(1e-12);
   });
 
   it('tends to the sphere from both sides (oblate and prolate formulas agree at a = c)', () => {

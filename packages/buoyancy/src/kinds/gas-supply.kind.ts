@@ -12,10 +12,12 @@ import { gasChoice } from '../schema/choice-schema.js';
 import { count, fraction, money, quantity } from '../schema/quantity-schema.js';
 import { SOURCES } from '../sources.js';
 import {
+  assertWithinCompressibilityModel,
+  CYLINDER_COMPRESSIBILITY,
   CYLINDER_GAS_IDS,
+  CYLINDER_REFUSAL_REASON,
+  cylinderCompressibility,
   cylinderDeliverableMol,
-  SECOND_VIRIAL_M3_PER_MOL,
-  virialCompressibility,
 } from '../supply/cylinder.js';
 import { HYDROGEN_HHV_J_PER_KG, hydrogenMolarRateMolPerS } from '../supply/electrolysis.js';
 import { defineKind } from './kind.js';
@@ -54,7 +56,7 @@ const electrolyserSchema = z
 
 const cylinderSchema = z
   .object({
-    gasId: gasChoice(CYLINDER_GAS_IDS, 'gas in the cylinders'),
+    gasId: gasChoice(CYLINDER_GAS_IDS, 'gas in the cylinders', CYLINDER_REFUSAL_REASON),
     waterVolumeM3: quantity('volume', 0.0001, 10, 'internal (water) volume of one cylinder'),
     fillPressurePa: quantity('pressureDifference', 1e5, 1e8, 'gauge pressure of a full cylinder'),
     residualPressurePa: quantity(
@@ -371,18 +373,23 @@ export const gasSupplyKind = defineKind({
       }
       const fillAbsPa = c.fillPressurePa + NORMAL_PRESSURE_PA;
       const residualAbsPa = c.residualPressurePa + NORMAL_PRESSURE_PA;
-      const virial = SECOND_VIRIAL_M3_PER_MOL[c.gasId];
+      const model = CYLINDER_COMPRESSIBILITY[c.gasId];
+      assertWithinCompressibilityModel(model, fillAbsPa, c.temperatureK);
       const zFill = d.step({
         id: 'cylinder-compressibility',
         label: 'Compressibility of the full cylinder',
-        formula: 'Z = 1 + B·p / (R·T)',
-        values: [
-          v('B', virial?.value ?? 0, 'm³/mol'),
-          v('p', fillAbsPa, 'Pa'),
-          v('T', c.temperatureK, 'K'),
-        ],
-        result: v('Z', virialCompressibility(c.gasId, fillAbsPa, c.temperatureK), ''),
-        source: `virial equation to the second coefficient; B: ${virial?.source ?? 'not known, taken as ideal'}`,
+        formula: model.formula,
+        values: [v('p', fillAbsPa, 'Pa'), v('T', c.temperatureK, 'K')],
+        result: v('Z_f', cylinderCompressibility(c.gasId, fillAbsPa, c.temperatureK), ''),
+        source: model.source,
+      });
+      const zResidual = d.step({
+        id: 'cylinder-residual-compressibility',
+        label: 'Compressibility of the gas left in a returned cylinder',
+        formula: model.formula,
+        values: [v('p', residualAbsPa, 'Pa'), v('T', c.temperatureK, 'K')],
+        result: v('Z_r', cylinderCompressibility(c.gasId, residualAbsPa, c.temperatureK), ''),
+        source: model.source,
       });
       const mol = d.step({
         id: 'cylinder-amount',
@@ -393,6 +400,7 @@ export const gasSupplyKind = defineKind({
           v('p_f', fillAbsPa, 'Pa'),
           v('Z_f', zFill, ''),
           v('p_r', residualAbsPa, 'Pa'),
+          v('Z_r', zResidual, ''),
           v('T', c.temperatureK, 'K'),
         ],
         result: v(
@@ -406,7 +414,7 @@ export const gasSupplyKind = defineKind({
           ),
           'mol',
         ),
-        source: 'real-gas amount from the truncated virial equation',
+        source: 'real-gas law p = Z·(n/V)·R·T at both pressures',
       });
       const perCylinderM3 = d.step({
         id: 'cylinder-volume',

@@ -1,34 +1,35 @@
 import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
+import { InputError } from '../errors.js';
 import type { GasId } from '../gas/gas-catalogue.js';
+import type { CompressibilityModel } from './compressibility-model.js';
+import { HELIUM_COMPRESSIBILITY } from './helium-compressibility.js';
+import { HYDROGEN_COMPRESSIBILITY } from './hydrogen-compressibility.js';
 
 /**
- * Second virial coefficients near room temperature [m³/mol], for the compressibility of cylinder
- * gas, Z = 1 + B·p/(R·T). Helium: +11.8 cm³/mol at 300 K (NIST SRD 134, ab initio helium
- * properties). Hydrogen: about +14 cm³/mol near 290 K (value from memory; literature gives
- * 13.7–15). Gases without an entry are taken as ideal (Z = 1).
- */
-export const SECOND_VIRIAL_M3_PER_MOL: Partial<
-  Record<GasId, { readonly value: number; readonly source: string }>
-> = {
-  helium: { value: 11.8e-6, source: 'NIST SRD 134 (helium, 300 K)' },
-  hydrogen: { value: 14e-6, source: 'value from memory (13.7–15 cm³/mol in the literature)' },
-};
-
-/**
- * Gases the engine can put in a cylinder: those with a real-gas model above. The others are far
+ * The published real-gas model of each gas the engine can put in a cylinder. The others are far
  * from ideal at cylinder pressures (methane) or liquefy there (ammonia); the ideal-gas law would
  * promise gas the cylinder does not hold, so they are refused rather than guessed.
  */
-export const CYLINDER_GAS_IDS = ['helium', 'hydrogen'] as const satisfies readonly GasId[];
+export const CYLINDER_COMPRESSIBILITY = {
+  helium: HELIUM_COMPRESSIBILITY,
+  hydrogen: HYDROGEN_COMPRESSIBILITY,
+} as const satisfies Partial<Record<GasId, CompressibilityModel>>;
 
-/** Compressibility Z = 1 + B·p/(R·T), the virial equation truncated after B. */
-export function virialCompressibility(
-  gasId: GasId,
+export type CylinderGasId = keyof typeof CYLINDER_COMPRESSIBILITY;
+
+export const CYLINDER_GAS_IDS = ['helium', 'hydrogen'] as const satisfies readonly CylinderGasId[];
+
+/** Why a catalogue gas without a model is not offered for cylinders, shown with the refusal. */
+export const CYLINDER_REFUSAL_REASON =
+  'Only gases with a published real-gas model can be stored in cylinders here: methane is far from ideal at cylinder pressure (Z well below 1), ammonia is liquid in a cylinder above its vapour pressure, and neon and heated air are not bottled for lifting';
+
+/** Compressibility factor Z = p/(ρ_n·R·T) of a cylinder gas at an absolute pressure. */
+export function cylinderCompressibility(
+  gasId: CylinderGasId,
   pressurePa: number,
   temperatureK: number,
 ): number {
-  const b = SECOND_VIRIAL_M3_PER_MOL[gasId]?.value ?? 0;
-  return 1 + (b * pressurePa) / (MOLAR_GAS_CONSTANT_J_PER_MOL_K * temperatureK);
+  return CYLINDER_COMPRESSIBILITY[gasId].compressibility(pressurePa, temperatureK);
 }
 
 /**
@@ -37,16 +38,44 @@ export function virialCompressibility(
  * @returns amount of gas [mol]
  */
 export function cylinderDeliverableMol(
-  gasId: GasId,
+  gasId: CylinderGasId,
   waterVolumeM3: number,
   fillPressurePa: number,
   residualPressurePa: number,
   temperatureK: number,
 ): number {
-  const zFill = virialCompressibility(gasId, fillPressurePa, temperatureK);
-  const zResidual = virialCompressibility(gasId, residualPressurePa, temperatureK);
+  const zFill = cylinderCompressibility(gasId, fillPressurePa, temperatureK);
+  const zResidual = cylinderCompressibility(gasId, residualPressurePa, temperatureK);
   return (
     (waterVolumeM3 * (fillPressurePa / zFill - residualPressurePa / zResidual)) /
     (MOLAR_GAS_CONSTANT_J_PER_MOL_K * temperatureK)
   );
+}
+
+/**
+ * Refuses a cylinder state outside the range the model's publication vouches for, naming the
+ * cylinder's field, rather than extrapolating a fitted equation.
+ */
+export function assertWithinCompressibilityModel(
+  model: CompressibilityModel,
+  fillPressurePa: number,
+  temperatureK: number,
+): void {
+  const { minTemperatureK, maxTemperatureK, maxPressurePa } = model.validity;
+  if (temperatureK < minTemperatureK || temperatureK > maxTemperatureK) {
+    throw new InputError(
+      'cylinder.temperatureK',
+      temperatureK,
+      `is outside the range of the gas's real-gas model (${model.source})`,
+      { min: minTemperatureK, max: maxTemperatureK, unit: 'K' },
+    );
+  }
+  if (fillPressurePa > maxPressurePa) {
+    throw new InputError(
+      'cylinder.fillPressurePa',
+      fillPressurePa,
+      `is above the range of the gas's real-gas model (${model.source})`,
+      { max: maxPressurePa, unit: 'Pa' },
+    );
+  }
 }
