@@ -77,6 +77,37 @@ describe('fill logs', () => {
     });
   });
 
+  it('keeps the logged instruments and widens the measured lift’s uncertainty with them', async () => {
+    const instrument = { scaleResolutionKg: 0.01, ballastToleranceKg: 0.002 };
+    const coarse = await create(owner, fillLog({ instrument }));
+    expect(coarse.status).toBe(201);
+    expect(coarse.body.instrument).toEqual(instrument);
+    const fine = await create(owner, fillLog());
+    expect(fine.body.instrument).toBeNull();
+    // GUM (JCGM 100:2008) rectangular distributions, k = 2: δ/(2√3) for the scale, a/√3 for
+    // the ballast.
+    const expected = 2 * Math.hypot(0.01 / (2 * Math.sqrt(3)), 0.002 / Math.sqrt(3));
+    expect(coarse.body.outputs.measuredUncertainty.value).toBeCloseTo(expected, 12);
+    expect(fine.body.outputs.measuredUncertainty.value).toBeLessThan(expected / 5);
+    // Still there after an import of more readings.
+    const imported = await request(server())
+      .post(`/api/fill-logs/${coarse.body.id}/readings`)
+      .set(owner.auth)
+      .send({
+        mode: 'append',
+        readings: [{ kind: 'ballast', timeS: 3600, ballastMassKg: 0.5, scaleReadingKg: 0.32 }],
+      });
+    expect(imported.status).toBe(201);
+    expect(imported.body.outputs.measuredUncertainty.value).toBeCloseTo(expected, 12);
+
+    const refused = await create(
+      owner,
+      fillLog({ instrument: { scaleResolutionKg: -0.001, ballastToleranceKg: 0 } }),
+    );
+    expect(refused.status).toBe(422);
+    expect(JSON.stringify(refused.body)).toMatch(/instrument\.scaleResolutionKg/);
+  });
+
   it('ignores numbers a client sends as results', async () => {
     const response = await create(owner, {
       ...fillLog(),

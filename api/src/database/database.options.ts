@@ -24,6 +24,7 @@ import { OutboxAttachments1764727200000 } from './migrations/1764727200000-outbo
 import { GasPlans1764730800000 } from './migrations/1764730800000-gas-plans';
 import { Classrooms1764734400000 } from './migrations/1764734400000-classrooms';
 import { UserNumberFormatCurrency1764738000000 } from './migrations/1764738000000-user-number-format-currency';
+import { FillLogInstrument1764741600000 } from './migrations/1764741600000-fill-log-instrument';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -53,6 +54,7 @@ export const MIGRATIONS = [
   GasPlans1764730800000,
   Classrooms1764734400000,
   UserNumberFormatCurrency1764738000000,
+  FillLogInstrument1764741600000,
 ];
 
 /**

@@ -10,6 +10,7 @@ export interface FillLogView {
   gasSource: string;
   ambient: unknown;
   readings: unknown[];
+  instrument: { scaleResolutionKg: number; ballastToleranceKg: number } | null;
   note: string;
   outputs: unknown;
   steps: unknown;
@@ -35,6 +36,7 @@ export function fillLogView(
     gasSource: log.gasSource,
     ambient: log.ambient,
     readings: log.readings,
+    instrument: log.instrument,
     note: log.note,
     outputs: log.outputs,
     steps: log.steps,

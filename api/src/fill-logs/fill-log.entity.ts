@@ -38,6 +38,10 @@ export class FillLog {
   @Column('simple-json')
   readings: unknown[];
 
+  /** The scale's resolution and the ballast's tolerance [kg]; null: the engine's stated defaults. */
+  @Column('simple-json', { nullable: true })
+  instrument: { scaleResolutionKg: number; ballastToleranceKg: number } | null;
+
   @Column('varchar', { default: '' })
   note: string;
 

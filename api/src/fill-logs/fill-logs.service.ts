@@ -4,6 +4,7 @@ import {
   ENGINE_VERSION,
   type FillAmbient,
   type FillReading,
+  type LiftInstrument,
   fillDesignFromVersion,
   reduceFillLog,
 } from '@loftwright/buoyancy';
@@ -53,6 +54,7 @@ export class FillLogsService {
     log: {
       ambient: unknown;
       readings: unknown[];
+      instrument?: LiftInstrument | null;
     },
   ) {
     const version = await this.calculations.findVersion(calculation.id, versionNumber);
@@ -61,6 +63,7 @@ export class FillLogsService {
       ambient: log.ambient as FillAmbient,
       readings: log.readings as FillReading[],
       ...(design ? { design } : {}),
+      ...(log.instrument ? { instrument: log.instrument } : {}),
     });
     return {
       outputs: result.outputs,
@@ -93,6 +96,7 @@ export class FillLogsService {
         gasSource: dto.gasSource,
         ambient: { ...dto.ambient },
         readings: dto.readings,
+        instrument: dto.instrument ? { ...dto.instrument } : null,
         note: dto.note ?? '',
         ...reduced,
       }),
@@ -142,6 +146,7 @@ export class FillLogsService {
       gasSource: dto.gasSource ?? log.gasSource,
       ambient: dto.ambient ? { ...dto.ambient } : log.ambient,
       readings: dto.readings ?? log.readings,
+      instrument: dto.instrument ? { ...dto.instrument } : log.instrument,
       note: dto.note ?? log.note,
     };
     const reduced = await this.reduce(calculation, log.versionNumber, next);
@@ -167,6 +172,7 @@ export class FillLogsService {
     const reduced = await this.reduce(calculation, log.versionNumber, {
       ambient: log.ambient,
       readings,
+      instrument: log.instrument,
     });
     await this.writeLock.run(() => this.logs.update({ id }, { readings, ...reduced } as never));
     await this.audit.record({

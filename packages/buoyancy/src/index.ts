@@ -122,6 +122,8 @@ export {
 export { diffInputs, diffOutputs } from './compare/result-diff.js';
 export type { InputChange, OutputChange } from './compare/result-diff.js';
 export { fillDesignFromVersion, reduceFillLog } from './measurement/fill-log.js';
+export { INSTRUMENT_DEFAULTS } from './kinds/lift-measurement.kind.js';
+export type { LiftInstrument } from './kinds/lift-measurement.kind.js';
 export type {
   FillAmbient,
   FillDesign,

@@ -31,6 +31,23 @@ export class FillAmbientDto {
   relativeHumidity?: number;
 }
 
+/** What the scale and the ballast can tell apart; the engine checks the ranges. */
+export class FillInstrumentDto {
+  @ApiProperty({
+    description: 'smallest step the scale (or spring, or load cell) shows [kg]',
+    example: 0.001,
+  })
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  scaleResolutionKg: number;
+
+  @ApiProperty({
+    description: 'how far the ballast may be off its stated mass [kg]',
+    example: 0.0005,
+  })
+  @IsNumber({ allowNaN: false, allowInfinity: false })
+  ballastToleranceKg: number;
+}
+
 export class CreateFillLogDto {
   @ApiProperty({ example: '2026-11-28T09:40:00Z' })
   @IsISO8601({ strict: true }, { message: 'filledAt must be a date and time (ISO 8601)' })
@@ -66,6 +83,15 @@ export class CreateFillLogDto {
   @ArrayMaxSize(1000)
   @IsObject({ each: true, message: 'each reading must be an object' })
   readings: Record<string, unknown>[];
+
+  @ApiPropertyOptional({
+    type: FillInstrumentDto,
+    description: 'the instruments; the engine’s stated defaults when absent',
+  })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => FillInstrumentDto)
+  instrument?: FillInstrumentDto;
 
   @ApiPropertyOptional()
   @IsOptional()

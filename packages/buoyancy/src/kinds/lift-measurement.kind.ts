@@ -33,6 +33,17 @@ const readingSchema = z.discriminatedUnion('kind', [
  * What the instruments can tell apart. Defaults (common practice, no published source): a kitchen
  * or postal scale showing whole grams, and a ballast known to half a gram.
  */
+export const INSTRUMENT_DEFAULTS = {
+  scaleResolutionKg: 0.001,
+  ballastToleranceKg: 0.0005,
+} as const;
+
+/** What the scale and the ballast of a lift measurement can tell apart [kg]. */
+export interface LiftInstrument {
+  scaleResolutionKg: number;
+  ballastToleranceKg: number;
+}
+
 const instrumentSchema = z
   .object({
     scaleResolutionKg: quantity(
@@ -40,13 +51,13 @@ const instrumentSchema = z
       0,
       10,
       'smallest step the scale (or spring, or load cell) shows',
-    ).default(0.001),
+    ).default(INSTRUMENT_DEFAULTS.scaleResolutionKg),
     ballastToleranceKg: quantity(
       'mass',
       0,
       10,
       'how far the ballast may be off its stated mass',
-    ).default(0.0005),
+    ).default(INSTRUMENT_DEFAULTS.ballastToleranceKg),
   })
   .strict()
   .meta({ description: 'Instruments' });
@@ -68,7 +79,7 @@ export const liftMeasurementSchema = z
       .strict()
       .optional()
       .meta({ description: 'The envelope as filled and the air as logged, to compare with' }),
-    instrument: instrumentSchema.default({ scaleResolutionKg: 0.001, ballastToleranceKg: 0.0005 }),
+    instrument: instrumentSchema.default(INSTRUMENT_DEFAULTS),
   })
   .strict();
 

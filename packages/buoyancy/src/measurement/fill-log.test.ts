@@ -36,6 +36,30 @@ describe('reduceFillLog', () => {
     ]);
   });
 
+  it('carries the logged instruments into the measured lift’s uncertainty', () => {
+    const log = {
+      ambient,
+      design,
+      readings: [{ kind: 'ballast' as const, timeS: 0, ballastMassKg: 0.5, scaleReadingKg: 0.14 }],
+    };
+    const withDefaults = reduceFillLog(log).result.outputs.measuredUncertainty?.value ?? NaN;
+    const coarse = reduceFillLog({
+      ...log,
+      instrument: { scaleResolutionKg: 0.01, ballastToleranceKg: 0.002 },
+    }).result.outputs.measuredUncertainty?.value;
+    // GUM (JCGM 100:2008) 4.3.7 and F.2.2.1: a resolution δ and a tolerance ±a as rectangular
+    // distributions, u = δ/(2√3) and a/√3, expanded with k = 2.
+    const expected = 2 * Math.hypot(0.01 / (2 * Math.sqrt(3)), 0.002 / Math.sqrt(3));
+    expect(coarse).toBeCloseTo(expected, 12);
+    expect(withDefaults).toBeCloseTo(
+      2 * Math.hypot(0.001 / (2 * Math.sqrt(3)), 0.0005 / Math.sqrt(3)),
+      12,
+    );
+    expect(() =>
+      reduceFillLog({ ...log, instrument: { scaleResolutionKg: -1, ballastToleranceKg: 0 } }),
+    ).toThrow(/instrument\.scaleResolutionKg/);
+  });
+
   it('predicts each reading at the air logged with it', () => {
     // At fixed pressure the gross lift goes as 1/T (ideal gas): 10 K colder is
     // 288.15/278.15 = 1.03595 times the gross lift, 0.55298 kg × 1.03595 = 0.57286 kg,

@@ -2,6 +2,7 @@ import { AIR_PRESSURE_RANGE_PA, AIR_TEMPERATURE_RANGE_K } from '../atmosphere/ai
 import type { CalculationResult } from '../derivation.js';
 import { InputError, type InputIssue } from '../errors.js';
 import { evaluate } from '../kinds/registry.js';
+import type { LiftInstrument } from '../kinds/lift-measurement.kind.js';
 
 /** One lift reading of a fill, with the air at that moment where it was logged. */
 export type FillReading =
@@ -105,6 +106,8 @@ export function reduceFillLog(log: {
   ambient: FillAmbient;
   readings: readonly FillReading[];
   design?: FillDesign;
+  /** The scale's resolution and the ballast's tolerance; the kind's stated defaults when absent. */
+  instrument?: LiftInstrument;
 }): FillLogReduction {
   checkAir(log.ambient, log.readings);
   const readings = log.readings.map((reading) =>
@@ -120,7 +123,11 @@ export function reduceFillLog(log: {
   const prediction = log.design ? { ...log.design, ambient: measuredAir(log.ambient) } : undefined;
   let result: CalculationResult;
   try {
-    result = evaluate('lift-measurement', { readings, ...(prediction ? { prediction } : {}) });
+    result = evaluate('lift-measurement', {
+      readings,
+      ...(prediction ? { prediction } : {}),
+      ...(log.instrument ? { instrument: log.instrument } : {}),
+    });
   } catch (error) {
     if (!(error instanceof InputError)) throw error;
     // The prediction's air is the log's ambient; everything else keeps its own path.

@@ -1,4 +1,9 @@
-import type { CalculationResult, FillAmbient, FillReading } from '@loftwright/buoyancy';
+import type {
+  CalculationResult,
+  FillAmbient,
+  FillReading,
+  LiftInstrument,
+} from '@loftwright/buoyancy';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
 
@@ -20,6 +25,7 @@ export interface FillLog {
   gasSource: string;
   ambient: FillAmbient;
   readings: FillReading[];
+  instrument: LiftInstrument | null;
   note: string;
   outputs: CalculationResult['outputs'];
   steps: CalculationResult['steps'];
@@ -38,6 +44,7 @@ export interface FillLogDraft {
   gasSource: string;
   ambient: FillAmbient;
   readings: FillReading[];
+  instrument: LiftInstrument;
   note: string;
 }
 

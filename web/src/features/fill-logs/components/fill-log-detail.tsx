@@ -1,4 +1,5 @@
 import { Button, Col, Collapse, Descriptions, Popconfirm, Row, Space, Table } from 'antd';
+import { INSTRUMENT_DEFAULTS } from '@loftwright/buoyancy';
 import type { FillReading, UnitSystem } from '@loftwright/buoyancy';
 import { type ReactNode, useState } from 'react';
 import { DerivationPanel } from '@/components/results/derivation-panel';
@@ -46,6 +47,13 @@ export function FillLogDetail({
             key: 'air',
             label: 'Air',
             children: `${show(log.ambient.temperatureK, 'temperature')}, ${show(log.ambient.pressurePa, 'pressure')}${log.ambient.relativeHumidity === undefined ? ', dry' : `, ${display.fixed(log.ambient.relativeHumidity * 100, 0)} % RH`}`,
+          },
+          {
+            key: 'instrument',
+            label: 'Instruments',
+            children: log.instrument
+              ? `scale shows ${show(log.instrument.scaleResolutionKg, 'mass')} steps, ballast ± ${show(log.instrument.ballastToleranceKg, 'mass')}`
+              : `defaults: scale shows ${show(INSTRUMENT_DEFAULTS.scaleResolutionKg, 'mass')} steps, ballast ± ${show(INSTRUMENT_DEFAULTS.ballastToleranceKg, 'mass')}`,
           },
           { key: 'version', label: 'Against version', children: `v${log.versionNumber}` },
         ]}

@@ -88,6 +88,21 @@ describe('the fill-log form', () => {
     expect(save).toBeEnabled();
   });
 
+  it('starts the instruments at the engine’s stated defaults and refuses a negative resolution', async () => {
+    renderForm({ status: 'success', inputs: liftCheckInputs });
+    const resolution = await screen.findByLabelText('Scale resolution');
+    const tolerance = screen.getByLabelText('Ballast tolerance (±)');
+    expect(resolution).toHaveValue('1 g');
+    expect(tolerance).toHaveValue('0.5 g');
+    await userEvent.clear(resolution);
+    await userEvent.type(resolution, '-2 g');
+    fireEvent.blur(resolution);
+    expect(screen.getByRole('button', { name: 'Save fill log' })).toBeDisabled();
+    expect(screen.getByRole('alert')).toHaveTextContent(
+      /Scale resolution: must be between 0 kg and 10 kg/,
+    );
+  });
+
   it('holds saving back while a field does not read, and names it', async () => {
     const user = userEvent.setup();
     renderForm({ status: 'success', inputs: liftCheckInputs });

@@ -5,6 +5,7 @@ import {
   type InputFieldInfo,
   formatQuantity,
   formatRange,
+  INSTRUMENT_DEFAULTS,
   type NumberFormat,
   type UnitSystem,
 } from '@loftwright/buoyancy';
@@ -76,6 +77,8 @@ const FILL_LOG_FIELDS: Record<string, InputFieldInfo> = {
   ballastMassKg: { label: 'ballast mass', dimension: 'mass' },
   scaleReadingKg: { label: 'scale reading', dimension: 'mass' },
   netLiftKg: { label: 'net lift', dimension: 'mass' },
+  'instrument.scaleResolutionKg': { label: 'Scale resolution', dimension: 'mass' },
+  'instrument.ballastToleranceKg': { label: 'Ballast tolerance (±)', dimension: 'mass' },
   filledAt: { label: 'Filled at' },
   place: { label: 'Place' },
   envelopeLabel: { label: 'Envelope' },
@@ -172,6 +175,12 @@ export function FillLogForm({
     setPressurePa(air.pressurePa);
     setRelativeHumidity(air.relativeHumidity);
   }
+  const [scaleResolutionKg, setScaleResolutionKg] = useState<number | undefined>(
+    INSTRUMENT_DEFAULTS.scaleResolutionKg,
+  );
+  const [ballastToleranceKg, setBallastToleranceKg] = useState<number | undefined>(
+    INSTRUMENT_DEFAULTS.ballastToleranceKg,
+  );
   const [note, setNote] = useState('');
   const [rows, setRows] = useState<ReadingRow[]>([{ kind: 'ballast', timeS: 0 }]);
   const setRow = (index: number, change: Partial<ReadingRow>) =>
@@ -182,6 +191,8 @@ export function FillLogForm({
     temperatureK !== undefined &&
     pressurePa !== undefined &&
     filledAt !== '' &&
+    scaleResolutionKg !== undefined &&
+    ballastToleranceKg !== undefined &&
     readings.every((reading) => reading !== undefined);
 
   // The server's ranges, checked here too: each field says it as it is typed, and saving waits.
@@ -203,6 +214,18 @@ export function FillLogForm({
       value: relativeHumidity,
       range: FILL_LOG_RANGES.relativeHumidity,
       dimension: 'fraction',
+    },
+    {
+      label: 'Scale resolution',
+      value: scaleResolutionKg,
+      range: FILL_LOG_RANGES.scaleResolutionKg,
+      dimension: 'mass',
+    },
+    {
+      label: 'Ballast tolerance (±)',
+      value: ballastToleranceKg,
+      range: FILL_LOG_RANGES.ballastToleranceKg,
+      dimension: 'mass',
     },
     ...rows.flatMap((row, index): RangedField[] => [
       {
@@ -261,6 +284,10 @@ export function FillLogForm({
         ...(relativeHumidity === undefined ? {} : { relativeHumidity }),
       },
       readings: readings as FillReading[],
+      instrument: {
+        scaleResolutionKg: scaleResolutionKg as number,
+        ballastToleranceKg: ballastToleranceKg as number,
+      },
       note,
     };
     create.mutate(
@@ -374,6 +401,38 @@ export function FillLogForm({
             less what the scale shows. Or enter a net lift read directly from a spring balance or
             load cell.
           </Typography.Paragraph>
+          <Space wrap align="start" role="group" aria-label="Instruments">
+            <Form.Item
+              label="Scale resolution"
+              htmlFor={`${idPrefix}-resolution`}
+              extra="The smallest step the scale, spring or load cell shows."
+            >
+              <QuantityInput
+                id={`${idPrefix}-resolution`}
+                label="Scale resolution"
+                dimension="mass"
+                value={scaleResolutionKg}
+                onChange={setScaleResolutionKg}
+                unitSystem={unitSystem}
+                range={FILL_LOG_RANGES.scaleResolutionKg}
+              />
+            </Form.Item>
+            <Form.Item
+              label="Ballast tolerance (±)"
+              htmlFor={`${idPrefix}-tolerance`}
+              extra="How far the ballast may be off its stated mass."
+            >
+              <QuantityInput
+                id={`${idPrefix}-tolerance`}
+                label="Ballast tolerance (±)"
+                dimension="mass"
+                value={ballastToleranceKg}
+                onChange={setBallastToleranceKg}
+                unitSystem={unitSystem}
+                range={FILL_LOG_RANGES.ballastToleranceKg}
+              />
+            </Form.Item>
+          </Space>
           {rows.map((row, index) => (
             <Space key={index} wrap align="start" aria-label={`Reading ${index + 1}`} role="group">
               <Form.Item label={`Reading ${index + 1}`}>

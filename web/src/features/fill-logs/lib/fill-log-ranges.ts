@@ -56,6 +56,8 @@ export const FILL_LOG_RANGES = {
   ballastMassKg: liftMeasurementRange('readings.ballastMassKg'),
   scaleReadingKg: liftMeasurementRange('readings.scaleReadingKg'),
   netLiftKg: liftMeasurementRange('readings.netLiftKg'),
+  scaleResolutionKg: liftMeasurementRange('instrument.scaleResolutionKg'),
+  ballastToleranceKg: liftMeasurementRange('instrument.ballastToleranceKg'),
 } as const satisfies Record<string, ValueRange>;
 
 /** Whether a value that reads lies outside its range (an empty field is not outside). */
