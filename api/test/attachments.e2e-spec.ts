@@ -218,6 +218,26 @@ describe('attachments', () => {
     expect((await request(server()).get(first.body.contentUrl).set(owner.auth)).status).toBe(404);
   });
 
+  it('never loses an acknowledged upload to a removal of the same content running at once', async () => {
+    // Removing the last record's bytes and recording a new reference to them are one decision:
+    // whichever comes second sees the other. Twenty rounds, each with its own content.
+    const lost: number[] = [];
+    for (let round = 0; round < 20; round += 1) {
+      const bytes = Buffer.from(`time_s,scale_kg\n0,0.${round}${Date.now()}\n`);
+      const first = await upload(owner, bytes, `race-${round}.csv`);
+      expect(first.status).toBe(201);
+      const [removed, again] = await Promise.all([
+        request(server()).delete(`/api/attachments/${first.body.id}`).set(owner.auth),
+        upload(owner, bytes, `race-${round}-again.csv`),
+      ]);
+      expect(removed.status).toBe(204);
+      expect(again.status).toBe(201);
+      const read = await request(server()).get(again.body.contentUrl).set(owner.auth);
+      if (read.status !== 200 || read.text !== bytes.toString()) lost.push(round);
+    }
+    expect(lost).toEqual([]);
+  });
+
   it('turns away ids that try to walk out of the upload folder', async () => {
     for (const id of ['..%2F..%2Fetc%2Fpasswd', '..', '%2e%2e%2floftwright.sqlite']) {
       const response = await request(server())

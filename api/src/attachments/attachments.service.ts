@@ -108,23 +108,31 @@ export class AttachmentsService {
       versionNumber: number | null;
     },
   ): Promise<AttachmentView> {
-    // The file goes down first: a crash in between leaves an unreferenced file, never a row
-    // pointing at nothing.
-    const sha256 = await this.store.put(bytes);
+    // The bytes go down (synced) first, outside the lock; then, under the write lock, they are
+    // put under their hash and the record is inserted, as one decision against removals (which
+    // delete, count and remove under the same lock). A crash in between leaves an unreferenced
+    // file, never a row pointing at nothing.
+    const staged = await this.store.stage(bytes);
+    const { sha256 } = staged;
     const id = randomUUID();
-    await this.writeLock.run(() =>
-      insertRow(this.attachments, {
-        id,
-        calculationId,
-        fillLogId: meta.fillLogId,
-        versionNumber: meta.versionNumber,
-        sha256,
-        sizeBytes: bytes.length,
-        mediaType: meta.mediaType,
-        fileName: meta.fileName,
-        uploadedBy: user?.id ?? null,
-      }),
-    );
+    try {
+      await this.writeLock.run(async () => {
+        await this.store.commit(staged);
+        await insertRow(this.attachments, {
+          id,
+          calculationId,
+          fillLogId: meta.fillLogId,
+          versionNumber: meta.versionNumber,
+          sha256,
+          sizeBytes: bytes.length,
+          mediaType: meta.mediaType,
+          fileName: meta.fileName,
+          uploadedBy: user?.id ?? null,
+        });
+      });
+    } finally {
+      await this.store.discard(staged);
+    }
     await this.audit.record({
       actorId: user?.id ?? null,
       action: 'attachment.add',
@@ -175,11 +183,7 @@ export class AttachmentsService {
         message: 'The archived sign-off of an approved version stays; only an admin removes it.',
       });
     }
-    const stillUsed = await this.writeLock.run(async () => {
-      await this.attachments.delete({ id });
-      return this.attachments.countBy({ sha256: attachment.sha256 });
-    });
-    if (stillUsed === 0) await this.store.remove(attachment.sha256);
+    await this.removeRecord(attachment);
     await this.audit.record({
       actorId: user.id,
       action: 'attachment.remove',
@@ -192,12 +196,20 @@ export class AttachmentsService {
   /** A fill log's files go with it; stored bytes stay while another record uses them. */
   async removeForFillLog(fillLogId: string): Promise<void> {
     const rows = await this.attachments.findBy({ fillLogId });
-    for (const row of rows) {
-      const stillUsed = await this.writeLock.run(async () => {
-        await this.attachments.delete({ id: row.id });
-        return this.attachments.countBy({ sha256: row.sha256 });
-      });
-      if (stillUsed === 0) await this.store.remove(row.sha256);
-    }
+    for (const row of rows) await this.removeRecord(row);
+  }
+
+  /**
+   * Deletes a record and, when it was the last to use them, its bytes, in one step under the
+   * write lock, so an upload of the same content (which commits its bytes and inserts its record
+   * under the same lock) comes wholly before or wholly after.
+   */
+  private async removeRecord(row: Attachment): Promise<void> {
+    await this.writeLock.run(async () => {
+      await this.attachments.delete({ id: row.id });
+      if ((await this.attachments.countBy({ sha256: row.sha256 })) === 0) {
+        await this.store.remove(row.sha256);
+      }
+    });
   }
 }

@@ -8,6 +8,12 @@ import type { EnvironmentVariables } from '../config/env.validation';
 
 const SHA256_HEX = /^[0-9a-f]{64}$/;
 
+/** Bytes written and synced to a temporary file, not yet visible under their hash. */
+export interface StagedUpload {
+  readonly sha256: string;
+  readonly temporaryPath: string;
+}
+
 /**
  * Files under DATA_DIR/uploads, each named by the SHA-256 of its bytes (two-character fan-out
  * folders keep directories small). A path is only ever built from a checked hash, so no name
@@ -29,22 +35,37 @@ export class UploadStore {
     return path;
   }
 
-  /** Stores the bytes (once per content) and returns their hash; written, synced, then renamed. */
-  async put(bytes: Buffer): Promise<string> {
+  /**
+   * Writes the bytes to a temporary file, synced, and returns their hash. Nothing is visible under
+   * the hash until `commit`: the caller commits and records the reference in one step under the
+   * write lock, so a removal of the same content can never fall between the two.
+   */
+  async stage(bytes: Buffer): Promise<StagedUpload> {
     const sha256 = createHash('sha256').update(bytes).digest('hex');
-    const target = this.pathFor(sha256);
-    if (existsSync(target)) return sha256;
-    await mkdir(join(this.root, sha256.slice(0, 2)), { recursive: true });
-    const temporary = join(this.root, `.incoming-${randomUUID()}`);
-    const handle = await open(temporary, 'wx', 0o600);
+    await mkdir(this.root, { recursive: true });
+    const temporaryPath = join(this.root, `.incoming-${randomUUID()}`);
+    const handle = await open(temporaryPath, 'wx', 0o600);
     try {
       await handle.writeFile(bytes);
       await handle.sync();
-    } finally {
+    } catch (error) {
       await handle.close();
+      await rm(temporaryPath, { force: true });
+      throw error;
     }
-    await rename(temporary, target);
-    return sha256;
+    await handle.close();
+    return { sha256, temporaryPath };
+  }
+
+  /** Puts a staged file under its hash; a file already there has the same bytes and is replaced. */
+  async commit(staged: StagedUpload): Promise<void> {
+    await mkdir(join(this.root, staged.sha256.slice(0, 2)), { recursive: true });
+    await rename(staged.temporaryPath, this.pathFor(staged.sha256));
+  }
+
+  /** Drops a staged file that will not be committed. */
+  async discard(staged: StagedUpload): Promise<void> {
+    await rm(staged.temporaryPath, { force: true });
   }
 
   read(sha256: string): ReadStream {
