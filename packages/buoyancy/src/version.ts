@@ -12,5 +12,6 @@
 // 0.8.0: measured lift with a GUM uncertainty, verdicts only outside it; explaining purity in %.
 // 0.9.0: cylinders only of gases with a real-gas model (helium, hydrogen).
 // 0.10.0: cylinder gas from published real-gas models (hydrogen: Lemmon, Huber & Leachman 2008;
-// helium: NIST IR 8474), with the residual gas's own compressibility.
+// helium: NIST IR 8474), with the residual gas's own compressibility; a note on ammonia's real-gas
+// density at one atmosphere.
 export const ENGINE_VERSION = '0.10.0';

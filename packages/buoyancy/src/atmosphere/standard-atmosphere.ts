@@ -81,8 +81,11 @@ const LAYERS: readonly Layer[] = LAYER_DEFINITIONS.reduce<Layer[]>((layers, defi
 
 /**
  * Ratio M/M0 of the mean molar mass to its sea-level value between 80 and 86 km geometric altitude,
- * U.S. Standard Atmosphere 1976, Table 8, at 0.5 km steps (transcribed from memory of that table;
- * checked by the standard's published 86 km kinetic temperature, 186.87 K). Below 80 km it is 1.
+ * U.S. Standard Atmosphere 1976 (NOAA-S/T 76-1562), Table 8, at 0.5 km steps. The thirteen values
+ * as two independent public transcriptions of that table give them (W. Gravel's MATLAB
+ * MolecularWeightRatios.m, "Table 8", and a Rust implementation of the standard); the page of the
+ * printed table was not seen. Checked by the standard's published 86 km kinetic temperature,
+ * 186.87 K (Table I). Below 80 km it is 1.
  */
 const MOLAR_MASS_RATIO_80_TO_86_KM = [
   1.0, 0.999996, 0.999989, 0.999971, 0.999941, 0.999909, 0.99987, 0.999829, 0.999786, 0.999741,

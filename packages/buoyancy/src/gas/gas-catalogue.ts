@@ -23,6 +23,11 @@ export interface LiftingGas {
   /** Heated air is "gas" only at its own temperature: it needs a gas temperature to lift. */
   readonly isHeatedAir: boolean;
   readonly hazard: GasHazard;
+  /**
+   * Where the ideal-gas density the engine uses is far enough from the real gas at one atmosphere
+   * to matter for lift, what a reader should know (shown with every result using the gas).
+   */
+  readonly idealGasCaveat?: string;
 }
 
 export const GAS_IDS = ['hydrogen', 'helium', 'methane', 'ammonia', 'neon', 'hot-air'] as const;
@@ -34,7 +39,8 @@ const ATOMIC_WEIGHTS_SOURCE =
 /**
  * The lifting gases Loftwright knows. Molar masses from the IUPAC conventional atomic weights;
  * the flammable ranges of hydrogen are the widely published 4–75 % (ISO/TR 15916 is the standard to
- * consult), those of methane and ammonia are given from memory and marked so.
+ * consult); methane's from Coward & Jones (USBM Bulletin 503), ammonia's from a measurement by the
+ * ASTM E681 method; each names its source.
  */
 export const GAS_CATALOGUE: Readonly<Record<GasId, LiftingGas>> = {
   hydrogen: {
@@ -80,8 +86,9 @@ export const GAS_CATALOGUE: Readonly<Record<GasId, LiftingGas>> = {
       flammable: true,
       flammableRangeInAir: {
         lower: 0.05,
-        upper: 0.15,
-        source: 'value from memory (commonly quoted 5–15 %)',
+        upper: 0.14,
+        source:
+          'H. F. Coward and G. W. Jones, Limits of Flammability of Gases and Vapors, U.S. Bureau of Mines Bulletin 503 (1952), introduction: approximately 5 and 14 %',
       },
       toxic: false,
       note: 'Flammable (natural gas); displaces oxygen.',
@@ -97,13 +104,18 @@ export const GAS_CATALOGUE: Readonly<Record<GasId, LiftingGas>> = {
     hazard: {
       flammable: true,
       flammableRangeInAir: {
-        lower: 0.15,
-        upper: 0.28,
-        source: 'value from memory (commonly quoted 15–28 %)',
+        lower: 0.1515,
+        upper: 0.2735,
+        source:
+          '"Flammability limits of ammonia-air mixtures", ASHRAE Transactions (ASTM E681 method, dry air): 15.15 % and 27.35 %',
       },
       toxic: true,
       note: 'Toxic and corrosive; flammable at high concentration.',
     },
+    // B = −302 cm³/mol at 290 K and −271 at 298.15 K (CRC Handbook, "Virial coefficients of
+    // selected gases", H. V. Kehiaian): Z = 1 + B·p/(R·T) ≈ 0.987–0.989 at 101 325 Pa.
+    idealGasCaveat:
+      'Ammonia is about 1.1 % (25 °C) to 1.3 % (17 °C) denser at one atmosphere than the ideal-gas density used here, more when colder, so the gross lift shown is about 2 % high.',
   },
   neon: {
     id: 'neon',

@@ -80,6 +80,20 @@ describe('lift-check', () => {
     expect(result.outputs.freeLift?.value).toBeLessThan(0);
   });
 
+  it('says where the ideal-gas density is not good enough for the gas: ammonia, not hydrogen', () => {
+    const codes = (gasId: string) =>
+      evaluate('lift-check', { ...base, gas: { gasId } }).warnings.map((warning) => warning.code);
+    expect(codes('ammonia')).toContain('ideal-gas-density-caveat');
+    expect(codes('hydrogen')).not.toContain('ideal-gas-density-caveat');
+    // The caveat's 1.1 % and 1.3 %: Z = 1 + B·p/(R·T) with the CRC Handbook's ammonia second
+    // virial coefficients ("Virial coefficients of selected gases", H. V. Kehiaian): −271 cm³/mol
+    // at 298.15 K and −302 cm³/mol at 290 K, at 101 325 Pa.
+    const excess = (bCm3: number, temperatureK: number) =>
+      -(bCm3 * 1e-6 * 101325) / (8.314462618 * temperatureK);
+    expect(excess(-271, 298.15)).toBeCloseTo(0.011, 3);
+    expect(excess(-302, 290)).toBeCloseTo(0.0127, 3);
+  });
+
   it('warns that heated air at no superheat gives no lift', () => {
     const result = evaluate('lift-check', { ...base, gas: { gasId: 'hot-air' } });
     expect(result.warnings.map((warning) => warning.code)).toEqual(

@@ -219,6 +219,14 @@ function warnAboutGas(d: Derivation, gasInput: GasInput): void {
       field: 'gas.gasId',
     });
   }
+  if (gas.idealGasCaveat) {
+    d.warn({
+      code: 'ideal-gas-density-caveat',
+      severity: 'note',
+      message: gas.idealGasCaveat,
+      field: 'gas.gasId',
+    });
+  }
   if (gas.isHeatedAir && gasInput.superheatK <= 0) {
     d.warn({
       code: 'heated-air-not-heated',
