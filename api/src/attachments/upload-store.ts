@@ -1,9 +1,10 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { createReadStream, existsSync, type ReadStream } from 'node:fs';
-import { mkdir, open, rename, rm } from 'node:fs/promises';
+import { open, rename, rm } from 'node:fs/promises';
 import { join, resolve, sep } from 'node:path';
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import { makePrivateDirectory, preparePrivateDataDir } from '../config/data-dir';
 import type { EnvironmentVariables } from '../config/env.validation';
 
 const SHA256_HEX = /^[0-9a-f]{64}$/;
@@ -24,7 +25,7 @@ export class UploadStore {
   readonly root: string;
 
   constructor(config: ConfigService<EnvironmentVariables, true>) {
-    this.root = resolve(config.get('DATA_DIR', { infer: true }), 'uploads');
+    this.root = resolve(preparePrivateDataDir(config.get('DATA_DIR', { infer: true })), 'uploads');
   }
 
   pathFor(sha256: string): string {
@@ -42,7 +43,7 @@ export class UploadStore {
    */
   async stage(bytes: Buffer): Promise<StagedUpload> {
     const sha256 = createHash('sha256').update(bytes).digest('hex');
-    await mkdir(this.root, { recursive: true });
+    makePrivateDirectory(this.root);
     const temporaryPath = join(this.root, `.incoming-${randomUUID()}`);
     const handle = await open(temporaryPath, 'wx', 0o600);
     try {
@@ -59,7 +60,7 @@ export class UploadStore {
 
   /** Puts a staged file under its hash; a file already there has the same bytes and is replaced. */
   async commit(staged: StagedUpload): Promise<void> {
-    await mkdir(join(this.root, staged.sha256.slice(0, 2)), { recursive: true });
+    makePrivateDirectory(join(this.root, staged.sha256.slice(0, 2)));
     await rename(staged.temporaryPath, this.pathFor(staged.sha256));
   }
 

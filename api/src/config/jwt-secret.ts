@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { preparePrivateDataDir } from './data-dir';
 
 const SECRET_FILE = 'jwt-secret';
 
@@ -11,8 +12,7 @@ const SECRET_FILE = 'jwt-secret';
  */
 export function resolveJwtSecret(configured: string | undefined, dataDir: string): string {
   if (configured) return configured;
-  const directory = resolve(dataDir);
-  mkdirSync(directory, { recursive: true });
+  const directory = preparePrivateDataDir(dataDir);
   const file = join(directory, SECRET_FILE);
   if (existsSync(file)) return readFileSync(file, 'utf8').trim();
   const secret = randomBytes(48).toString('base64url');

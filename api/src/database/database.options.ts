@@ -1,8 +1,8 @@
-import { mkdirSync } from 'node:fs';
 import { resolve } from 'node:path';
 import type { DataSourceOptions } from 'typeorm';
 import { Attachment } from '../attachments/attachment.entity';
 import { AuditEntry } from '../audit/audit-entry.entity';
+import { createPrivateFile, preparePrivateDataDir } from '../config/data-dir';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
 import { CalculationVersion } from '../calculations/calculation-version.entity';
 import { Calculation } from '../calculations/calculation.entity';
@@ -63,8 +63,9 @@ export const MIGRATIONS = [
  * team's stored calculations.
  */
 export function buildDataSourceOptions(dataDir: string): DataSourceOptions {
-  const directory = resolve(dataDir);
-  mkdirSync(directory, { recursive: true });
+  const directory = preparePrivateDataDir(dataDir);
+  // SQLite gives its -wal and -shm files the database file's permissions.
+  createPrivateFile(resolve(directory, DATABASE_FILE_NAME));
   return {
     type: 'better-sqlite3',
     database: resolve(directory, DATABASE_FILE_NAME),
