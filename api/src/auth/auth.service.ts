@@ -43,8 +43,6 @@ export class AuthService {
   ) {}
 
   async register(dto: RegisterDto): Promise<SignedIn> {
-    // The first account on an empty database runs it: without an admin nobody could grant roles.
-    const first = (await this.usersService.count()) === 0;
     // Registering from a class's join link makes a student account; the code is checked before
     // anything is created, so a wrong code leaves no account behind.
     const joinCode = dto.joinCode?.trim() ? dto.joinCode : undefined;
@@ -54,7 +52,9 @@ export class AuthService {
       password: dto.password,
       displayName: dto.displayName,
       numberFormat: dto.numberFormat,
-      roles: first ? ['admin', 'designer'] : joinCode ? ['student'] : ['designer'],
+      // The first account on an empty database runs it: without an admin nobody could grant
+      // roles. Decided with the insert, under the write lock, so only one account is first.
+      roles: (first) => (first ? ['admin', 'designer'] : joinCode ? ['student'] : ['designer']),
     });
     await this.audit.record({
       actorId: user.id,

@@ -13,10 +13,12 @@ const prepared = new Set<string>();
  */
 export function preparePrivateDataDir(dataDir: string): string {
   const directory = resolve(dataDir);
-  if (prepared.has(directory)) return directory;
   mkdirSync(directory, { recursive: true, mode: OWNER_ONLY_DIRECTORY });
-  tighten(directory);
-  prepared.add(directory);
+  chmodSync(directory, OWNER_ONLY_DIRECTORY);
+  if (!prepared.has(directory)) {
+    tighten(directory);
+    prepared.add(directory);
+  }
   return directory;
 }
 

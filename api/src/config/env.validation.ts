@@ -71,9 +71,14 @@ export class EnvironmentVariables {
   @IsString()
   PUBLIC_URL?: string;
 
-  /** "0" starts with an empty database: no demo accounts, no demo scenario. */
+  /**
+   * "1" fills an empty database with the demo accounts and scenario, "0" never does. Unset, the
+   * demo is made only when HOST is a loopback address: a published demo password must not open
+   * an account on a network.
+   */
+  @IsOptional()
   @IsIn(['0', '1'])
-  SEED_DEMO: '0' | '1' = '1';
+  SEED_DEMO?: '0' | '1';
 
   @IsString()
   @MinLength(8)

@@ -17,9 +17,19 @@ import {
   DEMO_PLANS,
 } from './demo-scenario';
 
+/** 127.0.0.0/8, ::1 and "localhost": addresses only this machine can reach. */
+export function isLoopbackHost(host: string): boolean {
+  const bare = host
+    .trim()
+    .toLowerCase()
+    .replace(/^\[|\]$/g, '');
+  return bare === 'localhost' || bare === '::1' || /^127(\.\d{1,3}){3}$/.test(bare);
+}
+
 /**
  * Fills an empty database with the demo accounts and scenario, through the same services the API
- * uses, so every stored result is a real engine result. SEED_DEMO=0 turns it off.
+ * uses, so every stored result is a real engine result. SEED_DEMO=0 turns it off; unset, it runs
+ * only when the server listens on loopback.
  */
 @Injectable()
 export class DemoSeedService implements OnApplicationBootstrap {
@@ -37,8 +47,22 @@ export class DemoSeedService implements OnApplicationBootstrap {
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
-    if (this.config.get('SEED_DEMO', { infer: true }) !== '1') return;
+    const setting = this.config.get('SEED_DEMO', { infer: true });
+    const host = this.config.get('HOST', { infer: true });
+    const onLoopback = isLoopbackHost(host);
+    if (setting === '0') return;
+    if (setting === undefined && !onLoopback) {
+      this.logger.log(
+        `No demo accounts: the server listens on ${host}, not only on this machine. Set SEED_DEMO=1 to create them anyway.`,
+      );
+      return;
+    }
     if ((await this.usersService.count()) > 0) return;
+    if (!onLoopback) {
+      this.logger.warn(
+        `DEMO ACCOUNTS WITH THE PUBLISHED PASSWORD ARE BEING CREATED ON A SERVER LISTENING ON ${host}. Anyone who can reach it can sign in as the demo admin. Unset SEED_DEMO (or set SEED_DEMO=0) and start from an empty database for real use.`,
+      );
+    }
     await this.seed();
   }
 

@@ -52,7 +52,12 @@ export class UsersService {
     email: string;
     password: string;
     displayName: string;
-    roles: Role[];
+    /**
+     * The account's roles, or how to choose them once it is known whether this is the first
+     * account: decided under the write lock with the insert, so parallel registrations on an empty
+     * database make exactly one first account.
+     */
+    roles: Role[] | ((isFirstAccount: boolean) => Role[]);
     /** As the browser guessed it at registration; the default when not known. */
     numberFormat?: NumberFormat;
   }): Promise<User> {
@@ -68,7 +73,7 @@ export class UsersService {
       email,
       displayName: input.displayName.trim(),
       passwordHash: await this.hasher.hash(input.password),
-      roles: [...new Set(input.roles)],
+      roles: [],
       unitSystem: 'si',
       numberFormat: input.numberFormat ?? DEFAULT_NUMBER_FORMAT,
       currency: DEFAULT_CURRENCY,
@@ -82,6 +87,11 @@ export class UsersService {
           field: 'email',
         });
       }
+      const roles =
+        typeof input.roles === 'function'
+          ? input.roles((await this.users.count()) === 0)
+          : input.roles;
+      user.roles = [...new Set(roles)];
       return this.users.save(user);
     });
   }

@@ -16,14 +16,21 @@ export interface TestApp {
  * the environment is set because ConfigModule validates the environment when it is imported.
  */
 export async function createTestApp(
-  options: { webDistDir?: string; seedDemo?: boolean; env?: Record<string, string> } = {},
+  options: {
+    webDistDir?: string;
+    /** true/false set SEED_DEMO to 1/0; 'unset' leaves it out, as a person starting it might. */
+    seedDemo?: boolean | 'unset';
+    env?: Record<string, string>;
+  } = {},
 ): Promise<TestApp> {
   const dataDir = mkdtempSync(join(tmpdir(), 'loftwright-api-'));
   process.env.NODE_ENV = 'test';
   process.env.DATA_DIR = dataDir;
   // Cheap hashes keep the suites fast; production refuses a cost below 12 (env.validation.ts).
   process.env.BCRYPT_COST = '4';
-  process.env.SEED_DEMO = options.seedDemo ? '1' : '0';
+  if (options.seedDemo === 'unset') delete process.env.SEED_DEMO;
+  else process.env.SEED_DEMO = options.seedDemo ? '1' : '0';
+  delete process.env.HOST;
   process.env.LOGIN_RATE_LIMIT = '1000';
   delete process.env.SMTP_URL;
   for (const [key, value] of Object.entries(options.env ?? {})) process.env[key] = value;
