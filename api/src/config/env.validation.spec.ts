@@ -9,8 +9,9 @@ describe('validateEnvironment', () => {
       PORT: 3000,
       DATA_DIR: './data',
       HOST: '127.0.0.1',
-      SEED_DEMO: '1',
     });
+    // Unset: the demo is made only because HOST is loopback (demo-seed.service.ts).
+    expect(env.SEED_DEMO).toBeUndefined();
   });
 
   it('refuses a bcrypt cost below 12 outside tests', () => {

@@ -19,6 +19,23 @@ export interface ApiErrorBody {
   [key: string]: unknown;
 }
 
+const MALFORMED_JSON_MESSAGE = 'The request body is not valid JSON.';
+
+/**
+ * A body the JSON parser could not read: Express's parser marks it `entity.parse.failed`, and
+ * Nest may wrap it in a 400 whose message is the parser's own (a position in someone's text).
+ */
+function isMalformedJson(exception: unknown): boolean {
+  const marked = (error: unknown) =>
+    typeof error === 'object' &&
+    error !== null &&
+    (error as { type?: unknown }).type === 'entity.parse.failed';
+  return (
+    marked(exception) ||
+    (exception instanceof HttpException && marked((exception as { cause?: unknown }).cause))
+  );
+}
+
 /**
  * Shapes every error the same way. Engine input errors become 422 with their field and range;
  * anything unexpected becomes a 500 with no stack trace or internals (they go to the log).
@@ -53,6 +70,13 @@ export class ApiExceptionFilter implements ExceptionFilter {
         })),
       };
     }
+    if (isMalformedJson(exception)) {
+      return {
+        statusCode: HttpStatus.BAD_REQUEST,
+        error: 'Bad Request',
+        message: MALFORMED_JSON_MESSAGE,
+      };
+    }
     if (exception instanceof HttpException) {
       const status = exception.getStatus();
       const raw = exception.getResponse();
@@ -77,7 +101,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
         status === 413
           ? 'The request body is too large.'
           : status === 400
-            ? 'The request body is not valid JSON.'
+            ? MALFORMED_JSON_MESSAGE
             : 'Bad request.';
       return { statusCode: status, error: HttpStatus[status] ?? 'Error', message };
     }

@@ -1,3 +1,4 @@
+import { Nullable } from '../../common/pipes/request-shape';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -62,11 +63,14 @@ export class ExampleSettingsDto {
 
   @ApiPropertyOptional({ description: 'step id at which the walk-through shows the chart' })
   @IsOptional()
+  @Nullable()
   @IsString()
   chartStepId?: string | null;
 
   @ApiPropertyOptional({ type: ExerciseSettingsDto, nullable: true })
   @IsOptional()
+  @Nullable()
+  @IsObject({ message: 'exercise must be an object of settings, or null for no exercise' })
   @ValidateNested()
   @Type(() => ExerciseSettingsDto)
   exercise?: ExerciseSettingsDto | null;
