@@ -1,7 +1,15 @@
 import { Logger } from '@nestjs/common';
 import { simpleParser } from 'mailparser';
 import type { AddressInfo } from 'node:net';
+import { randomBytes, timingSafeEqual } from 'node:crypto';
 import { SMTPServer } from 'smtp-server';
+
+/** Compares two secrets in time that does not depend on where they differ. */
+function sameText(given: string, expected: string): boolean {
+  const a = Buffer.from(given);
+  const b = Buffer.from(expected);
+  return a.length === b.length && timingSafeEqual(a, b);
+}
 
 export interface ReceivedMail {
   from: string;
@@ -14,17 +22,36 @@ export interface ReceivedMail {
 }
 
 /**
- * A mail server on loopback that accepts every message and hands it, parsed, to `store`. It
- * stands in for a real server when none is configured, so mail can be read inside the product.
+ * A mail server on loopback that hands every message, parsed, to `store`. It stands in for a real
+ * server when none is configured, so mail can be read inside the product. It takes mail only
+ * from the product itself: a sender must sign in with a random credential made at each start and
+ * never written anywhere, so another process on the machine cannot plant a message (a forged
+ * reset mail) in the outbox.
  */
 export class FakeSmtpServer {
   private readonly logger = new Logger('FakeSmtpServer');
   private readonly server: SMTPServer;
+  /** The only user and password the server accepts, for this process's lifetime. */
+  readonly credential = {
+    user: `loftwright-${randomBytes(6).toString('hex')}`,
+    pass: randomBytes(32).toString('base64url'),
+  };
 
   constructor(store: (mail: ReceivedMail) => Promise<void>) {
     this.server = new SMTPServer({
-      authOptional: true,
-      disabledCommands: ['STARTTLS', 'AUTH'],
+      authOptional: false,
+      authMethods: ['PLAIN'],
+      // Loopback only, so the credential never crosses a network; there is no TLS to offer.
+      allowInsecureAuth: true,
+      disabledCommands: ['STARTTLS'],
+      onAuth: (auth, _session, callback) => {
+        const accepted =
+          auth.method === 'PLAIN' &&
+          sameText(auth.username ?? '', this.credential.user) &&
+          sameText(auth.password ?? '', this.credential.pass);
+        if (accepted) callback(null, { user: auth.username });
+        else callback(new Error('Authentication refused'));
+      },
       banner: 'Loftwright local mail',
       // Room for an archived sign-off PDF attached to an approval.
       size: 30 * 1024 * 1024,

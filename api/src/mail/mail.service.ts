@@ -20,6 +20,7 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
   private transporter?: Transporter;
   private fakeServer?: FakeSmtpServer;
   private readonly pending = new Set<Promise<void>>();
+  private fakePort?: number;
 
   constructor(
     private readonly config: ConfigService<EnvironmentVariables, true>,
@@ -38,11 +39,13 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
       await this.writeLock.run(() => this.outbox.insert({ ...mail }));
     });
     const port = await this.fakeServer.listen();
+    this.fakePort = port;
     this.transporter = nodemailer.createTransport({
       host: '127.0.0.1',
       port,
       secure: false,
       ignoreTLS: true,
+      auth: { ...this.fakeServer.credential },
     });
     this.logger.log(
       `Mail is kept by the local mail server on port ${port} (GET /api/admin/outbox)`,
@@ -76,6 +79,11 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
   /** Waits for every message queued so far (shutdown, tests). */
   async flush(): Promise<void> {
     await Promise.all([...this.pending]);
+  }
+
+  /** Where the local mail server listens (tests send to it directly); undefined with SMTP_URL. */
+  get localServerPort(): number | undefined {
+    return this.fakePort;
   }
 
   listOutbox(page: number, pageSize: number) {
