@@ -187,10 +187,60 @@ describe('review and sign-off', () => {
         version: 1,
         reproduces: true,
         differences: [],
-        calculation: { id },
+        calculation: { kind: 'lift-check' },
       });
       expect(answer.body.approvedBy.id).toBe(reviewer.id);
       expect(answer.body.approvals).toHaveLength(1);
+      // Which calculation it is, only a reader of it learns.
+      expect(answer.body.calculation.id).toBeUndefined();
+      const asOwner = await http()
+        .get(`/api/verify/${approved.body.fingerprint}`)
+        .set(designer.auth);
+      expect(asOwner.body.calculation.id).toBe(id);
+      expect(asOwner.body.comment).toBe('ok');
+    });
+
+    it('names a private calculation only to those who may read it, with the title it was approved under', async () => {
+      const stranger = await createUser(testApp.app, ['designer'], 'stranger');
+      const id = await newCalculation();
+      const titled = await http()
+        .patch(`/api/calculations/${id}`)
+        .set(designer.auth)
+        .send({ title: 'Envelope A, as approved', visibility: 'private' });
+      expect(titled.status).toBe(200);
+      await http().post(`/api/calculations/${id}/versions/1/submit`).set(designer.auth).send({});
+      const approved = await http()
+        .post(`/api/calculations/${id}/versions/1/approve`)
+        .set(reviewer.auth)
+        .send({ comment: 'Private remark about the client' });
+      const renamed = await http()
+        .patch(`/api/calculations/${id}`)
+        .set(designer.auth)
+        .send({ title: 'Renamed afterwards' });
+      expect(renamed.status).toBe(200);
+      const path = `/api/verify/${approved.body.fingerprint}`;
+
+      for (const asker of [undefined, stranger]) {
+        const answer = asker ? await http().get(path).set(asker.auth) : await http().get(path);
+        const text = JSON.stringify(answer.body);
+        expect(answer.body.match).toBe(true);
+        expect(text).not.toContain(id);
+        expect(text).not.toContain('Envelope A');
+        expect(text).not.toContain('Renamed');
+        expect(text).not.toContain('Private remark');
+        expect(answer.body.approvals[0].calculation).toBeNull();
+      }
+      const owner = await http().get(path).set(designer.auth);
+      expect(owner.body.calculation).toMatchObject({ id, title: 'Envelope A, as approved' });
+      expect(owner.body.approvals[0].calculation.title).toBe('Envelope A, as approved');
+      const sheet = await http()
+        .get(`/api/calculations/${id}/versions/1/reviews`)
+        .set(designer.auth);
+      expect(sheet.body.reviews.at(-1).calculationTitle).toBe('Envelope A, as approved');
+      // A bad token on the public route is simply anonymous, not a 401.
+      const badToken = await http().get(path).set('Authorization', 'Bearer not-a-token');
+      expect(badToken.status).toBe(200);
+      expect(badToken.body.calculation.id).toBeUndefined();
     });
 
     it('lists every approval of the same content under one fingerprint', async () => {
@@ -216,7 +266,7 @@ describe('review and sign-off', () => {
           .set(reviewer.auth)
           .send({});
       }
-      const answer = await http().get(`/api/verify/${first.body.fingerprint}`);
+      const answer = await http().get(`/api/verify/${first.body.fingerprint}`).set(designer.auth);
       expect(
         answer.body.approvals
           .map((approval: { calculation: { id: string } }) => approval.calculation.id)

@@ -25,6 +25,7 @@ import { GasPlans1764730800000 } from './migrations/1764730800000-gas-plans';
 import { Classrooms1764734400000 } from './migrations/1764734400000-classrooms';
 import { UserNumberFormatCurrency1764738000000 } from './migrations/1764738000000-user-number-format-currency';
 import { FillLogInstrument1764741600000 } from './migrations/1764741600000-fill-log-instrument';
+import { ReviewCalculationTitle1764745200000 } from './migrations/1764745200000-review-calculation-title';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -55,6 +56,7 @@ export const MIGRATIONS = [
   Classrooms1764734400000,
   UserNumberFormatCurrency1764738000000,
   FillLogInstrument1764741600000,
+  ReviewCalculationTitle1764745200000,
 ];
 
 /**

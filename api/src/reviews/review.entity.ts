@@ -23,6 +23,13 @@ export class Review {
   @Column('varchar', { length: 64 })
   fingerprint: string;
 
+  /**
+   * The calculation's title when the decision was made: what verify and the sign-off sheet say
+   * was approved, whatever the calculation is called later.
+   */
+  @Column('varchar', { name: 'calculation_title', nullable: true })
+  calculationTitle: string | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'datetime' })
   createdAt: Date;
 }

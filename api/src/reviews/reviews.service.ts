@@ -164,6 +164,7 @@ export class ReviewsService {
           decision,
           comment,
           fingerprint: version.fingerprint,
+          calculationTitle: calculation.title,
         });
         await this.syncLatestStatus(
           manager.getRepository(Calculation),
@@ -253,6 +254,7 @@ export class ReviewsService {
         decision: review.decision,
         comment: review.comment,
         fingerprint: review.fingerprint,
+        calculationTitle: review.calculationTitle,
         createdAt: new Date(review.createdAt).toISOString(),
       })),
     };

@@ -1,5 +1,7 @@
 import { Controller, Get, Param } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
+import type { AuthUser } from '../auth/auth-user';
+import { OptionalUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import { FingerprintPipe } from '../common/pipes/fingerprint.pipe';
 import { VerifyService } from './verify.service';
@@ -12,7 +14,10 @@ export class VerifyController {
   /** Open to anyone holding a fingerprint, for example from a printed sign-off sheet. */
   @Public()
   @Get(':fingerprint')
-  verify(@Param('fingerprint', FingerprintPipe) fingerprint: string) {
-    return this.verifyService.verify(fingerprint);
+  verify(
+    @Param('fingerprint', FingerprintPipe) fingerprint: string,
+    @OptionalUser() user: AuthUser | undefined,
+  ) {
+    return this.verifyService.verify(fingerprint, user);
   }
 }

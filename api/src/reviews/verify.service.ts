@@ -2,6 +2,8 @@ import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { ENGINE_VERSION, evaluate, type OutputQuantity } from '@loftwright/buoyancy';
 import { Repository } from 'typeorm';
+import type { AuthUser } from '../auth/auth-user';
+import { canRead } from '../calculations/calculation-access';
 import { CalculationVersion } from '../calculations/calculation-version.entity';
 import { Calculation } from '../calculations/calculation.entity';
 import { User } from '../users/user.entity';
@@ -30,7 +32,7 @@ export class VerifyService {
    * Whether a fingerprint belongs to an approved version, by whom and when it was approved, and
    * whether the engine running now still gives the same outputs from the stored inputs.
    */
-  async verify(fingerprint: string) {
+  async verify(fingerprint: string, reader?: AuthUser) {
     // Identical content has an identical fingerprint, so several approvals may share one.
     const approvedVersions = await this.versions.findBy({ fingerprint, status: 'approved' });
     if (approvedVersions.length === 0) {
@@ -74,21 +76,32 @@ export class VerifyService {
         approved: stored[name]?.value ?? null,
         recomputed: recomputed[name]?.value ?? null,
       }));
+    // Anyone holding the fingerprint learns that it was approved, by whom, when and whether it
+    // still computes the same; which calculation it is (its id, title and the reviewer's comment)
+    // only a reader who may open that calculation learns. The title is the one approved.
+    const readable = (candidate: Calculation) => reader !== undefined && canRead(reader, candidate);
+    const identity = (candidate: Calculation, decision: Review) =>
+      readable(candidate)
+        ? { id: candidate.id, title: decision.calculationTitle ?? candidate.title }
+        : null;
     return {
       fingerprint,
       match: true as const,
-      calculation: { id: calculation.id, title: calculation.title, kind: calculation.kind },
+      calculation: {
+        ...identity(calculation, review),
+        kind: calculation.kind,
+      },
       version: version.number,
       approvedBy: reviewer ? { id: reviewer.id, displayName: reviewer.displayName } : null,
       approvedAt: new Date(review.createdAt).toISOString(),
-      comment: review.comment,
+      comment: readable(calculation) ? review.comment : null,
       engineVersionAtApproval: version.engineVersion,
       currentEngineVersion: ENGINE_VERSION,
       reproduces: recomputeError === null && differences.length === 0,
       differences,
       recomputeError,
       approvals: approvals.map((approval) => ({
-        calculation: { id: approval.calculation.id, title: approval.calculation.title },
+        calculation: identity(approval.calculation, approval.review),
         version: approval.version.number,
         approvedBy: approval.reviewer
           ? { id: approval.reviewer.id, displayName: approval.reviewer.displayName }

@@ -10,12 +10,24 @@ export class JwtAuthGuard extends AuthGuard('jwt') {
     super();
   }
 
-  override canActivate(context: ExecutionContext) {
+  override async canActivate(context: ExecutionContext): Promise<boolean> {
     const isPublic = this.reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, [
       context.getHandler(),
       context.getClass(),
     ]);
-    return isPublic ? true : super.canActivate(context);
+    if (!isPublic) return (await super.canActivate(context)) as boolean;
+    // A public route still knows who is asking when a valid token comes with the request (verify
+    // shows a title only to those who may read the calculation); a missing or bad token is
+    // simply anonymous there.
+    const request = context.switchToHttp().getRequest<{ headers: Record<string, unknown> }>();
+    if (request.headers.authorization) {
+      try {
+        await super.canActivate(context);
+      } catch {
+        // anonymous
+      }
+    }
+    return true;
   }
 
   override handleRequest<TUser>(error: unknown, user: TUser | false): TUser {

@@ -9,3 +9,11 @@ export const CurrentUser = createParamDecorator(
     return request.user;
   },
 );
+
+/** The signed-in user on a public route, or undefined for an anonymous request. */
+export const OptionalUser = createParamDecorator(
+  (_data: unknown, context: ExecutionContext): AuthUser | undefined => {
+    const request = context.switchToHttp().getRequest<Request & { user?: AuthUser }>();
+    return request.user;
+  },
+);

@@ -25,6 +25,8 @@ export interface ReviewedVersion {
     decision: 'approved' | 'changes_requested';
     comment: string;
     fingerprint: string;
+    /** The calculation's title when the decision was made (null for decisions before it was kept). */
+    calculationTitle: string | null;
     createdAt: string;
   }[];
 }
@@ -42,11 +44,12 @@ export type Verification =
   | {
       fingerprint: string;
       match: true;
-      calculation: { id: string; title: string; kind: string };
+      /** id and title only when the reader may open the calculation; the title as approved. */
+      calculation: { id?: string; title?: string; kind: string };
       version: number;
       approvedBy: UserRef | null;
       approvedAt: string;
-      comment: string;
+      comment: string | null;
       engineVersionAtApproval: string;
       currentEngineVersion: string;
       reproduces: boolean;
@@ -57,7 +60,7 @@ export type Verification =
         recomputed: number | null;
       }[];
       approvals: {
-        calculation: { id: string; title: string };
+        calculation: { id: string; title: string } | null;
         version: number;
         approvedBy: UserRef | null;
         approvedAt: string;

@@ -58,7 +58,9 @@ export function SignOffSheet({
       </div>
       <header>
         <p className="lw-sheet-product">Loftwright</p>
-        <h1>{title}</h1>
+        {/* An approved sheet keeps the title that was approved, whatever the calculation is
+            called now. */}
+        <h1>{approval?.calculationTitle ?? title}</h1>
         <p>
           Version <span className="lw-mono">{data.number}</span> · {STATUS_WORDS[data.status]}
           {kindTitle ? ` · ${kindTitle}` : ''} · engine{' '}

@@ -1,5 +1,8 @@
 import { Alert, Descriptions, Spin, Table, Typography } from 'antd';
+import { KINDS } from '@loftwright/buoyancy';
 import { useVerification } from '../api/sign-off-api';
+
+const kindTitle = (kind: string) => KINDS.find((candidate) => candidate.id === kind)?.title ?? kind;
 
 /** What the API says of a fingerprint: approved or not, by whom and when, and reproduced today. */
 export function VerifyResult({ fingerprint }: { fingerprint: string }) {
@@ -30,7 +33,10 @@ export function VerifyResult({ fingerprint }: { fingerprint: string }) {
         style={{ marginBottom: 16 }}
       />
       <Descriptions column={1} bordered size="small">
-        <Descriptions.Item label="Calculation">{answer.calculation.title}</Descriptions.Item>
+        <Descriptions.Item label="Calculation">
+          {answer.calculation.title ??
+            `A ${kindTitle(answer.calculation.kind).toLowerCase()} not shared with you`}
+        </Descriptions.Item>
         <Descriptions.Item label="Version">
           <span className="lw-mono">v{answer.version}</span>
         </Descriptions.Item>
@@ -40,7 +46,9 @@ export function VerifyResult({ fingerprint }: { fingerprint: string }) {
         <Descriptions.Item label="Approved at">
           {new Date(answer.approvedAt).toLocaleString()}
         </Descriptions.Item>
-        <Descriptions.Item label="Comment">{answer.comment || '—'}</Descriptions.Item>
+        {answer.comment === null ? null : (
+          <Descriptions.Item label="Comment">{answer.comment || '—'}</Descriptions.Item>
+        )}
         <Descriptions.Item label="Engine at approval / now">
           <span className="lw-mono">
             {answer.engineVersionAtApproval} / {answer.currentEngineVersion}
@@ -73,7 +81,10 @@ export function VerifyResult({ fingerprint }: { fingerprint: string }) {
         <Typography.Paragraph style={{ marginTop: 16 }}>
           The same content was approved {answer.approvals.length} times:{' '}
           {answer.approvals
-            .map((approval) => `${approval.calculation.title} v${approval.version}`)
+            .map(
+              (approval) =>
+                `${approval.calculation?.title ?? 'a calculation not shared with you'} v${approval.version}`,
+            )
             .join('; ')}
           .
         </Typography.Paragraph>
