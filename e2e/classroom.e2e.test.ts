@@ -7,6 +7,12 @@ import { screenshotOnFailure } from './support/screenshot-on-failure.js';
 import { startProduct, type RunningProduct } from './support/start-product.js';
 
 const DEMO_PASSWORD = 'loftwright-demo';
+/**
+ * The hidden answer of the demo exercise, 1.0557 kg/m³ (U.S. Standard Atmosphere 1976 sea-level
+ * density 1.2250 kg/m³ less helium's ideal-gas 0.16928 kg/m³), as it could appear: kg/m³ or g/L,
+ * g/m³, lb/ft³ (0.065 906), with a decimal point or comma.
+ */
+const HIDDEN_ANSWER = /1[.,]05(5[6-9]|6\b)|1\s?05[56][.,]\d|0[.,]0659/;
 
 describe('the classroom in the browser: publish, join, walk through, exercise, submissions', () => {
   let product: RunningProduct;
@@ -117,6 +123,8 @@ describe('the classroom in the browser: publish, join, walk through, exercise, s
     // The result to work out is held back until the student answers.
     const lastResult = walk.locator('li[data-step="lift-per-cubic-metre"] [data-part="result"]');
     expect(await lastResult.textContent()).toContain('= ?');
+    // Nor does it show anywhere else on the page, in any unit it could be written in.
+    expect(await student.locator('body').innerText()).not.toMatch(HIDDEN_ANSWER);
   });
 
   it('lets a newcomer without an account register as a student from the join link', async () => {
@@ -152,20 +160,30 @@ describe('the classroom in the browser: publish, join, walk through, exercise, s
       await student.getByText(/It went wrong at step \d+: Gross lift per cubic metre/).count(),
     ).toBe(1);
 
+    // A wrong attempt does not give the answer away: the teacher's rule reveals it after a right one.
+    expect(await student.locator('body').innerText()).not.toMatch(HIDDEN_ANSWER);
     await student.getByRole('tab', { name: 'Walk through' }).click();
     await student.getByRole('region', { name: /Walk-through/ }).focus();
     await student.keyboard.press('End');
     const marked = student.locator('li[data-step="lift-per-cubic-metre"]');
     await expect.poll(() => marked.getByText('Your answer went wrong here').isVisible()).toBe(true);
-    // Revealed after the attempt: 1.2250 − 0.16928 kg/m³ (U.S. Standard Atmosphere 1976, Table I;
-    // helium by the ideal-gas law) = 1.0557 kg/m³.
-    expect(await marked.locator('[data-part="result"]').textContent()).toMatch(/1\.0557\d* kg\/m³/);
+    expect(await marked.locator('[data-part="result"]').textContent()).toContain('= ?');
+    expect(await student.locator('body').innerText()).not.toMatch(HIDDEN_ANSWER);
 
     await student.getByRole('tab', { name: 'Exercise' }).click();
     await student.getByLabel('Gross lift per cubic metre').fill('1.056 kg/m^3');
     await student.getByRole('button', { name: 'Submit again' }).click();
     await expect.poll(() => student.getByText('Attempt 2: 1 of 1 right').isVisible()).toBe(true);
     expect(await student.getByText(/All right, within 2 %/).count()).toBe(1);
+    // Revealed after the right answer: 1.2250 − 0.16928 kg/m³ = 1.0557 kg/m³.
+    await student.getByRole('tab', { name: 'Walk through' }).click();
+    await student.getByRole('region', { name: /Walk-through/ }).focus();
+    await student.keyboard.press('End');
+    await expect
+      .poll(() => marked.locator('[data-part="result"]').textContent())
+      .toMatch(/1\.0557\d* kg\/m³/);
+    // The pattern the checks above rely on does find the answer once it is shown.
+    expect(await student.locator('body').innerText()).toMatch(HIDDEN_ANSWER);
   });
 
   it('lets the student try other inputs within the teacher’s range, without changing the example', async () => {

@@ -70,13 +70,11 @@ describe('bad input at the edges', () => {
   });
 
   it('refuses an e-mail address with a lone surrogate, naming the field', async () => {
-    const response = await http()
-      .post('/api/auth/register')
-      .send({
-        email: 'ab\uD800c@example.org',
-        password: 'a long enough password',
-        displayName: 'X',
-      });
+    const response = await http().post('/api/auth/register').send({
+      email: 'ab\uD800c@example.org',
+      password: 'a long enough password',
+      displayName: 'X',
+    });
     expect(response.status).toBe(400);
     expect(response.body.field).toBe('email');
     const login = await http()

@@ -1,5 +1,5 @@
-import type { DerivationStep, OutputQuantity } from '@loftwright/buoyancy';
-import { numberAtPath } from '@loftwright/buoyancy';
+import type { CalculationWarning, DerivationStep, OutputQuantity } from '@loftwright/buoyancy';
+import { isWithheldValue, numberAtPath, withheldByDerivation } from '@loftwright/buoyancy';
 import type { ExerciseSettings } from './worked-example.entity';
 
 export interface ExampleContent {
@@ -63,6 +63,13 @@ export function settingsIssues(
   ) {
     issues.push({ field: 'chartStepId', reason: 'names no step of this calculation' });
   }
+  const exercise = settings.exercise;
+  if (exercise?.reveal === 'after-attempts' && exercise.revealAfterAttempts === undefined) {
+    issues.push({
+      field: 'exercise.revealAfterAttempts',
+      reason: 'is needed when the values are revealed after a number of attempts',
+    });
+  }
   for (const name of settings.exercise?.hiddenOutputs ?? []) {
     if (!content.outputs[name]) {
       issues.push({
@@ -82,29 +89,41 @@ export type MaskedStep = Omit<DerivationStep, 'result' | 'values'> & {
 };
 
 /**
- * The content with the exercise's answers taken out: the hidden outputs, the results of the
- * steps computing them, the same numbers where later steps substitute them, and the chart data
+ * The content with the exercise's answers taken out, by derivation: the hidden outputs, every
+ * step computed from one (the same quantity in another unit, a force from a hidden mass, a later
+ * total), every number such a step produced wherever it appears again, every output of those
+ * steps, and notes that quote a computed number (a caution never does). The chart data goes too
  * (a profile would show them).
  */
-export function maskForExercise(content: ExampleContent, exercise: ExerciseSettings) {
+export function maskForExercise(
+  content: ExampleContent & { warnings?: readonly CalculationWarning[] },
+  exercise: ExerciseSettings,
+) {
   const hiddenStepIds = new Set(
-    exercise.hiddenOutputs.map((name) => content.outputs[name]?.stepId).filter(Boolean),
+    exercise.hiddenOutputs.flatMap((name) => content.outputs[name]?.stepId ?? []),
   );
-  const hiddenResults = content.steps
-    .filter((step) => hiddenStepIds.has(step.id))
-    .map((step) => step.result);
-  const isHiddenValue = (symbol: string, value: number) =>
-    hiddenResults.some((result) => result.symbol === symbol && result.value === value);
-  const steps: MaskedStep[] = content.steps.map((step) => ({
-    ...step,
-    hidden: hiddenStepIds.has(step.id),
-    result: hiddenStepIds.has(step.id) ? { ...step.result, value: null } : step.result,
-    values: step.values.map((value) =>
-      isHiddenValue(value.symbol, value.value) ? { ...value, value: null } : value,
-    ),
-  }));
+  const withheld = withheldByDerivation(content.steps, hiddenStepIds);
+  const steps: MaskedStep[] = content.steps.map((step) => {
+    const hidden = withheld.stepIds.has(step.id);
+    return {
+      ...step,
+      hidden,
+      result: hidden ? { ...step.result, value: null } : step.result,
+      values: step.values.map((value) =>
+        isWithheldValue(withheld, value) ? { ...value, value: null } : value,
+      ),
+    };
+  });
   const outputs = Object.fromEntries(
-    Object.entries(content.outputs).filter(([name]) => !exercise.hiddenOutputs.includes(name)),
+    Object.entries(content.outputs).filter(
+      ([name, output]) =>
+        !exercise.hiddenOutputs.includes(name) && !withheld.stepIds.has(output.stepId),
+    ),
+  );
+  const warnings = (content.warnings ?? []).map((warning) =>
+    warning.severity !== 'caution' && /\d/.test(warning.message)
+      ? { ...warning, message: WITHHELD_NOTE }
+      : warning,
   );
   // Only what a student needs to answer: the unit and label of each hidden output.
   const questions = exercise.hiddenOutputs.flatMap((name) => {
@@ -113,5 +132,24 @@ export function maskForExercise(content: ExampleContent, exercise: ExerciseSetti
       ? [{ output: name, label: output.label, unit: output.unit, stepId: output.stepId }]
       : [];
   });
-  return { outputs, steps, questions };
+  return { outputs, steps, warnings, questions };
+}
+
+const WITHHELD_NOTE =
+  'A note about the results is held back: it would give an answer away. It is shown once the answers are revealed.';
+
+/**
+ * Whether a student who has made these attempts may see the engine's values, under the teacher's
+ * rule; a closed class shows them under every rule.
+ */
+export function answersRevealed(
+  exercise: ExerciseSettings,
+  attempts: readonly { allCorrect: boolean }[],
+  classroomClosed: boolean,
+): boolean {
+  if (classroomClosed) return true;
+  const rule = exercise.reveal ?? 'after-correct';
+  if (rule === 'when-closed') return false;
+  if (attempts.some((attempt) => attempt.allCorrect)) return true;
+  return rule === 'after-attempts' && attempts.length >= (exercise.revealAfterAttempts ?? Infinity);
 }

@@ -3,10 +3,22 @@ import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColum
 /** Limits a teacher sets on one input for "try it yourself", in the input's SI unit. */
 export type TryRanges = Record<string, { min: number; max: number }>;
 
+/**
+ * When a student who has answered may see the engine's values: after a right answer, after a
+ * right answer or a number of attempts, or only once the class is closed. A closed class shows
+ * them under every rule.
+ */
+export const REVEAL_RULES = ['after-correct', 'after-attempts', 'when-closed'] as const;
+export type RevealRule = (typeof REVEAL_RULES)[number];
+
 /** What makes an example an exercise: the outputs students must work out, and how close counts. */
 export interface ExerciseSettings {
   hiddenOutputs: string[];
   tolerancePercent: number;
+  /** Absent on exercises set before the rule existed: they reveal after a right answer. */
+  reveal?: RevealRule;
+  /** With 'after-attempts': how many attempts reveal the values. */
+  revealAfterAttempts?: number;
 }
 
 /**

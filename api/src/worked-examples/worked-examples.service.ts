@@ -1,3 +1,4 @@
+import type { CalculationWarning } from '@loftwright/buoyancy';
 import {
   ConflictException,
   ForbiddenException,
@@ -21,7 +22,12 @@ import type {
   ExerciseSettingsDto,
   PublishExampleDto,
 } from './dto/worked-example.dto';
-import { type ExampleContent, maskForExercise, settingsIssues } from './example-content';
+import {
+  answersRevealed,
+  type ExampleContent,
+  maskForExercise,
+  settingsIssues,
+} from './example-content';
 import { ExerciseSubmission } from './exercise-submission.entity';
 import { type ExerciseSettings, WorkedExample } from './worked-example.entity';
 
@@ -29,7 +35,16 @@ const NOT_VISIBLE = 'This example does not exist or you may not see it.';
 
 /** The settings as stored: copies, so nothing of the request object is kept by reference. */
 const exerciseSettings = (dto: ExerciseSettingsDto | null | undefined): ExerciseSettings | null =>
-  dto ? { hiddenOutputs: [...dto.hiddenOutputs], tolerancePercent: dto.tolerancePercent } : null;
+  dto
+    ? {
+        hiddenOutputs: [...dto.hiddenOutputs],
+        tolerancePercent: dto.tolerancePercent,
+        reveal: dto.reveal ?? 'after-correct',
+        ...(dto.reveal === 'after-attempts'
+          ? { revealAfterAttempts: dto.revealAfterAttempts }
+          : {}),
+      }
+    : null;
 
 /** Every step in full, as the teacher and a student who has answered see them. */
 const shownSteps = (example: WorkedExample) =>
@@ -48,11 +63,12 @@ export class WorkedExamplesService {
     private readonly writeLock: WriteLock,
   ) {}
 
-  private content(example: WorkedExample): ExampleContent {
+  private content(example: WorkedExample) {
     return {
       inputs: example.inputs,
       outputs: example.outputs as Record<string, OutputQuantity>,
       steps: example.steps as ExampleContent['steps'],
+      warnings: example.warnings as CalculationWarning[],
     };
   }
 
@@ -213,11 +229,14 @@ export class WorkedExamplesService {
       where: { exampleId: id, studentId: user.id },
       order: { attempt: 'DESC' },
     });
-    const mySubmissions = attempts.map((attempt) => this.submissionView(attempt, null));
-    if (example.exercise && attempts.length === 0) {
+    const revealed =
+      !example.exercise || answersRevealed(example.exercise, attempts, classroom.closedAt !== null);
+    const mySubmissions = attempts.map((attempt) => this.submissionView(attempt, null, revealed));
+    if (example.exercise && !revealed) {
       const masked = maskForExercise(this.content(example), example.exercise);
       return {
         ...base,
+        warnings: masked.warnings,
         outputs: masked.outputs,
         steps: masked.steps,
         series: null,
@@ -273,17 +292,33 @@ export class WorkedExamplesService {
     });
   }
 
+  /**
+   * One attempt. Until the answers are revealed to its student, the engine's values are left out
+   * of it: the expected value and the relative error (from which, with the answer, the expected
+   * value follows); right or wrong, and the step where it went wrong, stay.
+   */
   private submissionView(
     submission: ExerciseSubmission,
     student: { id: string; displayName: string } | null,
+    revealed = true,
   ) {
+    const check = submission.check as { answers: Record<string, unknown>[] };
     return {
       id: submission.id,
       exampleId: submission.exampleId,
       student: student ?? { id: submission.studentId, displayName: '' },
       attempt: submission.attempt,
       answers: submission.answers,
-      check: submission.check,
+      check: revealed
+        ? submission.check
+        : {
+            ...check,
+            answers: check.answers.map((answer) => ({
+              ...answer,
+              expected: null,
+              relativeError: null,
+            })),
+          },
       correctCount: submission.correctCount,
       answerCount: submission.answerCount,
       allCorrect: submission.allCorrect,
@@ -365,18 +400,24 @@ export class WorkedExamplesService {
       detail: { correct: check.correctCount, of: check.answers.length },
     });
     const saved = await this.submissions.findOneByOrFail({ id: submissionId });
-    return this.submissionView(saved, { id: user.id, displayName: user.displayName });
+    const attempts = await this.submissions.findBy({ exampleId: id, studentId: user.id });
+    const revealed = answersRevealed(example.exercise, attempts, classroom.closedAt !== null);
+    return this.submissionView(saved, { id: user.id, displayName: user.displayName }, revealed);
   }
 
   /** Every attempt for the teacher; a student's own attempts for a student. */
   async listSubmissions(user: AuthUser, id: string) {
-    const { standing } = await this.findVisible(user, id);
+    const { example, classroom, standing } = await this.findVisible(user, id);
     const rows = await this.submissions.find({
       where: standing === 'student' ? { exampleId: id, studentId: user.id } : { exampleId: id },
       order: { submittedAt: 'ASC', attempt: 'ASC' },
     });
     const names = await this.users.names(rows.map((row) => row.studentId));
-    return rows.map((row) => this.submissionView(row, names(row.studentId)));
+    const revealed =
+      standing !== 'student' ||
+      !example.exercise ||
+      answersRevealed(example.exercise, rows, classroom.closedAt !== null);
+    return rows.map((row) => this.submissionView(row, names(row.studentId), revealed));
   }
 
   /** The rows of the teacher's submissions export. */

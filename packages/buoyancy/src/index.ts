@@ -137,6 +137,8 @@ export { meterEnergy } from './supply/meter-energy.js';
 export type { MeterEnergy, MeterLog } from './supply/meter-energy.js';
 export { checkExerciseAnswers } from './teach/exercise-check.js';
 export type { AnswerCheck, ExerciseCheck } from './teach/exercise-check.js';
+export { isWithheldValue, withheldByDerivation } from './teach/withhold.js';
+export type { Withheld } from './teach/withhold.js';
 export {
   numberAtPath,
   numericInputPaths,

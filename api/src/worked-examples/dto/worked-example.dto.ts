@@ -1,10 +1,12 @@
 import { Nullable } from '../../common/pipes/request-shape';
+import { REVEAL_RULES, type RevealRule } from '../worked-example.entity';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
   ArrayMaxSize,
   ArrayMinSize,
   IsArray,
+  IsIn,
   IsInt,
   IsNumber,
   IsObject,
@@ -31,6 +33,23 @@ export class ExerciseSettingsDto {
   @Min(0.1, { message: 'exercise.tolerancePercent must be at least 0.1 %' })
   @Max(50, { message: 'exercise.tolerancePercent must be at most 50 %' })
   tolerancePercent: number;
+
+  @ApiPropertyOptional({
+    enum: REVEAL_RULES,
+    default: 'after-correct',
+    description:
+      'when a student who has answered sees the engine’s values: after a right answer, after a right answer or revealAfterAttempts attempts, or only when the class closes',
+  })
+  @IsOptional()
+  @IsIn(REVEAL_RULES, { message: `exercise.reveal must be one of: ${REVEAL_RULES.join(', ')}` })
+  reveal?: RevealRule;
+
+  @ApiPropertyOptional({ example: 3, description: 'attempts that reveal the values (1–20)' })
+  @IsOptional()
+  @IsInt({ message: 'exercise.revealAfterAttempts must be a whole number' })
+  @Min(1, { message: 'exercise.revealAfterAttempts must be at least 1' })
+  @Max(20, { message: 'exercise.revealAfterAttempts must be at most 20' })
+  revealAfterAttempts?: number;
 }
 
 /** What a teacher may set around a published example; the calculation content stays fixed. */

@@ -30,9 +30,14 @@ export interface ClassDetail extends ClassSummary {
   students?: { id: string; displayName: string; joinedAt: string }[];
 }
 
+/** When a student who has answered sees the engine's values (a closed class shows them always). */
+export type RevealRule = 'after-correct' | 'after-attempts' | 'when-closed';
+
 export interface ExerciseSettings {
   hiddenOutputs: string[];
   tolerancePercent: number;
+  reveal?: RevealRule;
+  revealAfterAttempts?: number;
 }
 
 export type TryRanges = Record<string, { min: number; max: number }>;
@@ -73,7 +78,14 @@ export interface Submission {
   student: { id: string; displayName: string };
   attempt: number;
   answers: Record<string, number | null>;
-  check: ExerciseCheck & { tolerancePercent: number; answers: AnswerCheck[] };
+  check: ExerciseCheck & {
+    tolerancePercent: number;
+    /** The engine's value and the error are null until the answers are revealed to the student. */
+    answers: (Omit<AnswerCheck, 'expected' | 'relativeError'> & {
+      expected: number | null;
+      relativeError: number | null;
+    })[];
+  };
   correctCount: number;
   answerCount: number;
   allCorrect: boolean;

@@ -1,4 +1,16 @@
-import { App, Button, Card, Checkbox, Form, Input, Select, Space, Switch, Typography } from 'antd';
+import {
+  App,
+  Button,
+  Card,
+  Checkbox,
+  Form,
+  Input,
+  InputNumber,
+  Select,
+  Space,
+  Switch,
+  Typography,
+} from 'antd';
 import {
   formatQuantity,
   numberAtPath,
@@ -14,7 +26,12 @@ import {
   UnreadableFieldsContext,
   useUnreadableFields,
 } from '@/components/reading/unreadable-fields';
-import { type ExampleDetail, type TryRanges, useUpdateExample } from '../api/classroom-api';
+import {
+  type ExampleDetail,
+  type RevealRule,
+  type TryRanges,
+  useUpdateExample,
+} from '../api/classroom-api';
 import { inputFieldInfo } from '../lib/input-field';
 
 /**
@@ -39,6 +56,10 @@ export function ExampleSettingsForm({
   const [isExercise, setIsExercise] = useState(example.exercise !== null);
   const [hidden, setHidden] = useState<string[]>(example.exercise?.hiddenOutputs ?? []);
   const [tolerance, setTolerance] = useState<number>(example.exercise?.tolerancePercent ?? 2);
+  const [reveal, setReveal] = useState<RevealRule>(example.exercise?.reveal ?? 'after-correct');
+  const [revealAfterAttempts, setRevealAfterAttempts] = useState<number>(
+    example.exercise?.revealAfterAttempts ?? 3,
+  );
   const paths = numericInputPaths(example.inputs);
 
   const save = () =>
@@ -48,7 +69,14 @@ export function ExampleSettingsForm({
         stepNotes: Object.fromEntries(Object.entries(notes).filter(([, note]) => note.trim())),
         tryRanges: ranges,
         chartStepId,
-        exercise: isExercise ? { hiddenOutputs: hidden, tolerancePercent: tolerance } : null,
+        exercise: isExercise
+          ? {
+              hiddenOutputs: hidden,
+              tolerancePercent: tolerance,
+              reveal,
+              ...(reveal === 'after-attempts' ? { revealAfterAttempts } : {}),
+            }
+          : null,
       },
       { onSuccess: () => void message.success('Example settings saved') },
     );
@@ -211,6 +239,32 @@ export function ExampleSettingsForm({
                   onChange={(share) => setTolerance(share === undefined ? Number.NaN : share * 100)}
                 />
               </Form.Item>
+              <Form.Item label="Show the engine’s values to a student" htmlFor="reveal">
+                <Select
+                  id="reveal"
+                  aria-label="Show the engine’s values to a student"
+                  style={{ maxWidth: 360 }}
+                  value={reveal}
+                  onChange={setReveal}
+                  options={[
+                    { value: 'after-correct', label: 'after a right answer' },
+                    { value: 'after-attempts', label: 'after a right answer or a number of tries' },
+                    { value: 'when-closed', label: 'only when the class is closed' },
+                  ]}
+                />
+              </Form.Item>
+              {reveal === 'after-attempts' ? (
+                <Form.Item label="Tries before the values are shown" htmlFor="reveal-attempts">
+                  <InputNumber
+                    id="reveal-attempts"
+                    min={1}
+                    max={20}
+                    precision={0}
+                    value={revealAfterAttempts}
+                    onChange={(value) => setRevealAfterAttempts(value ?? 1)}
+                  />
+                </Form.Item>
+              ) : null}
             </>
           ) : null}
         </Card>

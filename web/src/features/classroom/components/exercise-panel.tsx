@@ -17,10 +17,13 @@ export function SubmissionResult({
   submission,
   steps,
   unitSystem,
+  revealed = true,
 }: {
   submission: Submission;
   steps: ExampleDetail['steps'];
   unitSystem: UnitSystem;
+  /** Whether the engine's values may be shown (the teacher's rule). */
+  revealed?: boolean;
 }) {
   const { token } = theme.useToken();
   const show = useNumberDisplay(unitSystem);
@@ -47,7 +50,11 @@ export function SubmissionResult({
               ? `It went wrong at step ${wrongIndex + 1}: ${steps[wrongIndex]?.label ?? ''}.`
               : 'Some answers are not right yet.'
           }
-          description="The walk-through now shows every step; the one marked is where to look again."
+          description={
+            revealed
+              ? 'The walk-through now shows every step; the one marked is where to look again.'
+              : 'Look again from the step named; the engine’s values are shown when your teacher’s rule allows.'
+          }
         />
       )}
       <List
@@ -66,8 +73,13 @@ export function SubmissionResult({
                 {answer.correct ? 'right' : 'wrong'}
               </Tag>
               <span>
-                yours <span className="lw-mono">{shown(answer.given, answer.unit, show)}</span>,
-                engine <span className="lw-mono">{shown(answer.expected, answer.unit, show)}</span>
+                yours <span className="lw-mono">{shown(answer.given, answer.unit, show)}</span>
+                {answer.expected !== null ? (
+                  <>
+                    , engine{' '}
+                    <span className="lw-mono">{shown(answer.expected, answer.unit, show)}</span>
+                  </>
+                ) : null}
                 {answer.relativeError !== null
                   ? ` (${show.fixed(answer.relativeError * 100, 2)} % off)`
                   : ''}
@@ -146,7 +158,12 @@ export function ExercisePanel({
         </Button>
       </Form>
       {latest ? (
-        <SubmissionResult submission={latest} steps={example.steps} unitSystem={unitSystem} />
+        <SubmissionResult
+          submission={latest}
+          steps={example.steps}
+          unitSystem={unitSystem}
+          revealed={example.revealed}
+        />
       ) : null}
     </Space>
   );
