@@ -73,8 +73,8 @@ export class AuthService {
 
   async login(dto: LoginDto): Promise<SignedIn> {
     const user = await this.usersService.findByEmail(dto.email);
-    const valid = await this.hasher.verify(dto.password, user?.passwordHash);
-    if (!user || !valid) {
+    const { matches, needsRehash } = await this.hasher.check(dto.password, user?.passwordHash);
+    if (!user || !matches) {
       await this.audit.record({
         actorId: null,
         action: 'auth.sign-in-failed',
@@ -90,6 +90,8 @@ export class AuthService {
       targetType: 'user',
       targetId: user.id,
     });
+    // An older hash (bcrypt, or a lower cost) is replaced now that the password is known.
+    if (needsRehash) await this.usersService.rehashPassword(user.id, dto.password);
     return this.signIn(user);
   }
 

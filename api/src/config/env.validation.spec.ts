@@ -2,10 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { validateEnvironment } from './env.validation';
 
 describe('validateEnvironment', () => {
-  it('defaults to bcrypt cost 12, port 3000, ./data and loopback', () => {
+  it('defaults to scrypt cost 16, port 3000, ./data and loopback', () => {
     const env = validateEnvironment({});
     expect(env).toMatchObject({
-      BCRYPT_COST: 12,
+      SCRYPT_COST: 16,
       PORT: 3000,
       DATA_DIR: './data',
       HOST: '127.0.0.1',
@@ -14,9 +14,9 @@ describe('validateEnvironment', () => {
     expect(env.SEED_DEMO).toBeUndefined();
   });
 
-  it('refuses a bcrypt cost below 12 outside tests', () => {
-    expect(() => validateEnvironment({ BCRYPT_COST: '10' })).toThrow(/at least 12/);
-    expect(validateEnvironment({ BCRYPT_COST: '4', NODE_ENV: 'test' }).BCRYPT_COST).toBe(4);
+  it('refuses an scrypt cost below 15 outside tests', () => {
+    expect(() => validateEnvironment({ SCRYPT_COST: '14' })).toThrow(/at least 15/);
+    expect(validateEnvironment({ SCRYPT_COST: '10', NODE_ENV: 'test' }).SCRYPT_COST).toBe(10);
   });
 
   it('lists every bad value at once', () => {

@@ -142,6 +142,15 @@ export class UsersService {
     );
   }
 
+  /**
+   * Stores a new hash of the same password (an older kind or cost, upgraded at sign-in); sessions
+   * stay valid, as the password has not changed.
+   */
+  async rehashPassword(id: string, password: string): Promise<void> {
+    const passwordHash = await this.hasher.hash(password);
+    await this.writeLock.run(() => this.users.update({ id }, { passwordHash }));
+  }
+
   async bumpTokenVersion(id: string): Promise<void> {
     await this.writeLock.run(() => this.users.increment({ id }, 'tokenVersion', 1));
   }

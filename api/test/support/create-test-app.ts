@@ -27,7 +27,7 @@ export async function createTestApp(
   process.env.NODE_ENV = 'test';
   process.env.DATA_DIR = dataDir;
   // Cheap hashes keep the suites fast; production refuses a cost below 12 (env.validation.ts).
-  process.env.BCRYPT_COST = '4';
+  process.env.SCRYPT_COST = '10';
   if (options.seedDemo === 'unset') delete process.env.SEED_DEMO;
   else process.env.SEED_DEMO = options.seedDemo ? '1' : '0';
   delete process.env.HOST;

@@ -38,7 +38,7 @@ export async function startServerProcess(
       HOST: '127.0.0.1',
       DATA_DIR: dataDir,
       SEED_DEMO: '0',
-      BCRYPT_COST: '4',
+      SCRYPT_COST: '10',
       ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
