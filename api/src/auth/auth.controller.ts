@@ -1,17 +1,8 @@
-import {
-  Body,
-  Controller,
-  Get,
-  HttpCode,
-  HttpStatus,
-  Patch,
-  Post,
-  UseGuards,
-} from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post } from '@nestjs/common';
 import { ApiBadRequestResponse, ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
-import { ThrottlerGuard } from '@nestjs/throttler';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
+import { RateLimited } from '../common/rate-limit';
 import { type PublicUser, toPublicUser } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
 import { AuthService, type SignedIn } from './auth.service';
@@ -31,13 +22,14 @@ export class AuthController {
   ) {}
 
   @Public()
+  @RateLimited('register')
   @Post('register')
   register(@Body() body: RegisterDto): Promise<SignedIn> {
     return this.authService.register(body);
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @RateLimited('sign-in')
   @Post('login')
   @HttpCode(HttpStatus.OK)
   login(@Body() body: LoginDto): Promise<SignedIn> {
@@ -75,7 +67,7 @@ export class AuthController {
   }
 
   @Public()
-  @UseGuards(ThrottlerGuard)
+  @RateLimited('sign-in')
   @Post('password-reset/request')
   @HttpCode(HttpStatus.ACCEPTED)
   async requestReset(@Body() body: PasswordResetRequestDto): Promise<{ message: string }> {
@@ -84,6 +76,7 @@ export class AuthController {
   }
 
   @Public()
+  @RateLimited('sign-in')
   @Post('password-reset/confirm')
   @HttpCode(HttpStatus.NO_CONTENT)
   confirmReset(@Body() body: PasswordResetConfirmDto): Promise<void> {

@@ -4,6 +4,7 @@ import { APP_GUARD } from '@nestjs/core';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { ThrottlerModule } from '@nestjs/throttler';
+import { rateLimitThrottlers } from '../common/rate-limit';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import type { EnvironmentVariables } from '../config/env.validation';
 import { resolveJwtSecret } from '../config/jwt-secret';
@@ -37,9 +38,19 @@ const jwtSecretProvider = {
     TypeOrmModule.forFeature([PasswordResetToken]),
     ThrottlerModule.forRootAsync({
       inject: [ConfigService],
-      useFactory: (config: ConfigService<EnvironmentVariables, true>) => [
-        { name: 'sign-in', ttl: 60_000, limit: config.get('LOGIN_RATE_LIMIT', { infer: true }) },
-      ],
+      useFactory: (config: ConfigService<EnvironmentVariables, true>) =>
+        rateLimitThrottlers({
+          'sign-in': { limit: config.get('LOGIN_RATE_LIMIT', { infer: true }), windowMs: 60_000 },
+          register: {
+            limit: config.get('REGISTER_RATE_LIMIT', { infer: true }),
+            windowMs: 10 * 60_000,
+          },
+          'class-join': {
+            limit: config.get('CLASS_JOIN_RATE_LIMIT', { infer: true }),
+            windowMs: 60_000,
+          },
+          evaluate: { limit: config.get('EVALUATE_RATE_LIMIT', { infer: true }), windowMs: 60_000 },
+        }),
     }),
     JwtModule.registerAsync({
       inject: [ConfigService, JWT_SECRET],

@@ -1,3 +1,4 @@
+import { RateLimited } from '../common/rate-limit';
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user';
@@ -24,6 +25,7 @@ export class ClassroomsController {
   }
 
   /** A student joins with the code the teacher handed out. */
+  @RateLimited('class-join')
   @Post('join')
   @HttpCode(HttpStatus.OK)
   join(@CurrentUser() user: AuthUser, @Body() body: JoinClassroomDto) {

@@ -94,6 +94,30 @@ export class EnvironmentVariables {
   @Max(10000)
   LOGIN_RATE_LIMIT: number = 10;
 
+  /**
+   * Registrations allowed per client address in ten minutes: room for a class signing up at once
+   * behind one school address, not for a script trying addresses.
+   */
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(10000)
+  REGISTER_RATE_LIMIT: number = 60;
+
+  /** Class-join attempts allowed per client address per minute (join codes must not be guessed). */
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(10000)
+  CLASS_JOIN_RATE_LIMIT: number = 60;
+
+  /** Engine evaluations through POST /api/evaluate allowed per client address per minute. */
+  @Type(() => Number)
+  @IsInt()
+  @Min(1)
+  @Max(100000)
+  EVALUATE_RATE_LIMIT: number = 600;
+
   /** Largest upload accepted, in bytes (photos, logger CSV files, PDFs); 20 MB by default. */
   @Type(() => Number)
   @IsInt()

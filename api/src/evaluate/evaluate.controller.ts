@@ -3,6 +3,7 @@ import { ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import { ENGINE_VERSION, evaluate, KINDS } from '@loftwright/buoyancy';
 import { inBodyField } from '../calculations/version-content';
 import { Public } from '../common/decorators/public.decorator';
+import { RateLimited } from '../common/rate-limit';
 import { EvaluateDto } from './dto/evaluate.dto';
 
 @ApiTags('evaluate')
@@ -10,6 +11,7 @@ import { EvaluateDto } from './dto/evaluate.dto';
 export class EvaluateController {
   /** Evaluates any kind without saving anything: previews, and other tools. */
   @Public()
+  @RateLimited('evaluate')
   @Post('evaluate')
   @HttpCode(HttpStatus.OK)
   @ApiUnprocessableEntityResponse({

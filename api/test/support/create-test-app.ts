@@ -32,6 +32,9 @@ export async function createTestApp(
   else process.env.SEED_DEMO = options.seedDemo ? '1' : '0';
   delete process.env.HOST;
   process.env.LOGIN_RATE_LIMIT = '1000';
+  process.env.REGISTER_RATE_LIMIT = '1000';
+  process.env.CLASS_JOIN_RATE_LIMIT = '1000';
+  process.env.EVALUATE_RATE_LIMIT = '100000';
   delete process.env.SMTP_URL;
   for (const [key, value] of Object.entries(options.env ?? {})) process.env[key] = value;
   if (options.webDistDir) process.env.WEB_DIST_DIR = options.webDistDir;
