@@ -7,6 +7,7 @@ import { API_PREFIX } from './app.constants';
 import { API_VERSION } from './config/app-info';
 import type { EnvironmentVariables } from './config/env.validation';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
+import { MAX_JSON_BODY, refuseDeepJson } from './common/json-depth';
 import { createValidationPipe } from './common/pipes/api-validation.pipe';
 import { DEFAULT_WEB_DIST_DIR, serveWebApp } from './web/serve-web-app';
 
@@ -35,8 +36,9 @@ export function configureApp(app: NestExpressApplication): void {
       },
     }),
   );
-  // Calculation inputs are small; anything bigger is a mistake or an attack.
-  app.useBodyParser('json', { limit: '256kb' });
+  // Calculation inputs are small; anything bigger or deeper is a mistake or an attack, refused
+  // before it is parsed.
+  app.useBodyParser('json', { limit: MAX_JSON_BODY, verify: refuseDeepJson });
   const corsOrigins = config.get('CORS_ORIGINS', { infer: true });
   if (corsOrigins) {
     app.enableCors({

@@ -103,4 +103,25 @@ describe('bad input at the edges', () => {
     expect(response.status).toBe(400);
     expect(response.body.message).toBe('The request body is not valid JSON.');
   });
+
+  it('refuses a deeply nested body before parsing it, naming the limit', async () => {
+    const deep = `{"title":"x","kind":"lift-check","inputs":${'['.repeat(3000)}${']'.repeat(3000)}}`;
+    const response = await http()
+      .post('/api/calculations')
+      .set(designer.auth)
+      .set('Content-Type', 'application/json')
+      .send(deep);
+    expect(response.status).toBe(400);
+    expect(response.body.message).toMatch(/deeper than 32 levels/);
+  });
+
+  it('names the size limit when a body is too large', async () => {
+    const response = await http()
+      .post('/api/calculations')
+      .set(designer.auth)
+      .set('Content-Type', 'application/json')
+      .send(JSON.stringify({ title: 'x'.repeat(300 * 1024) }));
+    expect(response.status).toBe(413);
+    expect(response.body.message).toMatch(/256 kB/);
+  });
 });

@@ -8,6 +8,7 @@ import {
 } from '@nestjs/common';
 import { InputError } from '@loftwright/buoyancy';
 import type { Response } from 'express';
+import { MAX_JSON_BODY } from '../json-depth';
 
 /** Every error body the API sends: status, a message a person can read, and the field at fault. */
 export interface ApiErrorBody {
@@ -20,6 +21,7 @@ export interface ApiErrorBody {
 }
 
 const MALFORMED_JSON_MESSAGE = 'The request body is not valid JSON.';
+const TOO_LARGE_MESSAGE = `The request body is larger than ${MAX_JSON_BODY.replace('kb', ' kB')}.`;
 
 /**
  * A body the JSON parser could not read: Express's parser marks it `entity.parse.failed`, and
@@ -33,6 +35,15 @@ function isMalformedJson(exception: unknown): boolean {
   return (
     marked(exception) ||
     (exception instanceof HttpException && marked((exception as { cause?: unknown }).cause))
+  );
+}
+
+/** The body-parser error of this type, thrown directly or wrapped by Nest in a 400. */
+function bodyErrorOfType(exception: unknown, type: string): Error | undefined {
+  const candidates = [exception, (exception as { cause?: unknown } | null)?.cause];
+  return candidates.find(
+    (candidate): candidate is Error =>
+      candidate instanceof Error && (candidate as { type?: unknown }).type === type,
   );
 }
 
@@ -70,6 +81,17 @@ export class ApiExceptionFilter implements ExceptionFilter {
         })),
       };
     }
+    if (bodyErrorOfType(exception, 'entity.too.large')) {
+      return {
+        statusCode: HttpStatus.PAYLOAD_TOO_LARGE,
+        error: 'Payload Too Large',
+        message: TOO_LARGE_MESSAGE,
+      };
+    }
+    const tooDeep = bodyErrorOfType(exception, 'entity.too.deep');
+    if (tooDeep) {
+      return { statusCode: HttpStatus.BAD_REQUEST, error: 'Bad Request', message: tooDeep.message };
+    }
     if (isMalformedJson(exception)) {
       return {
         statusCode: HttpStatus.BAD_REQUEST,
@@ -99,7 +121,7 @@ export class ApiExceptionFilter implements ExceptionFilter {
     if (typeof status === 'number' && status >= 400 && status < 500) {
       const message =
         status === 413
-          ? 'The request body is too large.'
+          ? TOO_LARGE_MESSAGE
           : status === 400
             ? MALFORMED_JSON_MESSAGE
             : 'Bad request.';
