@@ -1,6 +1,9 @@
 import { ConfigService } from '@nestjs/config';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
-import type { NestExpressApplication } from '@nestjs/platform-express';
+import type {
+  NestExpressApplication,
+  NestExpressBodyParserOptionsFor,
+} from '@nestjs/platform-express';
 import compression from 'compression';
 import helmet from 'helmet';
 import { API_PREFIX } from './app.constants';
@@ -38,7 +41,12 @@ export function configureApp(app: NestExpressApplication): void {
   );
   // Calculation inputs are small; anything bigger or deeper is a mistake or an attack, refused
   // before it is parsed.
-  app.useBodyParser('json', { limit: MAX_JSON_BODY, verify: refuseDeepJson });
+  // Nest's option type leaves out `verify` because it uses it itself for rawBody, which is off
+  // here; body-parser receives the options as given.
+  app.useBodyParser('json', {
+    limit: MAX_JSON_BODY,
+    verify: refuseDeepJson,
+  } as NestExpressBodyParserOptionsFor<'json'>);
   const corsOrigins = config.get('CORS_ORIGINS', { infer: true });
   if (corsOrigins) {
     app.enableCors({

@@ -129,6 +129,23 @@ describe('calculation files: export and import', () => {
     expect(empty.body.message).toMatch(/versions needs at least one version/);
   });
 
+  it('refuses a file of more than 100 versions, naming versions and the limit, and creates nothing', async () => {
+    const file = (await exportFile()).body;
+    const before = await http().get('/api/calculations').set(importer.auth);
+    const versions = Array.from({ length: 101 }, (_, index) => ({
+      ...file.versions[0],
+      number: index + 1,
+    }));
+    const response = await http()
+      .post('/api/calculations/import')
+      .set(importer.auth)
+      .send({ ...file, versions });
+    expect(response.status).toBe(400);
+    expect(response.body.message).toMatch(/versions may hold at most 100 versions/);
+    const after = await http().get('/api/calculations').set(importer.auth);
+    expect(after.body.total).toBe(before.body.total);
+  });
+
   it('lets only authors import, and only readers export', async () => {
     const file = (await exportFile()).body;
     expect(

@@ -11,6 +11,7 @@ import {
   Res,
   UploadedFile,
   UseFilters,
+  UseGuards,
   UseInterceptors,
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
@@ -19,10 +20,12 @@ import type { Response } from 'express';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
-import { AttachmentsService, type UploadedFileLike } from './attachments.service';
+import { AttachmentsService } from './attachments.service';
 import { ContentQueryDto } from './dto/content-query.dto';
 import { UploadAttachmentDto } from './dto/upload-attachment.dto';
 import { contentDisposition } from './file-name';
+import type { StagedFile } from './staging-storage';
+import { UploadAccessGuard } from './upload-access.guard';
 import { UploadLimitFilter } from './upload-limit.filter';
 
 /**
@@ -45,6 +48,8 @@ export class AttachmentsController {
 
   @Post('calculations/:id/attachments')
   @UseFilters(UploadLimitFilter)
+  // Access first, before the interceptor reads the body.
+  @UseGuards(UploadAccessGuard)
   @UseInterceptors(FileInterceptor('file'))
   @ApiConsumes('multipart/form-data')
   @ApiBody({
@@ -60,7 +65,7 @@ export class AttachmentsController {
   upload(
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
-    @UploadedFile() file: UploadedFileLike | undefined,
+    @UploadedFile() file: StagedFile | undefined,
     @Body() body: UploadAttachmentDto,
   ) {
     return this.attachments.upload(user, id, file, body.fillLogId ?? null);

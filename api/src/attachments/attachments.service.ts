@@ -20,13 +20,8 @@ import { Attachment } from './attachment.entity';
 import { attachmentView, type AttachmentView } from './attachment-views';
 import { cleanFileName } from './file-name';
 import { sniffMediaType } from './media-type';
-import { UploadStore } from './upload-store';
-
-export interface UploadedFileLike {
-  buffer: Buffer;
-  originalname?: string;
-  size: number;
-}
+import type { StagedFile } from './staging-storage';
+import { type StagedUpload, UploadStore } from './upload-store';
 
 @Injectable()
 export class AttachmentsService {
@@ -45,43 +40,54 @@ export class AttachmentsService {
     return rows.map((row) => attachmentView(row, names(row.uploadedBy)));
   }
 
+  /**
+   * Records an upload the upload route has streamed to a temporary file. Access was checked before
+   * the body was read (UploadAccessGuard); it is checked again here, as the service's own rule. A
+   * refused upload's temporary file is removed.
+   */
   async upload(
     user: AuthUser,
     calculationId: string,
-    file: UploadedFileLike | undefined,
+    file: StagedFile | undefined,
     fillLogId: string | null = null,
   ): Promise<AttachmentView> {
-    const calculation = await this.calculations.findReadable(user, calculationId);
-    if (!canEdit(user, calculation) && !hasRole(user, 'admin')) {
-      throw new ForbiddenException({
-        message: 'Only the calculation’s owner or an admin adds files to it.',
+    try {
+      const calculation = await this.calculations.findReadable(user, calculationId);
+      if (!canEdit(user, calculation) && !hasRole(user, 'admin')) {
+        throw new ForbiddenException({
+          message: 'Only the calculation’s owner or an admin adds files to it.',
+        });
+      }
+      if (!file || file.size === 0) {
+        throw new BadRequestException({
+          message: 'file is required: send it as multipart/form-data in the field "file".',
+          field: 'file',
+        });
+      }
+      if (fillLogId && !(await this.fillLogs.existsBy({ id: fillLogId, calculationId }))) {
+        throw new NotFoundException({
+          message: 'fillLogId is not a fill log of this calculation.',
+          field: 'fillLogId',
+        });
+      }
+      const sniffed = await sniffMediaType(file.staged.head, () =>
+        this.store.readStaged(file.staged),
+      );
+      if (!sniffed.ok) {
+        throw new UnsupportedMediaTypeException({
+          message: `file ${sniffed.reason}.`,
+          field: 'file',
+        });
+      }
+      return await this.record(user, calculationId, file.staged, file.size, {
+        fileName: cleanFileName(file.originalname),
+        mediaType: sniffed.mediaType,
+        fillLogId,
+        versionNumber: null,
       });
+    } finally {
+      if (file) await this.store.discard(file.staged);
     }
-    if (!file || file.size === 0) {
-      throw new BadRequestException({
-        message: 'file is required: send it as multipart/form-data in the field "file".',
-        field: 'file',
-      });
-    }
-    if (fillLogId && !(await this.fillLogs.existsBy({ id: fillLogId, calculationId }))) {
-      throw new NotFoundException({
-        message: 'fillLogId is not a fill log of this calculation.',
-        field: 'fillLogId',
-      });
-    }
-    const sniffed = await sniffMediaType(file.buffer);
-    if (!sniffed.ok) {
-      throw new UnsupportedMediaTypeException({
-        message: `file ${sniffed.reason}.`,
-        field: 'file',
-      });
-    }
-    return this.store_(user, calculationId, file.buffer, {
-      fileName: cleanFileName(file.originalname),
-      mediaType: sniffed.mediaType,
-      fillLogId,
-      versionNumber: null,
-    });
   }
 
   /** Stores bytes the server made itself (the archived sign-off PDF). */
@@ -91,16 +97,31 @@ export class AttachmentsService {
     bytes: Buffer,
     meta: { fileName: string; mediaType: string; versionNumber: number },
   ): Promise<AttachmentView> {
-    return this.store_(actorId ? ({ id: actorId } as AuthUser) : null, calculationId, bytes, {
-      ...meta,
-      fillLogId: null,
-    });
+    const staged = await this.store.stage(bytes);
+    try {
+      return await this.record(
+        actorId ? ({ id: actorId } as AuthUser) : null,
+        calculationId,
+        staged,
+        bytes.length,
+        { ...meta, fillLogId: null },
+      );
+    } finally {
+      await this.store.discard(staged);
+    }
   }
 
-  private async store_(
+  /**
+   * Puts staged bytes under their hash and inserts the record, under the write lock, as one
+   * decision against removals (which delete, count and remove under the same lock). The bytes
+   * were written and synced first, so a crash in between leaves an unreferenced file, never a row
+   * pointing at nothing.
+   */
+  private async record(
     user: Pick<AuthUser, 'id'> | null,
     calculationId: string,
-    bytes: Buffer,
+    staged: StagedUpload,
+    sizeBytes: number,
     meta: {
       fileName: string;
       mediaType: string;
@@ -108,31 +129,22 @@ export class AttachmentsService {
       versionNumber: number | null;
     },
   ): Promise<AttachmentView> {
-    // The bytes go down (synced) first, outside the lock; then, under the write lock, they are
-    // put under their hash and the record is inserted, as one decision against removals (which
-    // delete, count and remove under the same lock). A crash in between leaves an unreferenced
-    // file, never a row pointing at nothing.
-    const staged = await this.store.stage(bytes);
     const { sha256 } = staged;
     const id = randomUUID();
-    try {
-      await this.writeLock.run(async () => {
-        await this.store.commit(staged);
-        await insertRow(this.attachments, {
-          id,
-          calculationId,
-          fillLogId: meta.fillLogId,
-          versionNumber: meta.versionNumber,
-          sha256,
-          sizeBytes: bytes.length,
-          mediaType: meta.mediaType,
-          fileName: meta.fileName,
-          uploadedBy: user?.id ?? null,
-        });
+    await this.writeLock.run(async () => {
+      await this.store.commit(staged);
+      await insertRow(this.attachments, {
+        id,
+        calculationId,
+        fillLogId: meta.fillLogId,
+        versionNumber: meta.versionNumber,
+        sha256,
+        sizeBytes,
+        mediaType: meta.mediaType,
+        fileName: meta.fileName,
+        uploadedBy: user?.id ?? null,
       });
-    } finally {
-      await this.store.discard(staged);
-    }
+    });
     await this.audit.record({
       actorId: user?.id ?? null,
       action: 'attachment.add',

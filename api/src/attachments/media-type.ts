@@ -13,26 +13,33 @@ export const ALLOWED_DESCRIPTION = 'JPEG, PNG, WebP or GIF images, PDF files, CS
 
 export type Sniffed = { ok: true; mediaType: string } | { ok: false; reason: string };
 
-const strictUtf8 = new TextDecoder('utf-8', { fatal: true });
-
 /**
- * Plain text: valid UTF-8 with no NUL and almost no control characters. Anything that passes is
- * served as text, never as HTML or script, whatever it contains.
+ * Plain text: valid UTF-8 with no NUL and almost no control characters, read chunk by chunk so a
+ * large file is never decoded at once. Anything that passes is served as text, never as HTML or
+ * script, whatever it contains.
  */
-function asText(buffer: Buffer): string | undefined {
-  let text: string;
-  try {
-    text = strictUtf8.decode(buffer);
-  } catch {
-    return undefined;
-  }
+async function isPlainText(chunks: AsyncIterable<Buffer>): Promise<boolean> {
+  const decoder = new TextDecoder('utf-8', { fatal: true });
+  let length = 0;
   let controls = 0;
-  for (let index = 0; index < text.length; index += 1) {
-    const code = text.charCodeAt(index);
-    if (code === 0) return undefined;
-    if (code < 32 && code !== 9 && code !== 10 && code !== 13 && code !== 12) controls += 1;
+  const count = (text: string): boolean => {
+    for (let index = 0; index < text.length; index += 1) {
+      const code = text.charCodeAt(index);
+      if (code === 0) return false;
+      if (code < 32 && code !== 9 && code !== 10 && code !== 13 && code !== 12) controls += 1;
+    }
+    length += text.length;
+    return true;
+  };
+  try {
+    for await (const chunk of chunks) {
+      if (!count(decoder.decode(chunk, { stream: true }))) return false;
+    }
+    if (!count(decoder.decode())) return false;
+  } catch {
+    return false;
   }
-  return controls <= text.length / 1000 ? text : undefined;
+  return controls <= length / 1000;
 }
 
 /** A delimiter that splits the first few non-empty lines into the same number of columns. */
@@ -49,12 +56,17 @@ function looksLikeCsv(text: string): boolean {
 }
 
 /**
- * The media type of an upload from its bytes (magic numbers via file-type, then a text check),
- * never from its name or the client's Content-Type.
+ * The media type of an upload from its bytes (magic numbers via file-type on its first bytes,
+ * then a text check over the whole file), never from its name or the client's Content-Type.
+ * @param head the first bytes of the file (4 100 are enough for file-type)
+ * @param chunks the whole file, read again in chunks, for the text check
  */
-export async function sniffMediaType(buffer: Buffer): Promise<Sniffed> {
-  if (buffer.length === 0) return { ok: false, reason: 'is empty' };
-  const found = await fileTypeFromBuffer(buffer);
+export async function sniffMediaType(
+  head: Buffer,
+  chunks: () => AsyncIterable<Buffer>,
+): Promise<Sniffed> {
+  if (head.length === 0) return { ok: false, reason: 'is empty' };
+  const found = await fileTypeFromBuffer(head);
   if (found) {
     if (ALLOWED_BINARY_TYPES[found.mime]) return { ok: true, mediaType: found.mime };
     return {
@@ -62,9 +74,9 @@ export async function sniffMediaType(buffer: Buffer): Promise<Sniffed> {
       reason: `is ${found.mime} (.${found.ext}) by its content; allowed are ${ALLOWED_DESCRIPTION}`,
     };
   }
-  const text = asText(buffer);
-  if (text !== undefined) {
-    return { ok: true, mediaType: looksLikeCsv(text) ? 'text/csv' : 'text/plain' };
+  if (await isPlainText(chunks())) {
+    const start = new TextDecoder('utf-8').decode(head);
+    return { ok: true, mediaType: looksLikeCsv(start) ? 'text/csv' : 'text/plain' };
   }
   return {
     ok: false,

@@ -1,6 +1,8 @@
 import { createHash, randomUUID } from 'node:crypto';
-import { createReadStream, existsSync, type ReadStream } from 'node:fs';
+import { createReadStream, createWriteStream, existsSync, type ReadStream } from 'node:fs';
 import { open, rename, rm } from 'node:fs/promises';
+import { type Readable, Transform } from 'node:stream';
+import { pipeline } from 'node:stream/promises';
 import { join, resolve, sep } from 'node:path';
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
@@ -14,6 +16,15 @@ export interface StagedUpload {
   readonly sha256: string;
   readonly temporaryPath: string;
 }
+
+/** An upload streamed to disk: its hash, size and first bytes (enough to tell its type). */
+export interface StagedStream extends StagedUpload {
+  readonly sizeBytes: number;
+  readonly head: Buffer;
+}
+
+/** Bytes at the start of a file that type detection (file-type) looks at. */
+export const HEAD_BYTES = 4100;
 
 /**
  * Files under DATA_DIR/uploads, each named by the SHA-256 of its bytes (two-character fan-out
@@ -56,6 +67,57 @@ export class UploadStore {
     }
     await handle.close();
     return { sha256, temporaryPath };
+  }
+
+  /**
+   * Streams an upload to a temporary file (owner-only, synced), hashing it on the way, so no
+   * upload is ever held in memory whole. Nothing is visible under the hash until `commit`.
+   */
+  async stageStream(source: Readable): Promise<StagedStream> {
+    makePrivateDirectory(this.root);
+    const temporaryPath = join(this.root, `.incoming-${randomUUID()}`);
+    const hash = createHash('sha256');
+    const headChunks: Buffer[] = [];
+    let headLength = 0;
+    let sizeBytes = 0;
+    try {
+      await pipeline(
+        source,
+        new Transform({
+          transform(chunk: Buffer, _encoding, callback) {
+            hash.update(chunk);
+            sizeBytes += chunk.length;
+            if (headLength < HEAD_BYTES) {
+              headChunks.push(chunk.subarray(0, HEAD_BYTES - headLength));
+              headLength += Math.min(chunk.length, HEAD_BYTES - headLength);
+            }
+            callback(null, chunk);
+          },
+        }),
+        createWriteStream(temporaryPath, { flags: 'wx', mode: 0o600 }),
+      );
+      // On disk before anything refers to it.
+      const handle = await open(temporaryPath, 'r+');
+      try {
+        await handle.sync();
+      } finally {
+        await handle.close();
+      }
+    } catch (error) {
+      await rm(temporaryPath, { force: true });
+      throw error;
+    }
+    return {
+      sha256: hash.digest('hex'),
+      temporaryPath,
+      sizeBytes,
+      head: Buffer.concat(headChunks),
+    };
+  }
+
+  /** Reads a staged file in chunks, for checks that need more than its head. */
+  readStaged(staged: StagedUpload): ReadStream {
+    return createReadStream(staged.temporaryPath);
   }
 
   /** Puts a staged file under its hash; a file already there has the same bytes and is replaced. */

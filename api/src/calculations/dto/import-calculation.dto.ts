@@ -62,6 +62,12 @@ class ImportedVersionDto {
   @Allow() outputs?: unknown;
 }
 
+/**
+ * Versions one imported file may hold. Each is recomputed by the engine (a flight profile takes
+ * milliseconds to tens of them); more than this is not a calculation's history but a load.
+ */
+export const MAX_IMPORTED_VERSIONS = 100;
+
 /** A Loftwright calculation file, as GET /api/calculations/:id/export writes it. */
 export class ImportCalculationDto {
   @ApiProperty({ example: CALCULATION_FILE_FORMAT })
@@ -87,7 +93,9 @@ export class ImportCalculationDto {
   @ApiProperty()
   @IsArray()
   @ArrayMinSize(1, { message: 'versions needs at least one version' })
-  @ArrayMaxSize(500)
+  @ArrayMaxSize(MAX_IMPORTED_VERSIONS, {
+    message: `versions may hold at most ${MAX_IMPORTED_VERSIONS} versions in one file`,
+  })
   @ValidateNested({ each: true })
   @Type(() => ImportedVersionDto)
   versions: ImportedVersionDto[];
