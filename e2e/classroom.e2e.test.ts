@@ -3,6 +3,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, type Browser } from './support/browser.js';
 import { collectConsoleErrors } from './support/console-errors.js';
+import { mailedLinkPath } from './support/mailed-link.js';
 import { screenshotOnFailure } from './support/screenshot-on-failure.js';
 import { startProduct, type RunningProduct } from './support/start-product.js';
 
@@ -138,6 +139,10 @@ describe('the classroom in the browser: publish, join, walk through, exercise, s
       await page.getByLabel('E-mail').fill('mina@school.test');
       await page.getByLabel('Password').fill('a-long-password-1');
       await page.getByRole('button', { name: 'Create account' }).click();
+      // The account is made when the link mailed to the address is opened.
+      await expect.poll(() => page.getByText('Check your mail').isVisible()).toBe(true);
+      const link = await mailedLinkPath(product, 'mina@school.test', '/confirm-account');
+      await page.goto(`${product.baseUrl}${link}`);
       await page.waitForURL(`${product.baseUrl}/classes`);
       const row = page.getByRole('table', { name: 'Classes' }).getByRole('row', {
         name: /Evening lift club/,

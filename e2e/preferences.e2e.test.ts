@@ -2,6 +2,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, type Browser } from './support/browser.js';
 import { collectConsoleErrors } from './support/console-errors.js';
+import { mailedLinkPath } from './support/mailed-link.js';
 import { screenshotOnFailure } from './support/screenshot-on-failure.js';
 import { startProduct, type RunningProduct } from './support/start-product.js';
 
@@ -57,6 +58,9 @@ describe('account preferences in the browser', () => {
     await page.getByLabel('E-mail').fill('greta@example.test');
     await page.getByLabel('Password').fill('a-long-password-1');
     await page.getByRole('button', { name: 'Create account' }).click();
+    await expect.poll(() => page.getByText('Check your mail').isVisible()).toBe(true);
+    const link = await mailedLinkPath(product, 'greta@example.test', '/confirm-account');
+    await page.goto(`${product.baseUrl}${link}`);
     await expect.poll(() => page.url()).toBe(`${product.baseUrl}/calculations`);
     expect(await storedPreferences()).toEqual({
       unitSystem: 'si',

@@ -2,6 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from './support/create-test-app';
 import { readOutbox } from './support/outbox';
+import { mailedRegistrationToken, registerThroughMail } from './support/users';
 
 describe('auth', () => {
   let testApp: TestApp;
@@ -28,18 +29,87 @@ describe('auth', () => {
       });
       expect(first.body.user.passwordHash).toBeUndefined();
       expect(typeof first.body.accessToken).toBe('string');
-      const second = await http()
-        .post('/api/auth/register')
-        .send({ email: 'second@example.org', password: 'second-password', displayName: 'Second' });
+      const second = await registerThroughMail(testApp.app, {
+        email: 'second@example.org',
+        password: 'second-password',
+        displayName: 'Second',
+      });
+      expect(second.status).toBe(201);
       expect(second.body.user.roles).toEqual(['designer']);
     });
 
-    it('refuses a taken address with 409 and a weak or over-long password with 400 naming the field', async () => {
-      const taken = await http()
+    it('creates a later account only when the mailed link is opened, and the link works once', async () => {
+      const registered = await http()
         .post('/api/auth/register')
-        .send({ email: 'first@example.org', password: 'another-password', displayName: 'X' });
-      expect(taken.status).toBe(409);
-      expect(taken.body.field).toBe('email');
+        .send({ email: 'Later@Example.org', password: 'later-password', displayName: 'Later' });
+      expect(registered.status).toBe(202);
+      expect(registered.body.status).toBe('check-mail');
+      expect(registered.body.accessToken).toBeUndefined();
+      const early = await http()
+        .post('/api/auth/login')
+        .send({ email: 'later@example.org', password: 'later-password' });
+      expect(early.status).toBe(401);
+      const token = await mailedRegistrationToken(testApp.app, 'later@example.org');
+      const confirmed = await http().post('/api/auth/register/confirm').send({ token });
+      expect(confirmed.status).toBe(201);
+      expect(confirmed.body.user).toMatchObject({
+        email: 'later@example.org',
+        roles: ['designer'],
+      });
+      const again = await http().post('/api/auth/register/confirm').send({ token });
+      expect(again.status).toBe(400);
+      expect(again.body.field).toBe('token');
+    });
+
+    it('answers a taken address exactly as a new one, changes nothing, and tells the owner by mail', async () => {
+      const answer = (email: string) =>
+        http()
+          .post('/api/auth/register')
+          .send({ email, password: 'intruder-password', displayName: 'Somebody' });
+      const taken = await answer('first@example.org');
+      const fresh = await answer('fresh@example.org');
+      expect(taken.status).toBe(fresh.status);
+      expect(Object.keys(taken.body)).toEqual(Object.keys(fresh.body));
+      expect(taken.body.message.replace('first@example.org', 'X')).toBe(
+        fresh.body.message.replace('fresh@example.org', 'X'),
+      );
+      const toOwner = (await readOutbox(testApp.app)).filter((mail) =>
+        mail.to.includes('first@example.org'),
+      );
+      expect(toOwner.map((mail) => mail.subject)).toContain(
+        'Someone tried to create a Loftwright account with your address',
+      );
+      expect(toOwner.some((mail) => mail.text.includes('confirm-account'))).toBe(false);
+      // The owner's password is untouched and the other password opens nothing.
+      const owner = await http()
+        .post('/api/auth/login')
+        .send({ email: 'first@example.org', password: 'first-password' });
+      expect(owner.status).toBe(200);
+      const intruder = await http()
+        .post('/api/auth/login')
+        .send({ email: 'first@example.org', password: 'intruder-password' });
+      expect(intruder.status).toBe(401);
+    });
+
+    it('refuses an expired registration link and creates nothing', async () => {
+      await http()
+        .post('/api/auth/register')
+        .send({ email: 'slow@example.org', password: 'slow-password', displayName: 'Slow' });
+      const token = await mailedRegistrationToken(testApp.app, 'slow@example.org');
+      const { DataSource } = await import('typeorm');
+      await testApp.app
+        .get(DataSource)
+        .query(`UPDATE pending_registration SET expires_at = datetime('now', '-1 minute')`);
+      const confirmed = await http().post('/api/auth/register/confirm').send({ token });
+      expect(confirmed.status).toBe(400);
+      expect(confirmed.body.message).toMatch(/expired/);
+      const login = await http()
+        .post('/api/auth/login')
+        .send({ email: 'slow@example.org', password: 'slow-password' });
+      expect(login.status).toBe(401);
+    });
+
+    it('refuses a weak or over-long password with 400 naming the field', async () => {
       const short = await http()
         .post('/api/auth/register')
         .send({ email: 'third@example.org', password: 'short', displayName: 'X' });

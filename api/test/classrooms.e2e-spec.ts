@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ClassroomsService } from '../src/classrooms/classrooms.service';
 import { JOIN_CODE_ALPHABET } from '../src/classrooms/join-code';
 import { createTestApp, type TestApp } from './support/create-test-app';
-import { createUser, type TestUser } from './support/users';
+import { createUser, registerThroughMail, type TestUser } from './support/users';
 
 describe('classes and join codes', () => {
   let testApp: TestApp;
@@ -142,7 +142,7 @@ describe('classes and join codes', () => {
     });
     expect(wrong.status).toBe(404);
     expect(wrong.body.field).toBe('joinCode');
-    const registered = await http().post('/api/auth/register').send({
+    const registered = await registerThroughMail(testApp.app, {
       email: 'new-pupil@test.invalid',
       password: 'a-long-password-1',
       displayName: 'New Pupil',
@@ -154,7 +154,7 @@ describe('classes and join codes', () => {
     const classes = await http().get('/api/classes').set(auth);
     expect(classes.body.map((item: { id: string }) => item.id)).toEqual([created.id]);
     // Without a code a self-registered account stays a designer, as before.
-    const plain = await http().post('/api/auth/register').send({
+    const plain = await registerThroughMail(testApp.app, {
       email: 'plain@test.invalid',
       password: 'a-long-password-2',
       displayName: 'Plain',

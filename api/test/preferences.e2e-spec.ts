@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from './support/create-test-app';
+import { registerThroughMail } from './support/users';
 
 const NUMBER_FORMAT_MESSAGE = 'numberFormat must be one of: point-comma, comma-space, comma-point';
 const CURRENCY_MESSAGE = 'currency must be a three-letter ISO 4217 code such as EUR';
@@ -16,14 +17,12 @@ describe('preferences', () => {
   /** Registers a new account over HTTP and returns its answer and a bearer header. */
   async function register(extra: Record<string, unknown> = {}) {
     counter += 1;
-    const response = await http()
-      .post('/api/auth/register')
-      .send({
-        email: `person-${counter}@example.org`,
-        password: 'a-long-password',
-        displayName: `Person ${counter}`,
-        ...extra,
-      });
+    const response = await registerThroughMail(testApp.app, {
+      email: `person-${counter}@example.org`,
+      password: 'a-long-password',
+      displayName: `Person ${counter}`,
+      ...extra,
+    });
     const auth = { Authorization: `Bearer ${response.body.accessToken as string}` };
     return { response, auth };
   }

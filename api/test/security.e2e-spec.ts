@@ -2,6 +2,7 @@ import { statSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { registerThroughMail } from './support/users';
 import { createTestApp, type TestApp } from './support/create-test-app';
 
 describe('security defaults', () => {
@@ -33,9 +34,11 @@ describe('security defaults', () => {
     await testApp.app
       .get(DataSource)
       .query('ALTER TABLE "calculation" RENAME TO "calculation_gone"');
-    const register = await request(testApp.app.getHttpServer())
-      .post('/api/auth/register')
-      .send({ email: 'a@b.org', password: 'long-enough-pw', displayName: 'A' });
+    const register = await registerThroughMail(testApp.app, {
+      email: 'a@b.org',
+      password: 'long-enough-pw',
+      displayName: 'A',
+    });
     const token = register.body.accessToken as string;
     const response = await request(testApp.app.getHttpServer())
       .get('/api/calculations')

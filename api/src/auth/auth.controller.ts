@@ -1,15 +1,23 @@
-import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post } from '@nestjs/common';
-import { ApiBadRequestResponse, ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post, Res } from '@nestjs/common';
+import type { Response } from 'express';
+import {
+  ApiAcceptedResponse,
+  ApiBadRequestResponse,
+  ApiBearerAuth,
+  ApiCreatedResponse,
+  ApiOkResponse,
+  ApiTags,
+} from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import { RateLimited } from '../common/rate-limit';
 import { type PublicUser, toPublicUser } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
-import { AuthService, type SignedIn } from './auth.service';
+import { AuthService, type RegisterOutcome, type SignedIn } from './auth.service';
 import type { AuthUser } from './auth-user';
 import { LoginDto } from './dto/login.dto';
 import { PasswordResetConfirmDto, PasswordResetRequestDto } from './dto/password-reset.dto';
-import { RegisterDto } from './dto/register.dto';
+import { ConfirmRegistrationDto, RegisterDto } from './dto/register.dto';
 import { UpdatePreferencesDto } from './dto/update-preferences.dto';
 import { NotFoundException } from '@nestjs/common';
 
@@ -24,8 +32,30 @@ export class AuthController {
   @Public()
   @RateLimited('register')
   @Post('register')
-  register(@Body() body: RegisterDto): Promise<SignedIn> {
-    return this.authService.register(body);
+  @ApiCreatedResponse({
+    description: 'the first account of an empty database, created and signed in (status signed-in)',
+  })
+  @ApiAcceptedResponse({
+    description:
+      'any later registration (status check-mail): the same answer whether or not the address ' +
+      'has an account; a new address is mailed a link that creates it, a taken one its owner',
+  })
+  async register(
+    @Body() body: RegisterDto,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<RegisterOutcome> {
+    const outcome = await this.authService.register(body);
+    response.status(outcome.status === 'signed-in' ? HttpStatus.CREATED : HttpStatus.ACCEPTED);
+    return outcome;
+  }
+
+  @Public()
+  @RateLimited('sign-in')
+  @Post('register/confirm')
+  @ApiCreatedResponse({ description: 'the account is created and signed in' })
+  @ApiBadRequestResponse({ description: 'the link is not valid or has expired (field token)' })
+  confirmRegistration(@Body() body: ConfirmRegistrationDto): Promise<SignedIn> {
+    return this.authService.confirmRegistration(body.token);
   }
 
   @Public()

@@ -17,6 +17,7 @@ import { AuthService } from './auth.service';
 import { JwtAuthGuard } from './guards/jwt-auth.guard';
 import { RolesGuard } from './guards/roles.guard';
 import { PasswordResetToken } from './password-reset-token.entity';
+import { PendingRegistration } from './pending-registration.entity';
 import { JwtStrategy } from './strategies/jwt.strategy';
 
 const jwtSecretProvider = {
@@ -35,7 +36,7 @@ const jwtSecretProvider = {
     MailModule,
     ClassroomsModule,
     PassportModule,
-    TypeOrmModule.forFeature([PasswordResetToken]),
+    TypeOrmModule.forFeature([PasswordResetToken, PendingRegistration]),
     ThrottlerModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService<EnvironmentVariables, true>) =>

@@ -8,7 +8,11 @@ import { AuditService } from '../audit/audit.service';
 import type { EnvironmentVariables } from '../config/env.validation';
 import { WriteLock } from '../database/write-lock';
 import { MailService } from '../mail/mail.service';
-import { passwordResetMail } from '../mail/mail-templates';
+import {
+  confirmRegistrationMail,
+  passwordResetMail,
+  registrationAttemptMail,
+} from '../mail/mail-templates';
 import { PasswordHasher } from '../users/password-hasher.service';
 import { type PublicUser, toPublicUser, type User } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
@@ -16,14 +20,22 @@ import type { LoginDto } from './dto/login.dto';
 import type { RegisterDto } from './dto/register.dto';
 import { ClassroomsService } from '../classrooms/classrooms.service';
 import { PasswordResetToken } from './password-reset-token.entity';
+import { PendingRegistration } from './pending-registration.entity';
 
 /** How long a password-reset link works. */
 export const RESET_TOKEN_TTL_MS = 30 * 60 * 1000;
+
+/** How long the link that finishes a registration works. */
+export const REGISTRATION_TOKEN_TTL_MS = 24 * 60 * 60 * 1000;
 
 export interface SignedIn {
   accessToken: string;
   user: PublicUser;
 }
+
+/** What registering did: signed in the first account, or mailed the address. */
+export type RegisterOutcome =
+  ({ status: 'signed-in' } & SignedIn) | { status: 'check-mail'; message: string };
 
 const sha256 = (text: string) => createHash('sha256').update(text).digest('hex');
 
@@ -38,37 +50,130 @@ export class AuthService {
     private readonly config: ConfigService<EnvironmentVariables, true>,
     @InjectRepository(PasswordResetToken)
     private readonly resetTokens: Repository<PasswordResetToken>,
+    @InjectRepository(PendingRegistration)
+    private readonly pending: Repository<PendingRegistration>,
     private readonly writeLock: WriteLock,
     private readonly classrooms: ClassroomsService,
   ) {}
 
-  async register(dto: RegisterDto): Promise<SignedIn> {
+  /**
+   * Registers an address. The first account of an empty database is created and signed in at once
+   * (there is nobody to tell apart, and nobody yet who could read a mail for it). Every later
+   * registration answers the same whether or not the address has an account: a new address gets a
+   * link that creates the account when opened, a taken one a mail telling its owner.
+   */
+  async register(dto: RegisterDto): Promise<RegisterOutcome> {
     // Registering from a class's join link makes a student account; the code is checked before
-    // anything is created, so a wrong code leaves no account behind.
+    // anything is created or mailed, so a wrong code leaves nothing behind.
     const joinCode = dto.joinCode?.trim() ? dto.joinCode : undefined;
     if (joinCode) await this.classrooms.findJoinable(joinCode, 'joinCode');
-    const user = await this.usersService.create({
+    // Hashed whatever happens next, so the answer takes as long for a taken address.
+    const passwordHash = await this.hasher.hash(dto.password);
+    const account = {
       email: dto.email,
-      password: dto.password,
+      password: { hash: passwordHash },
       displayName: dto.displayName,
       numberFormat: dto.numberFormat,
-      // The first account on an empty database runs it: without an admin nobody could grant
-      // roles. Decided with the insert, under the write lock, so only one account is first.
-      roles: (first) => (first ? ['admin', 'designer'] : joinCode ? ['student'] : ['designer']),
+    };
+    const first = await this.usersService.createFirstAccount({
+      ...account,
+      roles: ['admin', 'designer'],
     });
+    if (first) {
+      await this.recordRegistration(first);
+      return { status: 'signed-in', ...(await this.signIn(first)) };
+    }
+    const email = dto.email.trim().toLowerCase();
+    const owner = await this.usersService.findByEmail(email);
     await this.audit.record({
+      actorId: null,
+      action: 'auth.register-request',
+      targetType: 'user',
+      targetId: owner?.id ?? null,
+      detail: { email },
+    });
+    if (owner) {
+      this.mail.send(
+        registrationAttemptMail(owner, this.link('/sign-in'), this.link('/forgot-password')),
+      );
+    } else {
+      const token = randomBytes(32).toString('base64url');
+      await this.writeLock.run(() =>
+        this.pending.insert({
+          id: randomUUID(),
+          email,
+          displayName: dto.displayName.trim(),
+          passwordHash,
+          numberFormat: dto.numberFormat ?? null,
+          joinCode: joinCode ?? null,
+          tokenHash: sha256(token),
+          expiresAt: new Date(Date.now() + REGISTRATION_TOKEN_TTL_MS),
+        }),
+      );
+      this.mail.send(
+        confirmRegistrationMail(
+          { email, displayName: dto.displayName.trim() },
+          this.link(`/confirm-account?token=${token}`),
+          REGISTRATION_TOKEN_TTL_MS,
+        ),
+      );
+    }
+    return {
+      status: 'check-mail',
+      message:
+        `A message is on its way to ${email}. Open the link in it to finish creating the ` +
+        `account. If the address already has an account, the message says so instead.`,
+    };
+  }
+
+  /** Creates the account of a registration whose mailed link was opened, and signs it in. */
+  async confirmRegistration(token: string): Promise<SignedIn> {
+    const pending = await this.pending.findOneBy({
+      tokenHash: sha256(token),
+      expiresAt: MoreThan(new Date()),
+    });
+    if (!pending) {
+      throw new BadRequestException({
+        message: 'This link is not valid or has expired; register again.',
+        field: 'token',
+      });
+    }
+    if (pending.joinCode) await this.classrooms.findJoinable(pending.joinCode, 'joinCode');
+    const user = await this.usersService.create({
+      email: pending.email,
+      password: { hash: pending.passwordHash },
+      displayName: pending.displayName,
+      numberFormat: pending.numberFormat ?? undefined,
+      roles: (first) =>
+        first ? ['admin', 'designer'] : pending.joinCode ? ['student'] : ['designer'],
+    });
+    // Every waiting registration of the address is spent: the address now has its account.
+    await this.writeLock.run(() => this.pending.delete({ email: pending.email }));
+    await this.recordRegistration(user);
+    if (pending.joinCode && user.roles.includes('student')) {
+      await this.classrooms.join(
+        { id: user.id, email: user.email, displayName: user.displayName, roles: user.roles },
+        pending.joinCode,
+      );
+    }
+    return this.signIn(user);
+  }
+
+  private recordRegistration(user: User): Promise<void> {
+    return this.audit.record({
       actorId: user.id,
       action: 'auth.register',
       targetType: 'user',
       targetId: user.id,
     });
-    if (joinCode && user.roles.includes('student')) {
-      await this.classrooms.join(
-        { id: user.id, email: user.email, displayName: user.displayName, roles: user.roles },
-        joinCode,
-      );
-    }
-    return this.signIn(user);
+  }
+
+  /** A link into the web app, on PUBLIC_URL when set. */
+  private link(pathAndQuery: string): string {
+    const baseUrl =
+      this.config.get('PUBLIC_URL', { infer: true }) ??
+      `http://localhost:${this.config.get('PORT', { infer: true })}`;
+    return `${baseUrl.replace(/\/$/, '')}${pathAndQuery}`;
   }
 
   async login(dto: LoginDto): Promise<SignedIn> {
@@ -125,15 +230,8 @@ export class AuthService {
         usedAt: null,
       }),
     );
-    const baseUrl =
-      this.config.get('PUBLIC_URL', { infer: true }) ??
-      `http://localhost:${this.config.get('PORT', { infer: true })}`;
     this.mail.send(
-      passwordResetMail(
-        user,
-        `${baseUrl.replace(/\/$/, '')}/reset-password?token=${token}`,
-        RESET_TOKEN_TTL_MS,
-      ),
+      passwordResetMail(user, this.link(`/reset-password?token=${token}`), RESET_TOKEN_TTL_MS),
     );
   }
 

@@ -4,6 +4,7 @@ import { Attachment } from '../attachments/attachment.entity';
 import { AuditEntry } from '../audit/audit-entry.entity';
 import { createPrivateFile, preparePrivateDataDir } from '../config/data-dir';
 import { PasswordResetToken } from '../auth/password-reset-token.entity';
+import { PendingRegistration } from '../auth/pending-registration.entity';
 import { CalculationVersion } from '../calculations/calculation-version.entity';
 import { Calculation } from '../calculations/calculation.entity';
 import { ClassroomMember } from '../classrooms/classroom-member.entity';
@@ -26,6 +27,7 @@ import { Classrooms1764734400000 } from './migrations/1764734400000-classrooms';
 import { UserNumberFormatCurrency1764738000000 } from './migrations/1764738000000-user-number-format-currency';
 import { FillLogInstrument1764741600000 } from './migrations/1764741600000-fill-log-instrument';
 import { ReviewCalculationTitle1764745200000 } from './migrations/1764745200000-review-calculation-title';
+import { PendingRegistration1764748800000 } from './migrations/1764748800000-pending-registration';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -33,6 +35,7 @@ export const ENTITIES = [
   Installation,
   User,
   PasswordResetToken,
+  PendingRegistration,
   Calculation,
   CalculationVersion,
   Review,
@@ -57,6 +60,7 @@ export const MIGRATIONS = [
   UserNumberFormatCurrency1764738000000,
   FillLogInstrument1764741600000,
   ReviewCalculationTitle1764745200000,
+  PendingRegistration1764748800000,
 ];
 
 /**

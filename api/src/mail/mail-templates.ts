@@ -31,6 +31,37 @@ export function passwordResetMail(user: Person, link: string, ttlMs: number): Ma
   };
 }
 
+export function confirmRegistrationMail(person: Person, link: string, ttlMs: number): MailMessage {
+  return {
+    to: [person.email],
+    subject: 'Finish creating your Loftwright account',
+    text:
+      `Hello ${person.displayName},\n\nSomeone asked to create a Loftwright account for this address. ` +
+      `To finish, open this link within ${Math.round(ttlMs / 3_600_000)} hours:\n\n${link}\n\n` +
+      `The link works once. If you did not ask for an account, ignore this message: nothing is created.` +
+      signature,
+  };
+}
+
+/** Sent instead of a confirmation when the address already has an account. */
+export function registrationAttemptMail(
+  owner: Person,
+  signInLink: string,
+  resetLink: string,
+): MailMessage {
+  return {
+    to: [owner.email],
+    subject: 'Someone tried to create a Loftwright account with your address',
+    text:
+      `Hello ${owner.displayName},\n\nSomeone asked to create a Loftwright account for this address, ` +
+      `which already has one, so nothing was created or changed.\n\n` +
+      `If it was you, sign in here: ${signInLink}\n` +
+      `If you have forgotten your password, choose a new one here: ${resetLink}\n\n` +
+      `If it was not you, ignore this message: your account stays as it is.` +
+      signature,
+  };
+}
+
 export function submittedMail(
   reviewers: Person[],
   author: Person,

@@ -17,6 +17,20 @@ import type { Role } from './roles';
 import { User } from './user.entity';
 import type { NameLookup } from './user-ref';
 
+export interface NewAccount {
+  email: string;
+  /** The password, or its hash when it was hashed earlier (a registration waiting for its mail). */
+  password: string | { hash: string };
+  displayName: string;
+  /**
+   * The account's roles, or how to choose them once it is known whether this is the first
+   * account (decided under the write lock with the insert).
+   */
+  roles: Role[] | ((isFirstAccount: boolean) => Role[]);
+  /** As the browser guessed it at registration; the default when not known. */
+  numberFormat?: NumberFormat;
+}
+
 @Injectable()
 export class UsersService {
   constructor(
@@ -48,31 +62,36 @@ export class UsersService {
     return this.users.findOneBy({ email: email.trim().toLowerCase() });
   }
 
-  async create(input: {
-    email: string;
-    password: string;
-    displayName: string;
-    /**
-     * The account's roles, or how to choose them once it is known whether this is the first
-     * account: decided under the write lock with the insert, so parallel registrations on an empty
-     * database make exactly one first account.
-     */
-    roles: Role[] | ((isFirstAccount: boolean) => Role[]);
-    /** As the browser guessed it at registration; the default when not known. */
-    numberFormat?: NumberFormat;
-  }): Promise<User> {
+  /** Creates an account; 409 naming `email` when the address already has one. */
+  async create(input: NewAccount): Promise<User> {
+    return (await this.insertAccount(input, false)) as User;
+  }
+
+  /**
+   * Creates the account only when the database has none yet, else nothing (null). Decided under
+   * the write lock with the insert, so of registrations racing on an empty database exactly one
+   * is the first.
+   */
+  createFirstAccount(input: NewAccount): Promise<User | null> {
+    return this.insertAccount(input, true);
+  }
+
+  private async insertAccount(input: NewAccount, onlyIfFirst: boolean): Promise<User | null> {
     const email = input.email.trim().toLowerCase();
-    if (await this.findByEmail(email)) {
-      throw new ConflictException({
+    const taken = () =>
+      new ConflictException({
         message: 'An account with this e-mail already exists.',
         field: 'email',
       });
-    }
+    if (!onlyIfFirst && (await this.findByEmail(email))) throw taken();
     const user = this.users.create({
       id: randomUUID(),
       email,
       displayName: input.displayName.trim(),
-      passwordHash: await this.hasher.hash(input.password),
+      passwordHash:
+        typeof input.password === 'string'
+          ? await this.hasher.hash(input.password)
+          : input.password.hash,
       roles: [],
       unitSystem: 'si',
       numberFormat: input.numberFormat ?? DEFAULT_NUMBER_FORMAT,
@@ -80,17 +99,11 @@ export class UsersService {
       tokenVersion: 0,
     });
     return this.writeLock.run(async () => {
+      const isFirstAccount = (await this.users.count()) === 0;
+      if (onlyIfFirst && !isFirstAccount) return null;
       // Checked again under the lock: two registrations of one address at once get one account.
-      if (await this.findByEmail(email)) {
-        throw new ConflictException({
-          message: 'An account with this e-mail already exists.',
-          field: 'email',
-        });
-      }
-      const roles =
-        typeof input.roles === 'function'
-          ? input.roles((await this.users.count()) === 0)
-          : input.roles;
+      if (await this.findByEmail(email)) throw taken();
+      const roles = typeof input.roles === 'function' ? input.roles(isFirstAccount) : input.roles;
       user.roles = [...new Set(roles)];
       return this.users.save(user);
     });

@@ -3,6 +3,7 @@ import request from 'supertest';
 import { expect } from 'vitest';
 import type { Role } from '../../src/users/roles';
 import { UsersService } from '../../src/users/users.service';
+import { readOutbox } from './outbox';
 
 export interface TestUser {
   id: string;
@@ -31,4 +32,35 @@ export async function createUser(
   expect(response.status).toBe(200);
   const token = response.body.accessToken as string;
   return { id: user.id, email, token, auth: { Authorization: `Bearer ${token}` } };
+}
+
+/** The token of the newest registration link mailed to an address, from the local outbox. */
+export async function mailedRegistrationToken(
+  app: NestExpressApplication,
+  email: string,
+): Promise<string> {
+  const mail = (await readOutbox(app)).find(
+    (item) =>
+      item.to.includes(email.trim().toLowerCase()) &&
+      item.subject.startsWith('Finish creating your Loftwright account'),
+  );
+  const token = mail?.text.match(/\/confirm-account\?token=([\w-]+)/)?.[1];
+  if (!token) throw new Error(`no registration link was mailed to ${email}`);
+  return token;
+}
+
+/**
+ * Registers over HTTP as a person does: the register request, then the link mailed to the address
+ * (read from the local outbox). Answers the response that signed the new account in.
+ */
+export async function registerThroughMail(
+  app: NestExpressApplication,
+  body: Record<string, unknown> & { email: string },
+): Promise<request.Response> {
+  const server = app.getHttpServer();
+  const registered = await request(server).post('/api/auth/register').send(body);
+  // The first account of an empty database is signed in at once; anything but 202 is the answer.
+  if (registered.status !== 202) return registered;
+  const token = await mailedRegistrationToken(app, body.email);
+  return request(server).post('/api/auth/register/confirm').send({ token });
 }

@@ -26,6 +26,11 @@ export const routes: RouteObject[] = [
         lazy: () => import('./routes/register').then((m) => ({ Component: m.RegisterRoute })),
       },
       {
+        path: paths.confirmAccount.path,
+        lazy: () =>
+          import('./routes/confirm-account').then((m) => ({ Component: m.ConfirmAccountRoute })),
+      },
+      {
         path: paths.forgotPassword.path,
         lazy: () =>
           import('./routes/password-reset').then((m) => ({ Component: m.ForgotPasswordRoute })),

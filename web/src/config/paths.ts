@@ -10,6 +10,7 @@ export const paths = {
     href: (joinCode?: string) =>
       joinCode ? `/register?join=${encodeURIComponent(joinCode)}` : '/register',
   },
+  confirmAccount: { path: '/confirm-account', href: () => '/confirm-account' },
   forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },
   calculations: { path: '/calculations', href: () => '/calculations' },

@@ -1,5 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
-import { IsEmail, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsEmail, IsOptional, IsString, Length, MaxLength, MinLength } from 'class-validator';
 import { type NumberFormat, NUMBER_FORMATS } from '../../users/preferences';
 import { IsBcryptSafe } from './password.validator';
 import { IsNumberFormat, IsSent } from './preference.validators';
@@ -39,4 +39,11 @@ export class RegisterDto {
   @IsSent()
   @IsNumberFormat()
   numberFormat?: NumberFormat;
+}
+
+export class ConfirmRegistrationDto {
+  @ApiProperty({ description: 'the token from the link mailed at registration' })
+  @IsString({ message: 'token must be text' })
+  @Length(20, 200, { message: 'token is not a registration token' })
+  token: string;
 }

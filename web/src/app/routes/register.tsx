@@ -1,4 +1,5 @@
-import { Alert, Card, Typography } from 'antd';
+import { Alert, Card, Result, Typography } from 'antd';
+import { useState } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { RegisterForm } from '@/features/auth/components/register-form';
@@ -7,6 +8,19 @@ export function RegisterRoute() {
   const navigate = useNavigate();
   const [search] = useSearchParams();
   const joinCode = search.get('join')?.trim() || undefined;
+  const [mailedMessage, setMailedMessage] = useState<string>();
+  if (mailedMessage) {
+    return (
+      <Card style={{ maxWidth: 420 }}>
+        <Result
+          status="info"
+          title="Check your mail"
+          subTitle={mailedMessage}
+          extra={<Link to={paths.signIn.href()}>Go to sign in</Link>}
+        />
+      </Card>
+    );
+  }
   return (
     <Card style={{ maxWidth: 420 }}>
       <Typography.Title level={2}>
@@ -27,10 +41,12 @@ export function RegisterRoute() {
       ) : null}
       <RegisterForm
         joinCode={joinCode}
-        onRegistered={() =>
-          void navigate(joinCode ? paths.classes.href() : paths.calculations.href(), {
-            replace: true,
-          })
+        onRegistered={(outcome) =>
+          outcome.status === 'check-mail'
+            ? setMailedMessage(outcome.message)
+            : void navigate(joinCode ? paths.classes.href() : paths.calculations.href(), {
+                replace: true,
+              })
         }
       />
       <Typography.Paragraph style={{ marginTop: 16 }}>

@@ -26,6 +26,13 @@ interface SignedIn {
   user: CurrentUser;
 }
 
+/**
+ * What POST /api/auth/register did (api/src/auth/auth.service.ts, RegisterOutcome): signed in
+ * the first account of an empty database, or mailed the address a link to finish.
+ */
+export type RegisterOutcome =
+  ({ status: 'signed-in' } & SignedIn) | { status: 'check-mail'; message: string };
+
 export const getMe = async (): Promise<CurrentUser> =>
   (await apiClient.get<CurrentUser>('/auth/me')).data;
 
@@ -62,7 +69,21 @@ export function useRegister() {
       joinCode?: string;
       /** As guessed from the browser's locale (guessNumberFormat). */
       numberFormat?: NumberFormat;
-    }) => (await apiClient.post<SignedIn>('/auth/register', body)).data,
+    }) => (await apiClient.post<RegisterOutcome>('/auth/register', body)).data,
+    onSuccess: (data) => {
+      if (data.status !== 'signed-in') return;
+      setToken(data.accessToken);
+      queryClient.setQueryData(['auth', 'me'], data.user);
+    },
+  });
+}
+
+/** Opens the link mailed at registration: creates the account and signs it in. */
+export function useConfirmRegistration() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (token: string) =>
+      (await apiClient.post<SignedIn>('/auth/register/confirm', { token })).data,
     onSuccess: (data) => {
       setToken(data.accessToken);
       queryClient.setQueryData(['auth', 'me'], data.user);

@@ -1,13 +1,13 @@
 import { Button, Form, Input } from 'antd';
 import { FormError } from '@/components/errors/form-error';
 import { guessNumberFormat } from '@/lib/guess-number-format';
-import { useRegister } from '../api/auth-api';
+import { type RegisterOutcome, useRegister } from '../api/auth-api';
 
 export function RegisterForm({
   onRegistered,
   joinCode,
 }: {
-  onRegistered: () => void;
+  onRegistered: (outcome: RegisterOutcome) => void;
   /** Registering from a class's join link: a student account, joined to that class. */
   joinCode?: string;
 }) {
