@@ -22,6 +22,16 @@ export function configureApp(app: NestExpressApplication): void {
   const config = app.get<ConfigService<EnvironmentVariables, true>>(ConfigService);
   // The web app's JavaScript is most of what a first visit downloads; gzip cuts it to about a
   // third. Responses under 1 kB are sent as they are.
+  const trustProxy = config.get('TRUST_PROXY', { infer: true });
+  if (trustProxy) {
+    // Rate limits count per client address; behind a proxy that address comes from its header.
+    app.set(
+      'trust proxy',
+      /^\d+$/.test(trustProxy)
+        ? Number(trustProxy)
+        : trustProxy.split(',').map((part) => part.trim()),
+    );
+  }
   app.use(compression());
   app.use(
     helmet({

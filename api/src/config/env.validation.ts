@@ -69,6 +69,18 @@ export class EnvironmentVariables {
   @IsString()
   MAIL_FROM: string = 'Loftwright <no-reply@loftwright.invalid>';
 
+  /**
+   * Which proxies in front of the product to believe about the client's address
+   * (X-Forwarded-For), as Express's "trust proxy" takes it: a hop count (`1`), or addresses and
+   * names such as `loopback` or `10.0.0.0/8`, comma-separated. Unset, the connecting address is the
+   * client, so behind a proxy every client would share the proxy's rate limits.
+   */
+  @IsOptional()
+  @Matches(/^(\d{1,2}|[\w.:/-]+(\s*,\s*[\w.:/-]+)*)$/, {
+    message: 'TRUST_PROXY must be a hop count or comma-separated addresses, subnets or names',
+  })
+  TRUST_PROXY?: string;
+
   /** Address of the product as users reach it, for links in mail. */
   @IsOptional()
   @IsString()

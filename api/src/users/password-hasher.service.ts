@@ -10,8 +10,37 @@ const PARALLELISM = 1;
 const KEY_BYTES = 32;
 const SALT_BYTES = 16;
 
+/**
+ * Hashes running at once. libuv has 4 worker threads by default, shared with file, compression
+ * and DNS work that every other request may wait on; hashing takes at most two of them, so a burst
+ * of sign-ins queues here instead of stalling everyone else (docs/performance.md).
+ */
+const CONCURRENT_HASHES = 2;
+let hashesRunning = 0;
+const waitingHashes: (() => void)[] = [];
+
+async function withHashSlot<T>(work: () => Promise<T>): Promise<T> {
+  if (hashesRunning >= CONCURRENT_HASHES) {
+    await new Promise<void>((resolve) => waitingHashes.push(resolve));
+  } else {
+    hashesRunning += 1;
+  }
+  try {
+    return await work();
+  } finally {
+    // The slot passes straight to the next waiting hash, or is freed.
+    const next = waitingHashes.shift();
+    if (next) next();
+    else hashesRunning -= 1;
+  }
+}
+
 /** scrypt through Node's asynchronous implementation, which runs on libuv's worker threads. */
 function scryptAsync(password: string, salt: Buffer, log2N: number): Promise<Buffer> {
+  return withHashSlot(() => scryptOnWorker(password, salt, log2N));
+}
+
+function scryptOnWorker(password: string, salt: Buffer, log2N: number): Promise<Buffer> {
   const N = 2 ** log2N;
   return new Promise((resolve, reject) =>
     scrypt(

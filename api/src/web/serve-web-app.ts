@@ -2,7 +2,7 @@ import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { Logger } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import type { NextFunction, Request, Response } from 'express';
+import express, { type NextFunction, type Request, type Response } from 'express';
 import { API_PREFIX } from '../app.constants';
 
 /** Where the web workspace's `vite build` writes, seen from src/web or dist/web. */
@@ -18,7 +18,9 @@ export function serveWebApp(app: NestExpressApplication, distDir: string): void 
   if (!existsSync(indexFile)) {
     new Logger('WebApp').warn(`No built web app at ${distDir}; run "npm run build" to serve it.`);
   }
-  app.useStaticAssets(distDir, {
+  const isApiPath = (request: Request) =>
+    request.path === `/${API_PREFIX}` || request.path.startsWith(`/${API_PREFIX}/`);
+  const staticFiles = express.static(distDir, {
     index: false,
     setHeaders: (response, filePath) => {
       if (filePath.includes(`${join(distDir, 'assets')}`)) {
@@ -26,10 +28,13 @@ export function serveWebApp(app: NestExpressApplication, distDir: string): void 
       }
     },
   });
+  // API requests never look on disk: a file lookup waits for one of libuv's few worker threads,
+  // which a burst of password hashing may hold (docs/performance.md).
+  app.use((request: Request, response: Response, next: NextFunction) =>
+    isApiPath(request) ? next() : staticFiles(request, response, next),
+  );
   app.use((request: Request, response: Response, next: NextFunction) => {
-    const isApiPath =
-      request.path === `/${API_PREFIX}` || request.path.startsWith(`/${API_PREFIX}/`);
-    if (request.method !== 'GET' || isApiPath) {
+    if (request.method !== 'GET' || isApiPath(request)) {
       next();
       return;
     }
