@@ -140,6 +140,20 @@ describe('designer, reviewer and student in the browser', () => {
     }
   });
 
+  it('shows the web sheet in words and units, with the whole fingerprint, a verify URL and its QR code', async () => {
+    screenshotOnFailure(() => page, 'web-sign-off-sheet');
+    await page.goto(`${submittedUrl.replace(/\?.*$/, '')}/versions/2/sheet`);
+    const sheet = page.getByRole('article', { name: 'Sign-off sheet' });
+    await expect.poll(() => sheet.getByRole('heading', { name: 'Inputs' }).isVisible()).toBe(true);
+    const text = await sheet.innerText();
+    expect(text).not.toMatch(/diameterM|gasId|temperatureK|pressurePa|envelope\.\w/);
+    expect(text).toMatch(/Diameter\s+[\d.]+ m/);
+    const fingerprint = (await sheet.getByTestId('sheet-fingerprint').innerText()).trim();
+    expect(fingerprint).toMatch(/^[0-9a-f]{64}$/);
+    expect(text).toContain(`${product.baseUrl}/verify/${fingerprint}`);
+    expect(await sheet.getByRole('img', { name: /^QR code of http/ }).isVisible()).toBe(true);
+  });
+
   it('keeps a private calculation from a student, without saying whether it exists', async () => {
     screenshotOnFailure(() => page, 'student-private');
     await signOut();

@@ -2,12 +2,30 @@ import { execFileSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import jsQR from 'jsqr';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from './support/create-test-app';
 import { liftCheckInputs } from './support/fixtures';
 import { readOutbox } from './support/outbox';
 import { createUser, type TestUser } from './support/users';
+
+/** A binary PPM (P6) image, as pdftoppm writes it, as RGBA pixels for the QR decoder. */
+function readPpm(bytes: Buffer): { width: number; height: number; rgba: Uint8ClampedArray } {
+  const header = bytes.subarray(0, 64).toString('latin1');
+  const match = /^P6\s+(\d+)\s+(\d+)\s+(\d+)\s/.exec(header);
+  if (!match) throw new Error('not a binary PPM image');
+  const [whole, width, height] = [match[0], Number(match[1]), Number(match[2])];
+  const rgb = bytes.subarray(whole.length);
+  const rgba = new Uint8ClampedArray(width * height * 4);
+  for (let pixel = 0; pixel < width * height; pixel += 1) {
+    rgba[pixel * 4] = rgb[pixel * 3] ?? 0;
+    rgba[pixel * 4 + 1] = rgb[pixel * 3 + 1] ?? 0;
+    rgba[pixel * 4 + 2] = rgb[pixel * 3 + 2] ?? 0;
+    rgba[pixel * 4 + 3] = 255;
+  }
+  return { width, height, rgba };
+}
 
 const binary = (response: request.Response, done: (error: Error | null, body: Buffer) => void) => {
   const chunks: Buffer[] = [];
@@ -26,7 +44,7 @@ describe('the archived sign-off PDF of an approved version', () => {
   const http = () => request(testApp.app.getHttpServer());
 
   beforeAll(async () => {
-    testApp = await createTestApp();
+    testApp = await createTestApp({ env: { PUBLIC_URL: 'https://loft.example.org/' } });
     designer = await createUser(testApp.app, ['designer'], 'author');
     reviewer = await createUser(testApp.app, ['reviewer'], 'checker');
     const created = await http()
@@ -96,6 +114,29 @@ describe('the archived sign-off PDF of an approved version', () => {
     // Symbols outside IBM Plex's Latin set come from the fallback font, not as empty boxes.
     expect(text).toMatch(/ρ_air/);
     expect(text).toContain('→');
+  });
+
+  it('prints inputs by label with units, never an internal key, and the verify URL with host', () => {
+    const file = join(workDir, 'sheet.pdf');
+    writeFileSync(file, pdf);
+    const text = execFileSync('pdftotext', ['-raw', file, '-']).toString();
+    // liftCheckInputs(): a 1 m helium sphere, 0.1 kg envelope, 0.2 kg payload, 288.15 K, 101 325 Pa.
+    for (const shown of ['Diameter', '1 m', 'Helium', 'Air temperature', '15 °C', '1013 hPa'])
+      expect(text).toContain(shown);
+    expect(text).not.toMatch(/diameterM|gasId|temperatureK|pressurePa|envelope\./);
+    expect(text).toContain(`https://loft.example.org/verify/${fingerprint}`);
+    // The whole fingerprint on every page's footer.
+    const pages = text.split('\f').filter((page) => page.trim() !== '');
+    for (const page of pages) expect(page).toContain(fingerprint);
+  });
+
+  it('carries a QR code that decodes to the verify URL', () => {
+    const file = join(workDir, 'sheet.pdf');
+    writeFileSync(file, pdf);
+    execFileSync('pdftoppm', ['-r', '150', '-f', '1', '-l', '1', file, join(workDir, 'qr')]);
+    const image = readPpm(readFileSync(join(workDir, 'qr-1.ppm')));
+    const code = jsQR(image.rgba, image.width, image.height);
+    expect(code?.data).toBe(`https://loft.example.org/verify/${fingerprint}`);
   });
 
   it('goes with the approval mail', async () => {

@@ -3,6 +3,7 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
+import { RequestOrigin } from '../common/public-url';
 import { intParam } from '../common/pipes/int-param.pipe';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
 import { ApproveVersionDto, SendBackVersionDto, SubmitVersionDto } from './dto/review-decision.dto';
@@ -32,8 +33,9 @@ export class ReviewsController {
     @Param('id', uuidParam('id')) id: string,
     @Param('n', intParam('n')) n: number,
     @Body() body: ApproveVersionDto,
+    @RequestOrigin() origin: string,
   ) {
-    return this.reviewsService.approve(user, id, n, body.comment ?? '');
+    return this.reviewsService.approve(user, id, n, body.comment ?? '', origin);
   }
 
   @Post('calculations/:id/versions/:n/send-back')
@@ -43,8 +45,9 @@ export class ReviewsController {
     @Param('id', uuidParam('id')) id: string,
     @Param('n', intParam('n')) n: number,
     @Body() body: SendBackVersionDto,
+    @RequestOrigin() origin: string,
   ) {
-    return this.reviewsService.sendBack(user, id, n, body.comment);
+    return this.reviewsService.sendBack(user, id, n, body.comment, origin);
   }
 
   @Get('calculations/:id/versions/:n/reviews')
@@ -52,8 +55,9 @@ export class ReviewsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Param('n', intParam('n')) n: number,
+    @RequestOrigin() origin: string,
   ) {
-    return this.reviewsService.versionWithReviews(user, id, n);
+    return this.reviewsService.versionWithReviews(user, id, n, origin);
   }
 
   @Get('reviews/queue')

@@ -4,6 +4,7 @@ import {
   ForbiddenException,
   Injectable,
 } from '@nestjs/common';
+import { publicBaseUrl, verifyUrl } from '../common/public-url';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
@@ -115,12 +116,17 @@ export class ReviewsService {
     return this.calculationsService.version(user, id, number);
   }
 
-  approve(user: AuthUser, id: string, number: number, comment: string) {
-    return this.decide(user, id, number, 'approved', comment);
+  approve(user: AuthUser, id: string, number: number, comment: string, origin: string) {
+    return this.decide(user, id, number, 'approved', comment, origin);
   }
 
-  sendBack(user: AuthUser, id: string, number: number, comment: string) {
-    return this.decide(user, id, number, 'changes_requested', comment);
+  sendBack(user: AuthUser, id: string, number: number, comment: string, origin: string) {
+    return this.decide(user, id, number, 'changes_requested', comment, origin);
+  }
+
+  /** Where people reach the product, for links printed on sheets. */
+  private baseUrl(origin: string): string {
+    return publicBaseUrl(this.config.get('PUBLIC_URL', { infer: true }), origin);
   }
 
   private async decide(
@@ -129,6 +135,7 @@ export class ReviewsService {
     number: number,
     decision: ReviewDecision,
     comment: string,
+    origin: string,
   ) {
     if (!hasRole(user, 'reviewer'))
       throw new ForbiddenException({ message: 'Reviewing needs the reviewer role.' });
@@ -198,6 +205,7 @@ export class ReviewsService {
             },
             comment,
             new Date(),
+            verifyUrl(this.baseUrl(origin), version.fingerprint),
           )
         : undefined;
     if (author) {
@@ -223,7 +231,7 @@ export class ReviewsService {
           : message,
       );
     }
-    return this.versionWithReviews(user, id, number);
+    return this.versionWithReviews(user, id, number, origin);
   }
 
   private async syncLatestStatus(
@@ -239,7 +247,7 @@ export class ReviewsService {
     if (Object.keys(changes).length > 0) await calculations.update({ id: calculation.id }, changes);
   }
 
-  async versionWithReviews(user: AuthUser, id: string, number: number) {
+  async versionWithReviews(user: AuthUser, id: string, number: number, origin: string) {
     const version = await this.calculationsService.version(user, id, number);
     const stored = await this.calculationsService.findVersion(id, number);
     const reviews = await this.reviews.find({
@@ -249,6 +257,8 @@ export class ReviewsService {
     const names = await this.usersService.names(reviews.map((review) => review.reviewerId));
     return {
       ...version,
+      /** The verify page of this version's fingerprint, with host, as the sheet prints it. */
+      verifyUrl: verifyUrl(this.baseUrl(origin), version.fingerprint),
       reviews: reviews.map((review) => ({
         reviewer: names(review.reviewerId),
         decision: review.decision,

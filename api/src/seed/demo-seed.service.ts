@@ -103,15 +103,24 @@ export class DemoSeedService implements OnApplicationBootstrap {
         number += 1;
       }
       if (demo.stage === 'draft') continue;
+      // No request here: links on the demo's sheets name the address the server listens on.
+      const origin = `http://localhost:${this.config.get('PORT', { infer: true })}`;
       await this.reviewsService.submit(owner, created.id, number, undefined);
       if (demo.stage === 'approved')
-        await this.reviewsService.approve(reviewer, created.id, number, demo.reviewComment ?? '');
+        await this.reviewsService.approve(
+          reviewer,
+          created.id,
+          number,
+          demo.reviewComment ?? '',
+          origin,
+        );
       if (demo.stage === 'changes_requested')
         await this.reviewsService.sendBack(
           reviewer,
           created.id,
           number,
           demo.reviewComment ?? 'Please revise.',
+          origin,
         );
     }
     const designer = people.get('designer') as AuthUser;

@@ -1,4 +1,4 @@
-import { evaluate, KINDS } from '@loftwright/buoyancy';
+import { describeInputs, evaluate, KINDS } from '@loftwright/buoyancy';
 import { describe, expect, it } from 'vitest';
 import { renderSignOffPdf } from './sign-off-pdf';
 
@@ -25,7 +25,15 @@ describe('renderSignOffPdf', () => {
         decidedAt: new Date('2026-12-02T10:00:00Z'),
         comment: 'ok',
       },
-      verifyPath: '/verify/aaaa',
+      verifyUrl: `https://loft.example.org/verify/${'a'.repeat(64)}`,
+      inputSections: describeInputs(
+        KINDS.find((kind) => kind.id === 'lift-check')?.inputSchema,
+        inputs,
+        {
+          unitSystem: 'si',
+          numberFormat: 'point-comma',
+        },
+      ),
     });
     expect(bytes.subarray(0, 5).toString()).toBe('%PDF-');
     if (process.env.SIGN_OFF_PDF_OUT)

@@ -1,4 +1,6 @@
+import type { InputSection } from '@loftwright/buoyancy';
 import PDFDocument from 'pdfkit';
+import QRCode from 'qrcode';
 import { fontRuns, type SheetFont, sheetFonts } from './sheet-fonts';
 
 /** What the printed sheet shows (docs: ../shared/design.md, "Printed sign-off sheet"). */
@@ -13,6 +15,8 @@ export interface SignOffContent {
   savedAt: Date;
   note: string;
   inputs: unknown;
+  /** The inputs as the editor shows them (labels, sections, units); engine describeInputs. */
+  inputSections: InputSection[];
   outputs: Record<string, { label: string; value: number; unit: string; context?: string }>;
   steps: {
     label: string;
@@ -23,7 +27,8 @@ export interface SignOffContent {
   }[];
   warnings: { severity: string; message: string }[];
   review?: { reviewer: string; decidedAt: Date; comment: string };
-  verifyPath: string;
+  /** The verify page of the fingerprint, with host; printed and drawn as a QR code. */
+  verifyUrl: string;
 }
 
 const MARGIN = 50;
@@ -35,20 +40,30 @@ const number = (value: number) =>
     ? value.toExponential(4)
     : Number(value.toPrecision(6)).toString();
 
-function leaves(value: unknown, prefix = ''): [string, string][] {
-  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
-    return Object.entries(value).flatMap(([key, child]) =>
-      leaves(child, prefix ? `${prefix}.${key}` : key),
-    );
-  }
-  return [[prefix, Array.isArray(value) ? JSON.stringify(value) : String(value)]];
+/** "4 December 2026, 01:52 UTC": a moment as a person reads it, in UTC (the archive's zone). */
+export function utcText(moment: Date): string {
+  return `${new Intl.DateTimeFormat('en-GB', {
+    dateStyle: 'long',
+    timeStyle: 'short',
+    timeZone: 'UTC',
+  }).format(moment)} UTC`;
 }
+
+/** A 64-character fingerprint in four groups of 16, so a printed copy is read without losing place. */
+export const groupedFingerprint = (fingerprint: string) =>
+  fingerprint.match(/.{1,16}/g)?.join(' ') ?? fingerprint;
 
 /**
  * The sign-off sheet of one version as an A4 PDF, black on white, in the fonts the web app uses,
  * so the archived copy reads like the printed page. Returns the file's bytes.
  */
-export function renderSignOffPdf(content: SignOffContent): Promise<Buffer> {
+export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer> {
+  const qrPng = await QRCode.toBuffer(content.verifyUrl, {
+    type: 'png',
+    errorCorrectionLevel: 'M',
+    margin: 2,
+    scale: 6,
+  });
   const fonts = sheetFonts();
   const doc = new PDFDocument({
     size: 'A4',
@@ -125,17 +140,37 @@ export function renderSignOffPdf(content: SignOffContent): Promise<Buffer> {
     10,
   );
   write(
-    `Saved ${content.savedAt.toISOString()} by ${content.author}${content.note ? ` — ${content.note}` : ''}`,
+    `Saved ${utcText(content.savedAt)} by ${content.author}${content.note ? ` — ${content.note}` : ''}`,
     sans,
     10,
   );
+  if (content.review) {
+    write(`Approved ${utcText(content.review.decidedAt)} by ${content.review.reviewer}`, bold, 10);
+  }
   doc.moveDown(0.3);
-  write('Content fingerprint (SHA-256)', sans, 9, { color: GREY });
-  write(content.fingerprint, mono, 9);
-  write(`Check it at ${content.verifyPath}`, sans, 9, { color: GREY });
+  // The QR code of the verify page sits right of the fingerprint; the URL runs the full width
+  // below, so a long host does not break it across lines.
+  const qrSize = 84;
+  const blockTop = doc.y;
+  doc.image(qrPng, MARGIN + width - qrSize, blockTop, { width: qrSize, height: qrSize });
+  const textWidth = width - qrSize - 12;
+  write('Content fingerprint (SHA-256)', sans, 9, { color: GREY, width: textWidth });
+  write(groupedFingerprint(content.fingerprint), mono, 10, { width: textWidth });
+  doc.moveDown(0.3);
+  write('Scan the code or open this address to check the sheet:', sans, 9, {
+    color: GREY,
+    width: textWidth,
+  });
+  doc.x = MARGIN;
+  doc.y = Math.max(doc.y, blockTop + qrSize + 2);
+  write(content.verifyUrl, mono, 8);
 
   heading('Inputs');
-  for (const [path, value] of leaves(content.inputs)) row(path, value);
+  for (const section of content.inputSections) {
+    doc.moveDown(0.2);
+    if (section.title) write(section.title, bold, 10);
+    for (const line of section.lines) row(line.label, line.text, sans);
+  }
 
   heading('Results');
   for (const output of Object.values(content.outputs)) {
@@ -180,7 +215,7 @@ export function renderSignOffPdf(content: SignOffContent): Promise<Buffer> {
   heading('Review');
   if (content.review) {
     row('Approved by', content.review.reviewer, sans);
-    row('Approved at', content.review.decidedAt.toISOString(), sans);
+    row('Approved at', utcText(content.review.decidedAt), sans);
     row('Comment', content.review.comment || '(none)', sans);
   } else {
     write('Not approved: this sheet records the version only.', sans, 10);
@@ -189,18 +224,27 @@ export function renderSignOffPdf(content: SignOffContent): Promise<Buffer> {
   const range = doc.bufferedPageRange();
   for (let page = range.start; page < range.start + range.count; page += 1) {
     doc.switchToPage(page);
-    const bottom = doc.page.height - MARGIN / 2 - 8;
+    const bottom = doc.page.height - MARGIN / 2 - 14;
     doc.page.margins.bottom = 0;
     doc
       .font(fonts.sans.name)
       .fontSize(8)
       .fillColor(GREY)
       .text(
-        `${content.title} · v${content.versionNumber} · ${content.fingerprint.slice(0, 16)}… · page ${page + 1} of ${range.count}`,
+        `${content.title} · version ${content.versionNumber} · page ${page + 1} of ${range.count}`,
         MARGIN,
         bottom,
         { width, align: 'center', lineBreak: false },
       );
+    // The whole fingerprint on every page, so any one page can be checked on its own.
+    doc
+      .font(fonts.mono.name)
+      .fontSize(7)
+      .text(content.fingerprint, MARGIN, bottom + 10, {
+        width,
+        align: 'center',
+        lineBreak: false,
+      });
   }
   doc.end();
   return done;

@@ -1,5 +1,5 @@
 import { Injectable, Logger } from '@nestjs/common';
-import { KINDS } from '@loftwright/buoyancy';
+import { describeInputs, KINDS, type ReadableOptions } from '@loftwright/buoyancy';
 import { AttachmentsService } from '../attachments/attachments.service';
 import type { AttachmentView } from '../attachments/attachment-views';
 import type { CalculationVersion } from '../calculations/calculation-version.entity';
@@ -14,6 +14,12 @@ export const sheetFileName = (title: string, number: number) =>
       .replace(/^-|-$/g, '')
       .slice(0, 80) || 'calculation'
   }-v${number}-sign-off.pdf`;
+
+/**
+ * How the archived sheet writes numbers: SI and 1,234.5, the reading anyone can check against the
+ * engine's stored values. (The web sheet uses each reader's own preferences.)
+ */
+const SHEET_READING: ReadableOptions = { unitSystem: 'si', numberFormat: 'point-comma' };
 
 /**
  * Archives the sign-off sheet of an approved version as a PDF attachment of its calculation, so
@@ -31,6 +37,7 @@ export class SignOffService {
     people: { author: string; reviewerId: string; reviewer: string },
     comment: string,
     decidedAt: Date,
+    verifyUrl: string,
   ): Promise<{ attachment: AttachmentView; bytes: Buffer } | undefined> {
     const content: SignOffContent = {
       title: calculation.title,
@@ -47,7 +54,12 @@ export class SignOffService {
       steps: version.steps as SignOffContent['steps'],
       warnings: version.warnings as SignOffContent['warnings'],
       review: { reviewer: people.reviewer, decidedAt, comment },
-      verifyPath: `/verify/${version.fingerprint}`,
+      verifyUrl,
+      inputSections: describeInputs(
+        KINDS.find((kind) => kind.id === calculation.kind)?.inputSchema,
+        version.inputs,
+        SHEET_READING,
+      ),
     };
     try {
       const bytes = await renderSignOffPdf(content);

@@ -93,6 +93,15 @@ export {
   readableIssue,
 } from './schema/field-info.js';
 export type { InputFieldInfo, ReadableOptions } from './schema/field-info.js';
+export {
+  choiceTitle,
+  describeInputs,
+  fieldSchemaAt,
+  inputLabel,
+  inputValueText,
+  sharedUnit,
+} from './schema/input-text.js';
+export type { InputLine, InputSection, InputTextOptions } from './schema/input-text.js';
 export { DIMENSIONS, dimensionOfSIUnit, DISPLAY_UNITS } from './units/dimensions.js';
 export type { Dimension, UnitSystem } from './units/dimensions.js';
 export { envelopeSizingKind } from './kinds/envelope-sizing.kind.js';
@@ -119,7 +128,12 @@ export {
   DEFAULT_BALLOON_DRAG_COEFFICIENT,
   DEFAULT_PARACHUTE_DRAG_COEFFICIENT,
 } from './flight/drag-defaults.js';
-export { diffInputs, diffOutputs } from './compare/result-diff.js';
+export {
+  diffInputs,
+  diffOutputs,
+  sameResult,
+  SAME_RESULT_RELATIVE,
+} from './compare/result-diff.js';
 export type { InputChange, OutputChange } from './compare/result-diff.js';
 export { fillDesignFromVersion, reduceFillLog } from './measurement/fill-log.js';
 export { INSTRUMENT_DEFAULTS } from './kinds/lift-measurement.kind.js';

@@ -32,3 +32,14 @@ describe('result diff', () => {
     ]);
   });
 });
+
+describe('diffOutputs: the same result is not a change', () => {
+  const record = (value: number) => ({ lift: { value, unit: 'kg', label: 'Free lift' } });
+  it('does not list results that agree within 1e-9 of the larger', () => {
+    expect(diffOutputs(record(0.1 + 0.2), record(0.3))).toEqual([]);
+    expect(diffOutputs(record(1.234), record(1.234 * (1 + 5e-10)))).toEqual([]);
+  });
+  it('lists a result that moved by more', () => {
+    expect(diffOutputs(record(1.234), record(1.234 * (1 + 1e-6)))).toHaveLength(1);
+  });
+});

@@ -43,6 +43,19 @@ export function diffInputs(a: unknown, b: unknown): InputChange[] {
     .map((path) => ({ path, from: left.get(path) ?? null, to: right.get(path) ?? null }));
 }
 
+/**
+ * Relative difference below which two results are the same: two runs of the same engine on the
+ * same inputs agree far closer, and nothing a person reads is printed to ten digits.
+ */
+export const SAME_RESULT_RELATIVE = 1e-9;
+
+/** Whether two results are the same number, within SAME_RESULT_RELATIVE of the larger. */
+export function sameResult(a: number | undefined, b: number | undefined): boolean {
+  if (a === undefined || b === undefined) return a === b;
+  if (a === b) return true;
+  return Math.abs(a - b) <= SAME_RESULT_RELATIVE * Math.max(Math.abs(a), Math.abs(b));
+}
+
 /** Outputs whose value (or presence) differs between two versions. */
 export function diffOutputs(
   a: Record<string, OutputRecord>,
@@ -50,7 +63,9 @@ export function diffOutputs(
 ): OutputChange[] {
   const names = [...new Set([...Object.keys(a), ...Object.keys(b)])].sort();
   return names
-    .filter((name) => a[name]?.value !== b[name]?.value || a[name]?.unit !== b[name]?.unit)
+    .filter(
+      (name) => !sameResult(a[name]?.value, b[name]?.value) || a[name]?.unit !== b[name]?.unit,
+    )
     .map((name) => {
       const reference = b[name] ?? a[name];
       return {

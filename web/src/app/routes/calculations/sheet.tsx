@@ -1,11 +1,13 @@
 import { Spin } from 'antd';
 import { useParams } from 'react-router-dom';
+import { useMe } from '@/features/auth/api/auth-api';
 import { useCalculation } from '@/features/calculations/api/calculations-api';
 import { SignOffSheet } from '@/features/sign-off/components/sign-off-sheet';
 
 export function SignOffSheetRoute() {
   const { id = '', n = '1' } = useParams();
   const calculation = useCalculation(id);
+  const unitSystem = useMe().user?.unitSystem ?? 'si';
   if (!calculation.data) return <Spin />;
   return (
     <SignOffSheet
@@ -13,6 +15,7 @@ export function SignOffSheetRoute() {
       title={calculation.data.title}
       kind={calculation.data.kind}
       number={Number(n)}
+      unitSystem={unitSystem}
     />
   );
 }

@@ -15,6 +15,8 @@ export interface ReviewedVersion {
   author: UserRef | null;
   engineVersion: string;
   fingerprint: string;
+  /** The verify page of the fingerprint, with host (PUBLIC_URL, else the host asked). */
+  verifyUrl: string;
   createdAt: string;
   inputs: Record<string, unknown>;
   outputs: CalculationResult['outputs'];

@@ -1,7 +1,10 @@
 import { Alert, Button, Spin } from 'antd';
-import { KINDS, type NumberFormat } from '@loftwright/buoyancy';
+import { describeInputs, KINDS, type UnitSystem } from '@loftwright/buoyancy';
+import QRCode from 'qrcode';
+import { useEffect, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useReadingPreferences } from '@/components/reading/reading-preferences';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
 import { stepNumber } from '@/components/results/step-number';
 import { paths } from '@/config/paths';
 import { useReviewedVersion } from '../api/sign-off-api';
@@ -14,18 +17,33 @@ const STATUS_WORDS = {
   changes_requested: 'Changes requested',
 } as const;
 
-function leaves(value: unknown, numberFormat: NumberFormat, prefix = ''): [string, string][] {
-  if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
-    return Object.entries(value).flatMap(([key, child]) =>
-      leaves(child, numberFormat, prefix ? `${prefix}.${key}` : key),
+/** "4 December 2026 at 02:10 GMT+1": a moment in the reader's time zone, with its offset. */
+const localMoment = (iso: string) =>
+  // dateStyle and timeStyle cannot be combined with timeZoneName, so the parts are named.
+  new Intl.DateTimeFormat(undefined, {
+    year: 'numeric',
+    month: 'long',
+    day: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+    timeZoneName: 'shortOffset',
+  }).format(new Date(iso));
+
+/** The verify page's address drawn as a QR code, for a phone held over the printed sheet. */
+function VerifyQrCode({ url }: { url: string }) {
+  const [image, setImage] = useState<string>();
+  useEffect(() => {
+    let current = true;
+    void QRCode.toDataURL(url, { errorCorrectionLevel: 'M', margin: 2, scale: 4 }).then(
+      (data) => current && setImage(data),
     );
-  }
-  const text = Array.isArray(value)
-    ? JSON.stringify(value)
-    : typeof value === 'number'
-      ? stepNumber(value, numberFormat)
-      : String(value);
-  return [[prefix, text]];
+    return () => {
+      current = false;
+    };
+  }, [url]);
+  return image ? (
+    <img className="lw-sheet-qr" src={image} alt={`QR code of ${url}`} width={112} height={112} />
+  ) : null;
 }
 
 /** The printable record of one version: inputs, results, derivation, warnings and the review. */
@@ -34,20 +52,26 @@ export function SignOffSheet({
   title,
   kind,
   number: versionNumber,
+  unitSystem,
 }: {
   calculationId: string;
   title: string;
   kind: string;
   number: number;
+  /** The reader's unit system: inputs and results are shown in it. */
+  unitSystem: UnitSystem;
 }) {
   const { numberFormat } = useReadingPreferences();
+  const display = useNumberDisplay(unitSystem);
   const number = (value: number) => stepNumber(value, numberFormat);
   const version = useReviewedVersion(calculationId, versionNumber);
   if (version.isPending) return <Spin />;
   if (version.error) return <Alert type="error" showIcon title={version.error.message} />;
   const data = version.data;
   const approval = data.reviews.filter((review) => review.decision === 'approved').at(-1);
-  const kindTitle = KINDS.find((candidate) => candidate.id === kind)?.title;
+  const kindInfo = KINDS.find((candidate) => candidate.id === kind);
+  const kindTitle = kindInfo?.title;
+  const sections = describeInputs(kindInfo?.inputSchema, data.inputs, { unitSystem, numberFormat });
   return (
     <article className="lw-sheet" aria-label="Sign-off sheet">
       <div className="lw-sheet-actions">
@@ -67,39 +91,54 @@ export function SignOffSheet({
           <span className="lw-mono">{data.engineVersion}</span>
         </p>
         <p>
-          Fingerprint{' '}
-          <span className="lw-mono">
-            {data.fingerprint.slice(0, 16)}…{data.fingerprint.slice(-8)}
-          </span>{' '}
-          (SHA-256; check it at /verify/
-          <span className="lw-mono">{data.fingerprint.slice(0, 8)}…</span>)
-        </p>
-        <p>
-          Saved {new Date(data.createdAt).toLocaleString()} by{' '}
-          {data.author?.displayName ?? 'unknown'}
+          Saved {localMoment(data.createdAt)} by {data.author?.displayName ?? 'unknown'}
           {data.note ? ` — ${data.note}` : ''}
         </p>
+        {approval ? (
+          <p>
+            <strong>
+              Approved {localMoment(approval.createdAt)} by{' '}
+              {approval.reviewer?.displayName ?? 'unknown'}
+            </strong>
+          </p>
+        ) : null}
+        <div className="lw-sheet-check">
+          <div>
+            <p className="lw-sheet-caption">Content fingerprint (SHA-256)</p>
+            <p className="lw-mono lw-sheet-fingerprint" data-testid="sheet-fingerprint">
+              {data.fingerprint}
+            </p>
+            <p className="lw-sheet-caption">
+              Scan the code or open this address to check the sheet:
+            </p>
+            <p className="lw-mono lw-sheet-url">{data.verifyUrl}</p>
+          </div>
+          <VerifyQrCode url={data.verifyUrl} />
+        </div>
       </header>
       <h2>Inputs</h2>
-      <table>
-        <tbody>
-          {leaves(data.inputs, numberFormat).map(([path, value]) => (
-            <tr key={path}>
-              <th scope="row">{path}</th>
-              <td className="lw-mono">{value}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      {sections.map((section, index) => (
+        <section key={section.title ?? `loose-${index}`} className="lw-sheet-section">
+          {section.title ? <h3>{section.title}</h3> : null}
+          <table>
+            <tbody>
+              {section.lines.map((line) => (
+                <tr key={line.path}>
+                  <th scope="row">{line.label}</th>
+                  <td>{line.text}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </section>
+      ))}
       <h2>Results</h2>
       <table>
         <tbody>
           {Object.entries(data.outputs).map(([name, output]) => (
             <tr key={name}>
               <th scope="row">{output.label}</th>
-              <td className="lw-mono">
-                {number(output.value)} {output.unit}
-              </td>
+              <td className="lw-mono">{display.outputText(output.value, output.unit)}</td>
               <td>{output.context ?? ''}</td>
             </tr>
           ))}
@@ -141,8 +180,7 @@ export function SignOffSheet({
       {approval ? (
         <p>
           Approved by {approval.reviewer?.displayName ?? 'unknown'} on{' '}
-          {new Date(approval.createdAt).toLocaleString()}. Comment: {approval.comment || '—'}.
-          Approved fingerprint <span className="lw-mono">{approval.fingerprint.slice(0, 16)}…</span>
+          {localMoment(approval.createdAt)}. Comment: {approval.comment || '—'}.
         </p>
       ) : (
         <p>Not approved: this sheet is not a sign-off.</p>
