@@ -144,7 +144,9 @@ describe('designer, reviewer and student in the browser', () => {
     screenshotOnFailure(() => page, 'web-sign-off-sheet');
     await page.goto(`${submittedUrl.replace(/\?.*$/, '')}/versions/2/sheet`);
     const sheet = page.getByRole('article', { name: 'Sign-off sheet' });
-    await expect.poll(() => sheet.getByRole('heading', { name: 'Inputs' }).isVisible()).toBe(true);
+    await expect
+      .poll(() => sheet.getByRole('heading', { name: 'Inputs', exact: true }).isVisible())
+      .toBe(true);
     const text = await sheet.innerText();
     expect(text).not.toMatch(/diameterM|gasId|temperatureK|pressurePa|envelope\.\w/);
     expect(text).toMatch(/Diameter\s+[\d.]+ m/);

@@ -56,7 +56,7 @@ describe('typed values are read as meant, in every number format', () => {
 
   async function openEditor(id: string) {
     await page.goto(`${product.baseUrl}/calculations/${id}`);
-    await page.getByRole('heading', { name: 'Inputs' }).waitFor();
+    await page.getByRole('heading', { name: 'Inputs', exact: true }).waitFor();
   }
 
   beforeAll(async () => {
