@@ -58,3 +58,16 @@ describe('describeInputs: inputs as the editor labels them, with units', () => {
     expect(inputValueText(schema, 6522, { ...SI, unit })).toBe('1.812 h');
   });
 });
+
+describe('fieldSchemaAt and inputLabel: a changed input by its path', () => {
+  it('finds a field that only one variant of a union has', async () => {
+    const { fieldSchemaAt, inputLabel } = await import('./input-text.js');
+    const schema = schemaOf('lift-check');
+    expect(fieldSchemaAt(schema, 'envelope.radiusM')).toMatchObject({ dimension: 'length' });
+    expect(inputLabel(schema, 'envelope.radiusM')).toBe('Radius');
+    expect(inputValueText(fieldSchemaAt(schema, 'gas.gasId'), 'helium', SI)).toBe('Helium');
+    expect(inputValueText(fieldSchemaAt(schema, 'envelope.shape'), 'sphere-radius', SI)).toBe(
+      'Sphere radius',
+    );
+  });
+});

@@ -105,20 +105,28 @@ export function sharedUnit(
   return formatQuantity(largest, dimension, options.unitSystem).unitName;
 }
 
-/** The schema of the field at a dotted input path, through objects, variants and lists. */
+/**
+ * The schema of the field at a dotted input path, through objects, variants and lists. The
+ * variant of a union is the one the inputs take when given, else the one that has the field.
+ */
 export function fieldSchemaAt(schema: unknown, path: string, inputs?: unknown): unknown {
   let current = asSchema(schema);
   let value: unknown = inputs;
   for (const key of path.split('.').filter((part) => part !== '')) {
     if (current.type === 'array') {
       current = asSchema(current.items);
-    } else {
-      current = selectVariant(current, value);
-      current = asSchema(asSchema(current.properties)[key]);
     }
+    const variants = (current.oneOf ?? current.anyOf) as JsonSchema[] | undefined;
+    if (Array.isArray(variants)) {
+      const byValue = value === undefined ? undefined : selectVariant(current, value);
+      current =
+        (byValue && byValue !== current ? byValue : undefined) ??
+        variants.find((variant) => key in asSchema(asSchema(variant).properties)) ??
+        current;
+    }
+    if (current.type !== 'array') current = asSchema(asSchema(current.properties)[key]);
     value =
       value && typeof value === 'object' ? (value as Record<string, unknown>)[key] : undefined;
-    current = selectVariant(current, value);
   }
   return current;
 }

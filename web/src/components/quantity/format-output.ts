@@ -27,8 +27,13 @@ export interface ShownAs {
 }
 
 /** "1.056 kg/m³": a result as one piece of text, in the reader's units and number format. */
-export function formatOutputText(value: number, unit: string, shownAs: ShownAs): string {
-  const shown = formatOutput(value, unit, shownAs);
+export function formatOutputText(
+  value: number,
+  unit: string,
+  shownAs: ShownAs,
+  shownUnit?: string,
+): string {
+  const shown = formatOutput(value, unit, shownAs, shownUnit);
   return `${shown.value} ${shown.unit}`.trim();
 }
 
@@ -40,10 +45,15 @@ export function formatOutput(
   value: number,
   unit: string,
   { unitSystem, numberFormat }: ShownAs,
+  /** The unit to show it in (a mathjs name, from sharedOutputUnit), instead of the one it picks. */
+  shownUnit?: string,
 ): { value: string; unit: string } {
   const dimension = DIMENSION_OF_UNIT[unit];
   if (dimension) {
-    const formatted = formatQuantity(value, dimension, unitSystem, { numberFormat });
+    const formatted = formatQuantity(value, dimension, unitSystem, {
+      numberFormat,
+      ...(shownUnit ? { unit: shownUnit } : {}),
+    });
     return {
       value: formatted.text.slice(0, formatted.text.length - formatted.unit.length).trim(),
       unit: formatted.unit,
@@ -51,4 +61,20 @@ export function formatOutput(
   }
   // Counts (cylinders, cells) read as whole numbers; the rest to four significant digits.
   return { value: formatNumber(value, numberFormat, { significantDigits: 4 }), unit };
+}
+
+/**
+ * One unit for several values of a result (the one the largest would pick), so two versions in
+ * one row never read "2.130 h" against "108.7 min". Undefined where the unit has no dimension.
+ */
+export function sharedOutputUnit(
+  values: readonly (number | null)[],
+  unit: string,
+  { unitSystem }: Pick<ShownAs, 'unitSystem'>,
+): string | undefined {
+  const dimension = DIMENSION_OF_UNIT[unit];
+  const numbers = values.filter((value): value is number => typeof value === 'number');
+  if (!dimension || numbers.length === 0) return undefined;
+  const largest = numbers.reduce((a, b) => (Math.abs(b) > Math.abs(a) ? b : a));
+  return formatQuantity(largest, dimension, unitSystem).unitName;
 }

@@ -96,6 +96,7 @@ export function CalculationEditorRoute() {
           </Typography.Title>
           <VersionCompare
             calculationId={id}
+            kind={calculation.data.kind}
             versions={calculation.data.versions}
             unitSystem={user?.unitSystem ?? 'si'}
           />

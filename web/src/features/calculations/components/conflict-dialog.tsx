@@ -84,6 +84,7 @@ export function ConflictDialog({
             on top of it as version {theirs.number + 1}, or take theirs and drop your changes.
           </Typography.Paragraph>
           <VersionDiffView
+            kind={kind}
             diff={diff}
             unitSystem={unitSystem}
             titles={{ from: `Theirs (version ${theirs.number})`, to: 'Yours (not saved)' }}

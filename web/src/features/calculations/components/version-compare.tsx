@@ -7,10 +7,12 @@ import { VersionDiffView } from './version-diff-view';
 /** Pick two versions; see what changed between them. */
 export function VersionCompare({
   calculationId,
+  kind,
   versions,
   unitSystem,
 }: {
   calculationId: string;
+  kind: string;
   versions: readonly VersionSummary[];
   unitSystem: UnitSystem;
 }) {
@@ -43,7 +45,7 @@ export function VersionCompare({
       {diff.isFetching ? (
         <Spin />
       ) : diff.data ? (
-        <VersionDiffView diff={diff.data} unitSystem={unitSystem} />
+        <VersionDiffView kind={kind} diff={diff.data} unitSystem={unitSystem} />
       ) : null}
       {diff.error ? <Typography.Text type="danger">{diff.error.message}</Typography.Text> : null}
     </>
