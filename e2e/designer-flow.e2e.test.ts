@@ -39,6 +39,8 @@ describe('designer, reviewer and student in the browser', () => {
 
   const netLift = () => page.locator('[data-output="netLift"]').textContent();
   let submittedUrl = '';
+  /** The archived sign-off PDF as pdftotext reads it. */
+  let sheetText = '';
 
   async function signOut() {
     await page.getByRole('button', { name: 'Sign out' }).click();
@@ -79,7 +81,15 @@ describe('designer, reviewer and student in the browser', () => {
     await page.getByRole('button', { name: 'Save as version 2' }).click();
     await expect.poll(() => page.getByText('Saved as version 2.').isVisible()).toBe(true);
     await page.getByRole('button', { name: 'Submit version 2 for review' }).click();
-    await expect.poll(() => page.getByText('In review').first().isVisible()).toBe(true);
+    // A confirmation names the version and who reviews it; the demo reviewer is chosen by name.
+    const confirm = page.getByRole('dialog', { name: 'Submit version 2 for review?' });
+    await expect.poll(() => confirm.getByText(/goes to any reviewer/).isVisible()).toBe(true);
+    await confirm.getByLabel('Reviewer').click();
+    await page.locator('.ant-select-item-option').filter({ hasText: 'Ilse Varga' }).click();
+    await confirm.getByRole('button', { name: 'Submit to Ilse Varga' }).click();
+    await expect
+      .poll(() => page.getByText('Version 2 is in review with Ilse Varga.').isVisible())
+      .toBe(true);
     submittedUrl = page.url();
   });
 
@@ -132,9 +142,8 @@ describe('designer, reviewer and student in the browser', () => {
       expect(download.suggestedFilename()).toBe('Browser-check-sphere-v2-sign-off.pdf');
       execFileSync('pdftoppm', ['-png', '-r', '30', '-f', '1', '-l', '1', file, join(dir, 'page')]);
       expect(readFileSync(join(dir, 'page-1.png')).subarray(1, 4).toString()).toBe('PNG');
-      expect(execFileSync('pdftotext', [file, '-']).toString()).toContain(
-        'Size checked against the envelope drawing.',
-      );
+      sheetText = execFileSync('pdftotext', [file, '-']).toString();
+      expect(sheetText).toContain('Size checked against the envelope drawing.');
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }
@@ -154,6 +163,28 @@ describe('designer, reviewer and student in the browser', () => {
     expect(fingerprint).toMatch(/^[0-9a-f]{64}$/);
     expect(text).toContain(`${product.baseUrl}/verify/${fingerprint}`);
     expect(await sheet.getByRole('img', { name: /^QR code of http/ }).isVisible()).toBe(true);
+  });
+
+  it('lets an anonymous visitor verify the sheet by pasting the fingerprint as printed', async () => {
+    // The fingerprint as the page prints it: four groups of 16 hexadecimal digits, across lines.
+    const printed = /([0-9a-f]{16}\s+){3}[0-9a-f]{16}/.exec(sheetText)?.[0];
+    expect(printed).toBeDefined();
+    const visitor = await launchBrowser();
+    try {
+      const anonymous = await visitor.context.newPage();
+      screenshotOnFailure(() => anonymous, 'verify-anonymous');
+      await anonymous.goto(`${product.baseUrl}/verify`);
+      await anonymous.getByLabel('Fingerprint').fill(`${printed?.toUpperCase()}\n`);
+      await anonymous.getByRole('button', { name: 'Verify' }).click();
+      await expect
+        .poll(() =>
+          anonymous.getByText('Approved, and today’s engine gives the same results').isVisible(),
+        )
+        .toBe(true);
+      expect(anonymous.url()).toBe(`${product.baseUrl}/verify/${printed?.replace(/\s/g, '')}`);
+    } finally {
+      await visitor.close();
+    }
   });
 
   it('keeps a private calculation from a student, without saying whether it exists', async () => {

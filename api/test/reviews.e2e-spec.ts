@@ -101,6 +101,16 @@ describe('review and sign-off', () => {
     ).toBe(409);
   });
 
+  it('lists the reviewers a version can be submitted to, by name, never the asker', async () => {
+    const answer = await http().get('/api/reviewers').set(designerReviewer.auth);
+    expect(answer.status).toBe(200);
+    const ids = answer.body.map((person: { id: string }) => person.id);
+    expect(ids).toEqual(expect.arrayContaining([reviewer.id, secondReviewer.id]));
+    expect(ids).not.toContain(designerReviewer.id);
+    expect(ids).not.toContain(designer.id);
+    expect(Object.keys(answer.body[0]).sort()).toEqual(['displayName', 'id']);
+  });
+
   it('never lets authors review their own version', async () => {
     const id = await newCalculation(designerReviewer);
     await http()

@@ -60,6 +60,12 @@ export class ReviewsController {
     return this.reviewsService.versionWithReviews(user, id, n, origin);
   }
 
+  /** Who may be asked for a review (people with the reviewer role, not the asker). */
+  @Get('reviewers')
+  reviewers(@CurrentUser() user: AuthUser): Promise<{ id: string; displayName: string }[]> {
+    return this.reviewsService.reviewers(user);
+  }
+
   @Get('reviews/queue')
   @Roles('reviewer')
   queue(@CurrentUser() user: AuthUser) {

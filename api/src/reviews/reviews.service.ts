@@ -270,6 +270,15 @@ export class ReviewsService {
     };
   }
 
+  /** People a version can be submitted to: every reviewer but the one asking, by name. */
+  async reviewers(user: AuthUser): Promise<{ id: string; displayName: string }[]> {
+    const reviewers = await this.usersService.listByRole('reviewer');
+    return reviewers
+      .filter((reviewer) => reviewer.id !== user.id)
+      .map((reviewer) => ({ id: reviewer.id, displayName: reviewer.displayName }))
+      .sort((a, b) => a.displayName.localeCompare(b.displayName));
+  }
+
   /** Versions waiting for this reviewer: asked of them by name, or left open, and not their own. */
   async queue(user: AuthUser) {
     const waiting = await this.versions

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { ENGINE_VERSION, evaluate, type OutputQuantity } from '@loftwright/buoyancy';
+import { ENGINE_VERSION, evaluate, type OutputQuantity, sameResult } from '@loftwright/buoyancy';
 import { Repository } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { canRead } from '../calculations/calculation-access';
@@ -9,14 +9,15 @@ import { Calculation } from '../calculations/calculation.entity';
 import { User } from '../users/user.entity';
 import { Review } from './review.entity';
 
-/** Relative difference under which a recomputed output counts as the same number. */
-const SAME_VALUE_RELATIVE = 1e-12;
-
 export interface OutputComparison {
   name: string;
+  /** The result's label, as the sheet prints it. */
+  label: string;
   unit: string;
   approved: number | null;
   recomputed: number | null;
+  /** (recomputed − approved) / |approved|, where both exist and approved is not zero. */
+  relativeChange: number | null;
 }
 
 @Injectable()
@@ -69,13 +70,22 @@ export class VerifyService {
     }
     const names = [...new Set([...Object.keys(stored), ...Object.keys(recomputed)])].sort();
     const differences: OutputComparison[] = names
-      .filter((name) => !sameValue(stored[name]?.value, recomputed[name]?.value))
-      .map((name) => ({
-        name,
-        unit: (stored[name] ?? recomputed[name])?.unit ?? '',
-        approved: stored[name]?.value ?? null,
-        recomputed: recomputed[name]?.value ?? null,
-      }));
+      .filter((name) => !sameResult(stored[name]?.value, recomputed[name]?.value))
+      .map((name) => {
+        const approved = stored[name]?.value ?? null;
+        const now = recomputed[name]?.value ?? null;
+        return {
+          name,
+          label: (stored[name] ?? recomputed[name])?.label ?? name,
+          unit: (stored[name] ?? recomputed[name])?.unit ?? '',
+          approved,
+          recomputed: now,
+          relativeChange:
+            approved !== null && now !== null && approved !== 0
+              ? (now - approved) / Math.abs(approved)
+              : null,
+        };
+      });
     // Anyone holding the fingerprint learns that it was approved, by whom, when and whether it
     // still computes the same; which calculation it is (its id, title and the reviewer's comment)
     // only a reader who may open that calculation learns. The title is the one approved.
@@ -110,10 +120,4 @@ export class VerifyService {
       })),
     };
   }
-}
-
-function sameValue(a: number | undefined, b: number | undefined): boolean {
-  if (a === undefined || b === undefined) return a === b;
-  if (a === b) return true;
-  return Math.abs(a - b) <= SAME_VALUE_RELATIVE * Math.max(Math.abs(a), Math.abs(b));
 }

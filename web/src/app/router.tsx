@@ -60,6 +60,14 @@ export const routes: RouteObject[] = [
               })),
           },
           {
+            // Where review mails point.
+            path: paths.version.path,
+            lazy: () =>
+              import('./routes/calculations/version').then((m) => ({
+                Component: m.VersionRoute,
+              })),
+          },
+          {
             path: paths.sheet.path,
             lazy: () =>
               import('./routes/calculations/sheet').then((m) => ({

@@ -23,9 +23,16 @@ export const paths = {
   classroom: { path: '/classes/:id', href: (id: string) => `/classes/${id}` },
   join: { path: '/join/:code', href: (code: string) => `/join/${code}` },
   example: { path: '/examples/:id', href: (id: string) => `/examples/${id}` },
+  version: {
+    path: '/calculations/:id/versions/:n',
+    href: (id: string, n: number) => `/calculations/${id}/versions/${n}`,
+  },
   sheet: {
     path: '/calculations/:id/versions/:n/sheet',
     href: (id: string, n: number) => `/calculations/${id}/versions/${n}/sheet`,
   },
-  verify: { path: '/verify/:fingerprint', href: (fingerprint: string) => `/verify/${fingerprint}` },
+  verify: {
+    path: '/verify/:fingerprint?',
+    href: (fingerprint?: string) => (fingerprint ? `/verify/${fingerprint}` : '/verify'),
+  },
 } as const;

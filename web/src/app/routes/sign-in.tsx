@@ -17,6 +17,7 @@ export function SignInRoute() {
       <Space style={{ marginTop: 16 }} wrap>
         <Link to={paths.register.href()}>Create an account</Link>
         <Link to={paths.forgotPassword.href()}>Forgot the password?</Link>
+        <Link to={paths.verify.href()}>Verify a sign-off sheet</Link>
       </Space>
     </Card>
   );

@@ -12,6 +12,7 @@ import { CalculationEditor } from '@/features/calculations/components/calculatio
 import { VersionCompare } from '@/features/calculations/components/version-compare';
 import { VersionHistory } from '@/features/calculations/components/version-history';
 import { ReviewDecision } from '@/features/reviews/components/review-decision';
+import { ReviewNotes } from '@/features/sign-off/components/review-notes';
 
 // Below the editor and needed later than it: loaded after the form and results are on screen.
 const FillLogsPanel = lazy(() =>
@@ -51,6 +52,20 @@ export function CalculationEditorRoute() {
   return (
     <>
       {mayReview ? <ReviewDecision calculationId={id} number={latest.number} /> : null}
+      {calculation.data ? (
+        <section aria-label="What reviewers said">
+          {/* The newest reviewed versions' decisions and comments, newest first. */}
+          {calculation.data.versions
+            .filter(
+              (version) => version.status === 'approved' || version.status === 'changes_requested',
+            )
+            .slice(-2)
+            .reverse()
+            .map((version) => (
+              <ReviewNotes key={version.number} calculationId={id} number={version.number} />
+            ))}
+        </section>
+      ) : null}
       <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />
       {calculation.data && user ? (
         <Suspense fallback={null}>

@@ -177,12 +177,25 @@ export function useSaveVersion(id: string) {
 export function useSubmitVersion(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (number: number) =>
-      (await apiClient.post<VersionDetail>(`/calculations/${id}/versions/${number}/submit`, {}))
-        .data,
+    mutationFn: async ({ number, reviewerId }: { number: number; reviewerId?: string }) =>
+      (
+        await apiClient.post<VersionDetail>(
+          `/calculations/${id}/versions/${number}/submit`,
+          reviewerId ? { reviewerId } : {},
+        )
+      ).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations'] }),
   });
 }
+
+/** GET /api/reviewers: who a version can be submitted to. */
+export const useReviewers = (enabled: boolean) =>
+  useQuery({
+    queryKey: ['reviewers'],
+    queryFn: async () =>
+      (await apiClient.get<{ id: string; displayName: string }[]>('/reviewers')).data,
+    enabled,
+  });
 
 /** GET .../versions/:a/diff/:b (diffInputs/diffOutputs of @loftwright/buoyancy). */
 export interface VersionDiff {

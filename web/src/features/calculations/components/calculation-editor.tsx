@@ -14,12 +14,12 @@ import {
 import { lazy, Suspense, useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { useBlocker } from 'react-router-dom';
 import { ApiError } from '@/lib/api-client';
+import { localMoment } from '@/lib/local-moment';
 import { readableApiError } from '@/lib/readable-api-error';
 import {
   type CalculationDetail,
   useCalculation,
   useSaveVersion,
-  useSubmitVersion,
   type VersionDetail,
 } from '../api/calculations-api';
 import { ConflictDialog, type SaveConflict } from './conflict-dialog';
@@ -34,6 +34,7 @@ import {
   useUnreadableFields,
 } from '@/components/reading/unreadable-fields';
 import { StatusTag } from './status-tag';
+import { SubmitForReview } from './submit-for-review';
 
 // The charting library is most of the editor's weight: the inputs and results come first, the
 // pictures a moment later.
@@ -177,7 +178,6 @@ export function EditorBody({
   const { message } = App.useApp();
   const id = detail.id;
   const save = useSaveVersion(id);
-  const submit = useSubmitVersion(id);
   const latest = detail.latest;
   const [inputs, setInputs] = useState<unknown>(() => latest?.inputs);
   const [savedInputs, setSavedInputs] = useState<string>(() => JSON.stringify(latest?.inputs));
@@ -281,6 +281,21 @@ export function EditorBody({
           style={{ marginBottom: 12 }}
         />
       ) : null}
+      {detail.versions
+        .filter((version) => version.status === 'in_review')
+        .map((version) => (
+          <Alert
+            key={version.number}
+            type="info"
+            showIcon
+            role="status"
+            title={`Version ${version.number} is in review with ${version.reviewer?.displayName ?? 'any reviewer'}.`}
+            description={
+              version.submittedAt ? `Submitted ${localMoment(version.submittedAt)}.` : undefined
+            }
+            style={{ marginBottom: 12 }}
+          />
+        ))}
       {serverDiffers ? (
         <Alert
           type="warning"
@@ -343,17 +358,7 @@ export function EditorBody({
                     Save as version {detail.latestVersion + 1}
                   </Button>
                   {detail.status === 'draft' && !dirty ? (
-                    <Button
-                      loading={submit.isPending}
-                      onClick={() =>
-                        submit.mutate(detail.latestVersion, {
-                          onSuccess: () => void message.success('Submitted for review.'),
-                          onError: (error) => void message.error(error.message),
-                        })
-                      }
-                    >
-                      Submit version {detail.latestVersion} for review
-                    </Button>
+                    <SubmitForReview calculationId={id} versionNumber={detail.latestVersion} />
                   ) : null}
                 </Space>
               </Space>

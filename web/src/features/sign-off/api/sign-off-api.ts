@@ -57,9 +57,12 @@ export type Verification =
       reproduces: boolean;
       differences: {
         name: string;
+        label: string;
         unit: string;
         approved: number | null;
         recomputed: number | null;
+        /** (recomputed − approved) / |approved|, null where either is missing or approved is 0. */
+        relativeChange: number | null;
       }[];
       approvals: {
         calculation: { id: string; title: string } | null;

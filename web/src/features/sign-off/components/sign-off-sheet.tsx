@@ -7,6 +7,7 @@ import { useReadingPreferences } from '@/components/reading/reading-preferences'
 import { useNumberDisplay } from '@/components/reading/use-number-display';
 import { stepNumber } from '@/components/results/step-number';
 import { paths } from '@/config/paths';
+import { localMoment } from '@/lib/local-moment';
 import { useReviewedVersion } from '../api/sign-off-api';
 import './sign-off-sheet.css';
 
@@ -16,18 +17,6 @@ const STATUS_WORDS = {
   approved: 'Approved',
   changes_requested: 'Changes requested',
 } as const;
-
-/** "4 December 2026 at 02:10 GMT+1": a moment in the reader's time zone, with its offset. */
-const localMoment = (iso: string) =>
-  // dateStyle and timeStyle cannot be combined with timeZoneName, so the parts are named.
-  new Intl.DateTimeFormat(undefined, {
-    year: 'numeric',
-    month: 'long',
-    day: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-    timeZoneName: 'shortOffset',
-  }).format(new Date(iso));
 
 /** The verify page's address drawn as a QR code, for a phone held over the printed sheet. */
 function VerifyQrCode({ url }: { url: string }) {

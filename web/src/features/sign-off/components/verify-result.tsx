@@ -1,5 +1,7 @@
 import { Alert, Descriptions, Spin, Table, Typography } from 'antd';
 import { KINDS } from '@loftwright/buoyancy';
+import { useNumberDisplay } from '@/components/reading/use-number-display';
+import { localMoment } from '@/lib/local-moment';
 import { useVerification } from '../api/sign-off-api';
 
 const kindTitle = (kind: string) => KINDS.find((candidate) => candidate.id === kind)?.title ?? kind;
@@ -7,6 +9,8 @@ const kindTitle = (kind: string) => KINDS.find((candidate) => candidate.id === k
 /** What the API says of a fingerprint: approved or not, by whom and when, and reproduced today. */
 export function VerifyResult({ fingerprint }: { fingerprint: string }) {
   const verification = useVerification(fingerprint);
+  // Anyone may verify, signed in or not: values in SI, in the reader's number format if known.
+  const show = useNumberDisplay('si');
   if (verification.isPending) return <Spin description="Checking the fingerprint…" />;
   if (verification.error) return <Alert type="error" showIcon title={verification.error.message} />;
   const answer = verification.data;
@@ -43,9 +47,7 @@ export function VerifyResult({ fingerprint }: { fingerprint: string }) {
         <Descriptions.Item label="Approved by">
           {answer.approvedBy?.displayName ?? 'unknown'}
         </Descriptions.Item>
-        <Descriptions.Item label="Approved at">
-          {new Date(answer.approvedAt).toLocaleString()}
-        </Descriptions.Item>
+        <Descriptions.Item label="Approved at">{localMoment(answer.approvedAt)}</Descriptions.Item>
         {answer.comment === null ? null : (
           <Descriptions.Item label="Comment">{answer.comment || '—'}</Descriptions.Item>
         )}
@@ -61,18 +63,29 @@ export function VerifyResult({ fingerprint }: { fingerprint: string }) {
           size="small"
           rowKey="name"
           pagination={false}
+          aria-label="Results that moved"
           dataSource={answer.differences}
           columns={[
-            { title: 'Result', dataIndex: 'name' },
+            { title: 'Result', dataIndex: 'label' },
             {
               title: 'Approved',
               dataIndex: 'approved',
-              render: (value: number | null, row) => `${value ?? '—'} ${row.unit}`,
+              render: (value: number | null, row) =>
+                value === null ? '—' : show.outputText(value, row.unit),
             },
             {
               title: 'Recomputed now',
               dataIndex: 'recomputed',
-              render: (value: number | null, row) => `${value ?? '—'} ${row.unit}`,
+              render: (value: number | null, row) =>
+                value === null ? '—' : show.outputText(value, row.unit),
+            },
+            {
+              title: 'Moved by',
+              dataIndex: 'relativeChange',
+              render: (change: number | null) =>
+                change === null
+                  ? '—'
+                  : `${change > 0 ? '+' : '−'}${show.number(Math.abs(change) * 100, { significantDigits: 2 })} %`,
             },
           ]}
         />
