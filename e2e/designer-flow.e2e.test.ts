@@ -208,7 +208,21 @@ describe('designer, reviewer and student in the browser', () => {
       .poll(() => page.getByRole('cell', { name: 'designer@demo.test' }).isVisible())
       .toBe(true);
     await page.getByRole('tab', { name: 'Audit trail' }).click();
-    await expect.poll(() => page.getByText('version.approve').first().isVisible()).toBe(true);
+    // In words and by name, never as action codes, ids or JSON; and within a 1440 px page.
+    const trail = page.getByRole('table', { name: 'Audit trail' });
+    await expect
+      .poll(() =>
+        trail
+          .getByText('Ilse Varga approved version 2 of “Browser check sphere”')
+          .first()
+          .isVisible(),
+      )
+      .toBe(true);
+    const trailText = await trail.innerText();
+    expect(trailText).not.toMatch(/version\.approve|[0-9a-f]{8}-[0-9a-f]{4}|[{}]/);
+    expect(
+      await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth),
+    ).toBe(true);
     await page.getByRole('tab', { name: 'Mail outbox' }).click();
     await expect
       .poll(() => page.getByText(/Review requested: Browser check sphere, version 2/).isVisible())

@@ -3,8 +3,8 @@ import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { Roles } from '../common/decorators/roles.decorator';
 import { sendTable } from '../common/export/table-export';
-import type { AuditEntry } from './audit-entry.entity';
-import { AuditService } from './audit.service';
+import { AUDIT_ACTIONS } from './audit-story';
+import { AuditService, type AuditView } from './audit.service';
 import { ExportAuditDto, ListAuditDto } from './dto/list-audit.dto';
 
 @ApiTags('admin')
@@ -17,31 +17,38 @@ export class AuditController {
   @Get('export')
   @Roles('admin')
   async export(@Query() query: ExportAuditDto, @Res() response: Response): Promise<void> {
-    const rows = await this.auditService.listAll(query, 10_000);
-    await sendTable<AuditEntry>(
+    const rows = await this.auditService.listAllReadable(query, 10_000);
+    await sendTable<AuditView>(
       response,
       query.format ?? 'csv',
       'loftwright-audit',
       [
-        { header: 'Id', value: (row) => row.id, width: 8 },
         { header: 'Time (UTC)', value: (row) => row.createdAt, width: 22 },
-        { header: 'Action', value: (row) => row.action, width: 24 },
-        { header: 'Actor id', value: (row) => row.actorId, width: 38 },
-        { header: 'Target type', value: (row) => row.targetType },
-        { header: 'Target id', value: (row) => row.targetId, width: 38 },
+        { header: 'Who', value: (row) => row.actor?.displayName ?? '', width: 24 },
+        { header: 'What happened', value: (row) => row.summary, width: 70 },
         {
-          header: 'Detail',
-          value: (row) => (row.detail ? JSON.stringify(row.detail) : ''),
-          width: 60,
+          header: 'Changes',
+          value: (row) =>
+            row.changes
+              .map((change) => `${change.label}: ${change.from ?? '—'} → ${change.to ?? '—'}`)
+              .join('; '),
+          width: 50,
         },
       ],
       rows,
     );
   }
 
+  /** Every action the trail records, with its words, for a filter. */
+  @Get('actions')
+  @Roles('admin')
+  actions(): { action: string; words: string }[] {
+    return Object.entries(AUDIT_ACTIONS).map(([action, words]) => ({ action, words }));
+  }
+
   @Get()
   @Roles('admin')
   list(@Query() query: ListAuditDto) {
-    return this.auditService.list(query);
+    return this.auditService.listReadable(query);
   }
 }

@@ -1,10 +1,28 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { type EntityManager, Repository } from 'typeorm';
+import { DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
 import { AuditEntry } from './audit-entry.entity';
+import { type AuditChange, type AuditNames, auditStory } from './audit-story';
 import type { ListAuditDto } from './dto/list-audit.dto';
+
+/** An audit entry as people read it: who by name, what in words, changes as old → new. */
+export interface AuditView {
+  id: number;
+  createdAt: string;
+  action: string;
+  actor: { id: string; displayName: string } | null;
+  summary: string;
+  changes: AuditChange[];
+  targetType: string;
+  targetId: string | null;
+  /** The recorded detail, for programs; the web shows `summary` and `changes`. */
+  detail: Record<string, unknown> | null;
+}
+
+/** Tables whose rows an entry may name, and the column that names them. */
+const TITLED_TABLES = ['calculation', 'classroom', 'gas_plan', 'worked_example'] as const;
 
 export interface AuditRecord {
   actorId: string | null;
@@ -19,7 +37,73 @@ export class AuditService {
   constructor(
     @InjectRepository(AuditEntry) private readonly entries: Repository<AuditEntry>,
     private readonly writeLock: WriteLock,
+    private readonly dataSource: DataSource,
   ) {}
+
+  /** A page of the trail in words: names for ids, actions as sentences, changes in a list. */
+  async listReadable(
+    query: ListAuditDto,
+  ): Promise<{ items: AuditView[]; total: number; page: number; pageSize: number }> {
+    const page = await this.list(query);
+    return { ...page, items: await this.readable(page.items) };
+  }
+
+  /** Every entry the filters match in words, newest first, at most `limit`. */
+  async listAllReadable(query: ListAuditDto, limit: number): Promise<AuditView[]> {
+    return this.readable(await this.listAll(query, limit));
+  }
+
+  private async readable(entries: AuditEntry[]): Promise<AuditView[]> {
+    const names = await this.namesFor(entries);
+    return entries.map((entry) => {
+      const actorName = names.person(entry.actorId);
+      return {
+        id: entry.id,
+        createdAt: new Date(entry.createdAt).toISOString(),
+        action: entry.action,
+        actor: entry.actorId && actorName ? { id: entry.actorId, displayName: actorName } : null,
+        ...auditStory(entry, names),
+        targetType: entry.targetType,
+        targetId: entry.targetId,
+        detail: entry.detail,
+      };
+    });
+  }
+
+  /** Names of every person and titled thing the entries mention, in one query per table. */
+  private async namesFor(entries: AuditEntry[]): Promise<AuditNames> {
+    const ids = new Set<string>();
+    for (const entry of entries) {
+      for (const id of [entry.actorId, entry.targetId, ...Object.values(entry.detail ?? {})]) {
+        if (typeof id === 'string' && /^[0-9a-f-]{36}$/.test(id)) ids.add(id);
+      }
+    }
+    const wanted = [...ids];
+    const people = new Map<string, string>();
+    const things = new Map<string, string>();
+    if (wanted.length > 0) {
+      const users = await this.dataSource
+        .createQueryBuilder()
+        .select(['u.id AS id', 'u.display_name AS name'])
+        .from('user', 'u')
+        .where({ id: In(wanted) })
+        .getRawMany<{ id: string; name: string }>();
+      for (const row of users) people.set(row.id, row.name);
+      for (const table of TITLED_TABLES) {
+        const rows = await this.dataSource
+          .createQueryBuilder()
+          .select(['t.id AS id', 't.title AS title'])
+          .from(table, 't')
+          .where({ id: In(wanted) })
+          .getRawMany<{ id: string; title: string }>();
+        for (const row of rows) things.set(`${table}:${row.id}`, row.title);
+      }
+    }
+    return {
+      person: (id) => (id ? (people.get(id) ?? null) : null),
+      thing: (type, id) => (id ? (things.get(`${type}:${id}`) ?? null) : null),
+    };
+  }
 
   /** Writes one audit row; inside a transaction when `manager` is given, so both commit together. */
   async record(record: AuditRecord, manager?: EntityManager): Promise<void> {

@@ -273,7 +273,15 @@ export class CalculationsService {
             action: 'calculation.update',
             targetType: 'calculation',
             targetId: id,
-            detail: { ...dto },
+            // Old and new value of each field, so the trail can say "Title: old → new".
+            detail: {
+              changes: Object.fromEntries(
+                Object.entries(changes).map(([field, value]) => [
+                  field,
+                  { from: calculation[field as keyof Calculation] ?? null, to: value },
+                ]),
+              ),
+            },
           },
           manager,
         );

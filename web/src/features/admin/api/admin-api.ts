@@ -12,14 +12,27 @@ export interface AdminUser {
   createdAt: string;
 }
 
+/** GET /api/admin/audit items (api/src/audit/audit.service.ts, AuditView). */
 export interface AuditRow {
   id: number;
-  actorId: string | null;
+  createdAt: string;
   action: string;
+  actor: { id: string; displayName: string } | null;
+  /** The entry as a sentence, with names and titles. */
+  summary: string;
+  changes: { label: string; from: string | null; to: string | null }[];
   targetType: string;
   targetId: string | null;
-  detail: Record<string, unknown> | null;
-  createdAt: string;
+}
+
+export interface AuditFilters {
+  page: number;
+  pageSize: number;
+  action?: string;
+  actorId?: string;
+  /** ISO 8601 times, both ends included. */
+  from?: string;
+  to?: string;
 }
 
 export interface OutboxRow {
@@ -55,7 +68,15 @@ export function useUpdateRoles() {
   });
 }
 
-export const useAudit = (params: { page: number; pageSize: number; action?: string }) =>
+export const useAuditActions = () =>
+  useQuery({
+    queryKey: ['admin', 'audit', 'actions'],
+    queryFn: async () =>
+      (await apiClient.get<{ action: string; words: string }[]>('/admin/audit/actions')).data,
+    staleTime: Infinity,
+  });
+
+export const useAudit = (params: AuditFilters) =>
   useQuery({
     queryKey: ['admin', 'audit', params],
     queryFn: async () => (await apiClient.get<Page<AuditRow>>('/admin/audit', { params })).data,

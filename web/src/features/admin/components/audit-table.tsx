@@ -1,38 +1,89 @@
-import { Input, Space, Table } from 'antd';
-import { ExportButton } from '@/components/export/export-button';
+import { DatePicker, Select, Space, Table } from 'antd';
 import { useState } from 'react';
-import { type AuditRow, useAudit } from '../api/admin-api';
+import { ExportButton } from '@/components/export/export-button';
+import { localMoment } from '@/lib/local-moment';
+import {
+  type AuditFilters,
+  type AuditRow,
+  useAudit,
+  useAuditActions,
+  useUsers,
+} from '../api/admin-api';
 
-/** The audit trail, newest first, filterable by action. */
+/**
+ * The audit trail, newest first, in words: who by name, what as a sentence, changes as
+ * "label: old → new" when a row is opened. Filters by person, action and dates.
+ */
 export function AuditTable() {
-  const [params, setParams] = useState<{ page: number; pageSize: number; action?: string }>({
-    page: 1,
-    pageSize: 50,
-  });
+  const [params, setParams] = useState<AuditFilters>({ page: 1, pageSize: 50 });
   const audit = useAudit(params);
+  const actions = useAuditActions();
+  const users = useUsers();
+  const filter = (changes: Partial<AuditFilters>) =>
+    setParams((current) => ({ ...current, ...changes, page: 1 }));
+  // What the export takes: the filters, not the page.
+  const filters = Object.fromEntries(
+    Object.entries(params).filter(
+      ([key, value]) => value !== undefined && key !== 'page' && key !== 'pageSize',
+    ),
+  );
   return (
     <>
       <Space wrap style={{ marginBottom: 12 }}>
-        <Input.Search
-          aria-label="Filter by action"
-          placeholder="Action, e.g. version.approve"
+        <Select
+          aria-label="Filter by person"
+          placeholder="Anyone"
           allowClear
-          style={{ width: 300 }}
-          onSearch={(action) =>
-            setParams({ page: 1, pageSize: params.pageSize, ...(action ? { action } : {}) })
+          showSearch={{ optionFilterProp: 'label' }}
+          style={{ minWidth: 200 }}
+          value={params.actorId}
+          onChange={(actorId?: string) => filter({ actorId })}
+          options={(users.data ?? []).map((user) => ({ value: user.id, label: user.displayName }))}
+        />
+        <Select
+          aria-label="Filter by action"
+          placeholder="Any action"
+          allowClear
+          showSearch={{ optionFilterProp: 'label' }}
+          style={{ minWidth: 240 }}
+          value={params.action}
+          onChange={(action?: string) => filter({ action })}
+          options={(actions.data ?? []).map((item) => ({
+            value: item.action,
+            label: item.words.replace(/^./, (first) => first.toUpperCase()),
+          }))}
+        />
+        <DatePicker.RangePicker
+          aria-label="Filter by date"
+          allowEmpty={[true, true]}
+          onChange={(range) =>
+            filter({
+              from: range?.[0]?.startOf('day').toISOString(),
+              to: range?.[1]?.endOf('day').toISOString(),
+            })
           }
         />
-        <ExportButton
-          path="/admin/audit/export"
-          params={params.action ? { action: params.action } : {}}
-          what="the audit trail"
-        />
+        <ExportButton path="/admin/audit/export" params={filters} what="the audit trail" />
       </Space>
       <Table<AuditRow>
         rowKey="id"
         size="small"
+        aria-label="Audit trail"
         loading={audit.isFetching}
         dataSource={audit.data?.items ?? []}
+        tableLayout="fixed"
+        expandable={{
+          rowExpandable: (row) => row.changes.length > 0,
+          expandedRowRender: (row) => (
+            <ul style={{ margin: 0 }}>
+              {row.changes.map((change) => (
+                <li key={change.label}>
+                  {change.label}: {change.from ?? '—'} → {change.to ?? '—'}
+                </li>
+              ))}
+            </ul>
+          ),
+        }}
         onChange={(pagination) =>
           setParams((current) => ({
             ...current,
@@ -49,32 +100,17 @@ export function AuditTable() {
           {
             title: 'When',
             dataIndex: 'createdAt',
-            render: (at: string) => new Date(at).toLocaleString(),
-          },
-          {
-            title: 'Action',
-            dataIndex: 'action',
-            render: (action: string) => <span className="lw-mono">{action}</span>,
+            width: '14rem',
+            render: (at: string) => localMoment(at),
           },
           {
             title: 'Who',
-            dataIndex: 'actorId',
-            render: (actor: string | null) => (
-              <span className="lw-mono">{actor?.slice(0, 8) ?? '—'}</span>
-            ),
+            dataIndex: 'actor',
+            width: '12rem',
+            ellipsis: true,
+            render: (actor: AuditRow['actor']) => actor?.displayName ?? '—',
           },
-          {
-            title: 'Target',
-            dataIndex: 'targetType',
-            render: (type: string, row) => `${type} ${row.targetId?.slice(0, 8) ?? ''}`,
-          },
-          {
-            title: 'Details',
-            dataIndex: 'detail',
-            render: (detail: AuditRow['detail']) => (
-              <span className="lw-mono">{detail ? JSON.stringify(detail) : ''}</span>
-            ),
-          },
+          { title: 'What happened', dataIndex: 'summary' },
         ]}
       />
     </>
