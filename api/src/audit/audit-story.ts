@@ -31,6 +31,8 @@ export const AUDIT_ACTIONS: Record<string, string> = {
   'version.submit': 'submitted a version for review',
   'version.approve': 'approved a version',
   'version.send-back': 'sent a version back',
+  'comment.add': 'commented on a version',
+  'comment.addressed': 'marked a comment addressed',
   'attachment.add': 'added a file',
   'attachment.remove': 'removed a file',
   'fill-log.create': 'logged a fill',
@@ -157,6 +159,16 @@ export function auditStory(
     case 'version.send-back':
       return {
         summary: `${actor} ${entry.action === 'version.approve' ? 'approved' : 'sent back'} version ${String(version)} of ${calculation()}`,
+        changes: [],
+      };
+    case 'comment.add':
+      return {
+        summary: `${actor} commented on version ${String(version)} of ${calculation()}`,
+        changes: [],
+      };
+    case 'comment.addressed':
+      return {
+        summary: `${actor} marked a comment on ${calculation()} addressed in version ${String(version)}`,
         changes: [],
       };
     case 'attachment.add':

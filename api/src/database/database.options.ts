@@ -14,6 +14,7 @@ import { GasPlanRecord } from '../plans/plan.entity';
 import { Installation } from '../health/installation.entity';
 import { OutboxMessage } from '../mail/outbox-message.entity';
 import { Review } from '../reviews/review.entity';
+import { ReviewComment } from '../reviews/review-comment.entity';
 import { User } from '../users/user.entity';
 import { ExerciseSubmission } from '../worked-examples/exercise-submission.entity';
 import { WorkedExample } from '../worked-examples/worked-example.entity';
@@ -28,6 +29,7 @@ import { UserNumberFormatCurrency1764738000000 } from './migrations/176473800000
 import { FillLogInstrument1764741600000 } from './migrations/1764741600000-fill-log-instrument';
 import { ReviewCalculationTitle1764745200000 } from './migrations/1764745200000-review-calculation-title';
 import { PendingRegistration1764748800000 } from './migrations/1764748800000-pending-registration';
+import { ReviewComments1764752400000 } from './migrations/1764752400000-review-comments';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -39,6 +41,7 @@ export const ENTITIES = [
   Calculation,
   CalculationVersion,
   Review,
+  ReviewComment,
   AuditEntry,
   OutboxMessage,
   Attachment,
@@ -61,6 +64,7 @@ export const MIGRATIONS = [
   FillLogInstrument1764741600000,
   ReviewCalculationTitle1764745200000,
   PendingRegistration1764748800000,
+  ReviewComments1764752400000,
 ];
 
 /**

@@ -7,13 +7,18 @@ import { RequestOrigin } from '../common/public-url';
 import { intParam } from '../common/pipes/int-param.pipe';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
 import { ApproveVersionDto, SendBackVersionDto, SubmitVersionDto } from './dto/review-decision.dto';
+import { AddReviewCommentDto, MarkAddressedDto } from './dto/review-comment.dto';
+import { ReviewCommentsService, type ReviewCommentView } from './review-comments.service';
 import { ReviewsService } from './reviews.service';
 
 @ApiTags('reviews')
 @ApiBearerAuth()
 @Controller()
 export class ReviewsController {
-  constructor(private readonly reviewsService: ReviewsService) {}
+  constructor(
+    private readonly reviewsService: ReviewsService,
+    private readonly comments: ReviewCommentsService,
+  ) {}
 
   @Post('calculations/:id/versions/:n/submit')
   @HttpCode(HttpStatus.OK)
@@ -58,6 +63,37 @@ export class ReviewsController {
     @RequestOrigin() origin: string,
   ) {
     return this.reviewsService.versionWithReviews(user, id, n, origin);
+  }
+
+  /** A reviewer's comment on a version in review, on one input or result or on the whole. */
+  @Post('calculations/:id/versions/:n/comments')
+  addComment(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+    @Param('n', intParam('n')) n: number,
+    @Body() body: AddReviewCommentDto,
+  ): Promise<ReviewCommentView> {
+    return this.comments.add(user, id, n, body);
+  }
+
+  /** Every review comment on a calculation, oldest first, open and addressed. */
+  @Get('calculations/:id/comments')
+  listComments(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<ReviewCommentView[]> {
+    return this.comments.list(user, id);
+  }
+
+  /** The owner marks a comment addressed by a later version. */
+  @Post('comments/:id/addressed')
+  @HttpCode(HttpStatus.OK)
+  markAddressed(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+    @Body() body: MarkAddressedDto,
+  ): Promise<ReviewCommentView> {
+    return this.comments.markAddressed(user, id, body.versionNumber);
   }
 
   /** Who may be asked for a review (people with the reviewer role, not the asker). */

@@ -8,6 +8,8 @@ import { SignOffModule } from '../sign-off/sign-off.module';
 import { User } from '../users/user.entity';
 import { UsersModule } from '../users/users.module';
 import { Review } from './review.entity';
+import { ReviewComment } from './review-comment.entity';
+import { ReviewCommentsService } from './review-comments.service';
 import { ReviewsController } from './reviews.controller';
 import { ReviewsService } from './reviews.service';
 import { VerifyController } from './verify.controller';
@@ -15,14 +17,14 @@ import { VerifyService } from './verify.service';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([Review, CalculationVersion, Calculation, User]),
+    TypeOrmModule.forFeature([Review, ReviewComment, CalculationVersion, Calculation, User]),
     CalculationsModule,
     UsersModule,
     MailModule,
     SignOffModule,
   ],
   controllers: [ReviewsController, VerifyController],
-  providers: [ReviewsService, VerifyService],
+  providers: [ReviewsService, ReviewCommentsService, VerifyService],
   exports: [ReviewsService],
 })
 export class ReviewsModule {}
