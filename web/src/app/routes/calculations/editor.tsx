@@ -1,5 +1,5 @@
 import { App, Button, Space, Typography } from 'antd';
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, useMemo } from 'react';
 import { useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import type { Attachment } from '@/features/attachments/api/attachments-api';
@@ -11,6 +11,9 @@ import {
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
 import { VersionCompare } from '@/features/calculations/components/version-compare';
 import { VersionHistory } from '@/features/calculations/components/version-history';
+import { FieldRemarksContext } from '@/components/reading/field-remarks';
+import { useReviewComments } from '@/features/reviews/api/reviews-api';
+import { ReviewCommentsPanel } from '@/features/reviews/components/review-comments-panel';
 import { ReviewDecision } from '@/features/reviews/components/review-decision';
 import { ReviewNotes } from '@/features/sign-off/components/review-notes';
 
@@ -31,7 +34,19 @@ export function CalculationEditorRoute() {
   const { user } = useMe();
   const { message } = App.useApp();
   const calculation = useCalculation(id);
+  const comments = useReviewComments(id);
   const latest = calculation.data?.latest;
+  // Open comments on inputs, shown under the field they are about.
+  const remarks = useMemo(() => {
+    const byPath: Record<string, string[]> = {};
+    for (const comment of comments.data ?? []) {
+      if (comment.addressed || comment.anchor?.kind !== 'input') continue;
+      (byPath[comment.anchor.path] ??= []).push(
+        `${comment.author?.displayName ?? 'A reviewer'} (version ${comment.versionNumber}): “${comment.body}”`,
+      );
+    }
+    return byPath;
+  }, [comments.data]);
   const mayReview =
     user !== undefined &&
     latest !== null &&
@@ -51,7 +66,23 @@ export function CalculationEditorRoute() {
     );
   return (
     <>
-      {mayReview ? <ReviewDecision calculationId={id} number={latest.number} /> : null}
+      {mayReview ? (
+        <ReviewDecision
+          calculationId={id}
+          number={latest.number}
+          kind={calculation.data?.kind ?? ''}
+          inputs={latest.inputs}
+          outputs={latest.outputs}
+          unitSystem={user?.unitSystem ?? 'si'}
+        />
+      ) : null}
+      {calculation.data ? (
+        <ReviewCommentsPanel
+          calculationId={id}
+          latestVersion={calculation.data.latestVersion}
+          canMarkAddressed={calculation.data.permissions.edit}
+        />
+      ) : null}
       {calculation.data ? (
         <section aria-label="What reviewers said">
           {/* The newest reviewed versions' decisions and comments, newest first. */}
@@ -66,7 +97,9 @@ export function CalculationEditorRoute() {
             ))}
         </section>
       ) : null}
-      <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />
+      <FieldRemarksContext.Provider value={remarks}>
+        <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />
+      </FieldRemarksContext.Provider>
       {calculation.data && user ? (
         <Suspense fallback={null}>
           <FillLogsPanel

@@ -1,6 +1,7 @@
 import { Form, Input, Select, Typography } from 'antd';
 import { fieldLabel, humaniseKey, type UnitSystem } from '@loftwright/buoyancy';
 import { CURRENCIES } from '@/config/currencies';
+import { FieldRemarks } from '@/components/reading/field-remarks';
 import { NumberField } from './number-field';
 import { ArrayRowsField } from './array-rows-field';
 
@@ -51,8 +52,18 @@ export interface SchemaFieldProps {
   currency?: string;
 }
 
+/** One input of a kind from its JSON Schema, with any review remarks anchored to it beneath. */
+export function SchemaField(props: SchemaFieldProps) {
+  return (
+    <>
+      <SchemaFieldControl {...props} />
+      <FieldRemarks path={props.path} />
+    </>
+  );
+}
+
 /** One input of a kind, rendered from its JSON Schema: objects, variants, quantities, choices. */
-export function SchemaField({
+function SchemaFieldControl({
   name,
   path,
   schema,

@@ -1,14 +1,25 @@
-import { Alert, App, Button, Card, Input, Space } from 'antd';
+import { Alert, App, Button, Card, Divider, Input, Space } from 'antd';
+import type { UnitSystem } from '@loftwright/buoyancy';
 import { useState } from 'react';
 import { useDecide } from '../api/reviews-api';
+import { ReviewCommentForm } from './review-comment-form';
 
 /** Approve, or send back with a comment (required), one version waiting for review. */
 export function ReviewDecision({
   calculationId,
   number,
+  kind,
+  inputs,
+  outputs,
+  unitSystem,
 }: {
   calculationId: string;
   number: number;
+  /** The version under review, for comments anchored to its inputs and results. */
+  kind: string;
+  inputs: unknown;
+  outputs: Record<string, { label: string }>;
+  unitSystem: UnitSystem;
 }) {
   const { message } = App.useApp();
   const decide = useDecide(calculationId);
@@ -33,6 +44,15 @@ export function ReviewDecision({
   return (
     <Card title={`Review version ${number}`} size="small" style={{ marginBottom: 16 }}>
       <Space orientation="vertical" style={{ width: '100%' }}>
+        <ReviewCommentForm
+          calculationId={calculationId}
+          number={number}
+          kind={kind}
+          inputs={inputs}
+          outputs={outputs}
+          unitSystem={unitSystem}
+        />
+        <Divider style={{ margin: '8px 0' }} />
         <Input.TextArea
           aria-label="Review comment"
           placeholder="Comment (required when sending back)"
