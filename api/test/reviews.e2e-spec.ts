@@ -111,6 +111,17 @@ describe('review and sign-off', () => {
     expect(Object.keys(answer.body[0]).sort()).toEqual(['displayName', 'id']);
   });
 
+  it('refuses an approval with a time zone that does not exist, naming timeZone', async () => {
+    const id = await newCalculation();
+    await http().post(`/api/calculations/${id}/versions/1/submit`).set(designer.auth).send({});
+    const answer = await http()
+      .post(`/api/calculations/${id}/versions/1/approve`)
+      .set(reviewer.auth)
+      .send({ timeZone: 'Mars/Olympus_Mons' });
+    expect(answer.status).toBe(400);
+    expect(answer.body.field).toBe('timeZone');
+  });
+
   it('never lets authors review their own version', async () => {
     const id = await newCalculation(designerReviewer);
     await http()

@@ -59,7 +59,7 @@ describe('the archived sign-off PDF of an approved version', () => {
     const approved = await http()
       .post(`/api/calculations/${calculationId}/versions/1/approve`)
       .set(reviewer.auth)
-      .send({ comment: 'Envelope mass weighed twice.' });
+      .send({ comment: 'Envelope mass weighed twice.', timeZone: 'Asia/Kolkata' });
     expect(approved.status).toBe(200);
     fingerprint = approved.body.fingerprint;
   });
@@ -125,6 +125,8 @@ describe('the archived sign-off PDF of an approved version', () => {
       expect(text).toContain(shown);
     expect(text).not.toMatch(/diameterM|gasId|temperatureK|pressurePa|envelope\./);
     expect(text).toContain(`https://loft.example.org/verify/${fingerprint}`);
+    // The approval in the approver's zone (India, UTC+5:30 all year) and in UTC.
+    expect(text).toMatch(/GMT\+5:30 \(Asia\/Kolkata\),\s+\d\d:\d\d\s+UTC/);
     // The whole fingerprint on every page's footer.
     const pages = text.split('\f').filter((page) => page.trim() !== '');
     for (const page of pages) expect(page).toContain(fingerprint);

@@ -40,7 +40,7 @@ export class ReviewsController {
     @Body() body: ApproveVersionDto,
     @RequestOrigin() origin: string,
   ) {
-    return this.reviewsService.approve(user, id, n, body.comment ?? '', origin);
+    return this.reviewsService.approve(user, id, n, body.comment ?? '', origin, body.timeZone);
   }
 
   @Post('calculations/:id/versions/:n/send-back')

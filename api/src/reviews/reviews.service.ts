@@ -116,8 +116,15 @@ export class ReviewsService {
     return this.calculationsService.version(user, id, number);
   }
 
-  approve(user: AuthUser, id: string, number: number, comment: string, origin: string) {
-    return this.decide(user, id, number, 'approved', comment, origin);
+  approve(
+    user: AuthUser,
+    id: string,
+    number: number,
+    comment: string,
+    origin: string,
+    approverTimeZone?: string,
+  ) {
+    return this.decide(user, id, number, 'approved', comment, origin, approverTimeZone);
   }
 
   sendBack(user: AuthUser, id: string, number: number, comment: string, origin: string) {
@@ -136,6 +143,7 @@ export class ReviewsService {
     decision: ReviewDecision,
     comment: string,
     origin: string,
+    approverTimeZone?: string,
   ) {
     if (!hasRole(user, 'reviewer'))
       throw new ForbiddenException({ message: 'Reviewing needs the reviewer role.' });
@@ -206,6 +214,7 @@ export class ReviewsService {
             comment,
             new Date(),
             verifyUrl(this.baseUrl(origin), version.fingerprint),
+            approverTimeZone,
           )
         : undefined;
     if (author) {

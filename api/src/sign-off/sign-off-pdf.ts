@@ -26,7 +26,8 @@ export interface SignOffContent {
     source: string;
   }[];
   warnings: { severity: string; message: string }[];
-  review?: { reviewer: string; decidedAt: Date; comment: string };
+  /** The approval; `timeZone` the approver's (IANA), when their browser said it. */
+  review?: { reviewer: string; decidedAt: Date; comment: string; timeZone?: string };
   /** The verify page of the fingerprint, with host; printed and drawn as a QR code. */
   verifyUrl: string;
 }
@@ -47,6 +48,29 @@ export function utcText(moment: Date): string {
     timeStyle: 'short',
     timeZone: 'UTC',
   }).format(moment)} UTC`;
+}
+
+/**
+ * "4 December 2026 at 02:10 GMT+1 (Europe/Berlin), 01:10 UTC": the approval in the approver's
+ * zone with its offset, and in UTC; UTC alone when the zone is not known.
+ */
+export function approvalMomentText(moment: Date, timeZone?: string): string {
+  if (!timeZone) return utcText(moment);
+  const local = new Intl.DateTimeFormat('en-GB', {
+    year: 'numeric',
+    month: 'long',
+    day: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+    timeZone,
+    timeZoneName: 'shortOffset',
+  }).format(moment);
+  const utcTime = new Intl.DateTimeFormat('en-GB', {
+    hour: '2-digit',
+    minute: '2-digit',
+    timeZone: 'UTC',
+  }).format(moment);
+  return `${local} (${timeZone}), ${utcTime} UTC`;
 }
 
 /** A 64-character fingerprint in four groups of 16, so a printed copy is read without losing place. */
@@ -145,7 +169,11 @@ export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer>
     10,
   );
   if (content.review) {
-    write(`Approved ${utcText(content.review.decidedAt)} by ${content.review.reviewer}`, bold, 10);
+    write(
+      `Approved ${approvalMomentText(content.review.decidedAt, content.review.timeZone)} by ${content.review.reviewer}`,
+      bold,
+      10,
+    );
   }
   doc.moveDown(0.3);
   // The QR code of the verify page sits right of the fingerprint; the URL runs the full width
@@ -215,7 +243,7 @@ export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer>
   heading('Review');
   if (content.review) {
     row('Approved by', content.review.reviewer, sans);
-    row('Approved at', utcText(content.review.decidedAt), sans);
+    row('Approved at', approvalMomentText(content.review.decidedAt, content.review.timeZone), sans);
     row('Comment', content.review.comment || '(none)', sans);
   } else {
     write('Not approved: this sheet records the version only.', sans, 10);

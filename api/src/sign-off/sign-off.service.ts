@@ -38,6 +38,7 @@ export class SignOffService {
     comment: string,
     decidedAt: Date,
     verifyUrl: string,
+    approverTimeZone?: string,
   ): Promise<{ attachment: AttachmentView; bytes: Buffer } | undefined> {
     const content: SignOffContent = {
       title: calculation.title,
@@ -53,7 +54,12 @@ export class SignOffService {
       outputs: version.outputs as SignOffContent['outputs'],
       steps: version.steps as SignOffContent['steps'],
       warnings: version.warnings as SignOffContent['warnings'],
-      review: { reviewer: people.reviewer, decidedAt, comment },
+      review: {
+        reviewer: people.reviewer,
+        decidedAt,
+        comment,
+        ...(approverTimeZone ? { timeZone: approverTimeZone } : {}),
+      },
       verifyUrl,
       inputSections: describeInputs(
         KINDS.find((kind) => kind.id === calculation.kind)?.inputSchema,

@@ -1,6 +1,6 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
-import { IsOptional, IsString, IsUUID, MaxLength, MinLength } from 'class-validator';
+import { IsOptional, IsString, IsUUID, MaxLength, MinLength, ValidateBy } from 'class-validator';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 
@@ -13,6 +13,17 @@ export class SubmitVersionDto {
   reviewerId?: string;
 }
 
+/** Whether the runtime knows an IANA time zone name ("Europe/Berlin"). */
+const isTimeZone = (value: unknown) => {
+  if (typeof value !== 'string' || value.length > 64) return false;
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: value });
+    return true;
+  } catch {
+    return false;
+  }
+};
+
 export class ApproveVersionDto {
   @ApiPropertyOptional({ example: 'Checked against the fill log of the test envelope.' })
   @IsOptional()
@@ -20,6 +31,21 @@ export class ApproveVersionDto {
   @IsString()
   @MaxLength(4000)
   comment?: string;
+
+  @ApiPropertyOptional({
+    example: 'Europe/Berlin',
+    description:
+      'the approver’s time zone (IANA): the archived sheet gives the time in it and in UTC',
+  })
+  @IsOptional()
+  @ValidateBy({
+    name: 'isTimeZone',
+    validator: {
+      validate: isTimeZone,
+      defaultMessage: () => 'timeZone must be a time zone name such as Europe/Berlin',
+    },
+  })
+  timeZone?: string;
 }
 
 export class SendBackVersionDto {

@@ -32,9 +32,13 @@ export function useDecide(calculationId: string) {
       comment: string;
     }) =>
       (
-        await apiClient.post(`/calculations/${calculationId}/versions/${number}/${decision}`, {
-          comment,
-        })
+        await apiClient.post(
+          `/calculations/${calculationId}/versions/${number}/${decision}`,
+          decision === 'approve'
+            ? // The archived sheet gives the approval in the approver's zone as well as UTC.
+              { comment, timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone }
+            : { comment },
+        )
       ).data,
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: ['calculations'] });
