@@ -1,6 +1,7 @@
 import { Alert, Space, Spin, Tabs, Tag, Typography } from 'antd';
 import type { CalculationResult, DerivationStep } from '@loftwright/buoyancy';
 import { lazy, Suspense, useState } from 'react';
+import { PanelBoundary } from '@/components/errors/panel-boundary';
 import { Link, useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/auth-api';
@@ -42,14 +43,16 @@ export function ExampleRoute() {
   const teaching = data.standing !== 'student';
   const wrongStepId = data.mySubmissions[0]?.check.firstWrongStepId ?? null;
   const chart = data.revealed ? (
-    <Suspense fallback={<Spin description="Loading the chart…" />}>
-      <CalculationCharts
-        kind={data.kind}
-        inputs={data.inputs}
-        result={chartResult(data)}
-        unitSystem={unitSystem}
-      />
-    </Suspense>
+    <PanelBoundary what="the chart">
+      <Suspense fallback={<Spin description="Loading the chart…" />}>
+        <CalculationCharts
+          kind={data.kind}
+          inputs={data.inputs}
+          result={chartResult(data)}
+          unitSystem={unitSystem}
+        />
+      </Suspense>
+    </PanelBoundary>
   ) : undefined;
 
   const items = [
@@ -57,28 +60,32 @@ export function ExampleRoute() {
       key: 'walk',
       label: 'Walk through',
       children: (
-        <WalkThrough
-          key={`${data.id}-${data.revealed}`}
-          title={data.title}
-          steps={data.steps}
-          notes={data.stepNotes}
-          chart={chart}
-          chartStepId={data.chartStepId}
-          wrongStepId={wrongStepId}
-        />
+        <PanelBoundary what="the walk-through">
+          <WalkThrough
+            key={`${data.id}-${data.revealed}`}
+            title={data.title}
+            steps={data.steps}
+            notes={data.stepNotes}
+            chart={chart}
+            chartStepId={data.chartStepId}
+            wrongStepId={wrongStepId}
+          />
+        </PanelBoundary>
       ),
     },
     {
       key: 'try',
       label: 'Try it yourself',
       children: data.revealed ? (
-        <TryItYourself
-          kind={data.kind}
-          inputs={data.inputs}
-          outputs={data.outputs}
-          ranges={data.tryRanges}
-          unitSystem={unitSystem}
-        />
+        <PanelBoundary what="try it yourself">
+          <TryItYourself
+            kind={data.kind}
+            inputs={data.inputs}
+            outputs={data.outputs}
+            ranges={data.tryRanges}
+            unitSystem={unitSystem}
+          />
+        </PanelBoundary>
       ) : (
         <Alert
           type="info"
@@ -92,7 +99,11 @@ export function ExampleRoute() {
           {
             key: 'exercise',
             label: 'Exercise',
-            children: <ExercisePanel example={data} unitSystem={unitSystem} />,
+            children: (
+              <PanelBoundary what="the exercise">
+                <ExercisePanel example={data} unitSystem={unitSystem} />
+              </PanelBoundary>
+            ),
           },
         ]
       : []),

@@ -11,6 +11,7 @@ import {
 import { CalculationEditor } from '@/features/calculations/components/calculation-editor';
 import { VersionCompare } from '@/features/calculations/components/version-compare';
 import { VersionHistory } from '@/features/calculations/components/version-history';
+import { PanelBoundary } from '@/components/errors/panel-boundary';
 import { FieldRemarksContext } from '@/components/reading/field-remarks';
 import { useReviewComments } from '@/features/reviews/api/reviews-api';
 import { ReviewCommentsPanel } from '@/features/reviews/components/review-comments-panel';
@@ -102,23 +103,27 @@ export function CalculationEditorRoute() {
       </FieldRemarksContext.Provider>
       {calculation.data && user ? (
         <Suspense fallback={null}>
-          <FillLogsPanel
-            calculationId={id}
-            latestVersion={calculation.data.latestVersion}
-            predicts={calculation.data.kind === 'lift-check'}
-            canEdit={mayWrite}
-            unitSystem={user.unitSystem}
-            filesFor={(log) => (
-              <AttachmentsPanel
-                calculationId={id}
-                fillLogId={log.id}
-                title="Files of this fill"
-                canUpload={mayWrite}
-                canRemove={mayRemove}
-              />
-            )}
-          />
-          <AttachmentsPanel calculationId={id} canUpload={mayWrite} canRemove={mayRemove} />
+          <PanelBoundary what="the fill logs">
+            <FillLogsPanel
+              calculationId={id}
+              latestVersion={calculation.data.latestVersion}
+              predicts={calculation.data.kind === 'lift-check'}
+              canEdit={mayWrite}
+              unitSystem={user.unitSystem}
+              filesFor={(log) => (
+                <AttachmentsPanel
+                  calculationId={id}
+                  fillLogId={log.id}
+                  title="Files of this fill"
+                  canUpload={mayWrite}
+                  canRemove={mayRemove}
+                />
+              )}
+            />
+          </PanelBoundary>
+          <PanelBoundary what="the files">
+            <AttachmentsPanel calculationId={id} canUpload={mayWrite} canRemove={mayRemove} />
+          </PanelBoundary>
         </Suspense>
       ) : null}
       {calculation.data ? (

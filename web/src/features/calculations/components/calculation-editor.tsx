@@ -26,6 +26,7 @@ import { ConflictDialog, type SaveConflict } from './conflict-dialog';
 import { MeterImport } from './meter-import';
 import { DerivationPanel } from '@/components/results/derivation-panel';
 import { ResultsPanel } from '@/components/results/results-panel';
+import { PanelBoundary } from '@/components/errors/panel-boundary';
 import { SchemaField } from './schema-form';
 import { useReadingPreferences } from '@/components/reading/reading-preferences';
 import {
@@ -379,14 +380,16 @@ export function EditorBody({
             problem={heldBack ?? live.problem}
           />
           {live.result && deferredInputs ? (
-            <Suspense fallback={<Spin description="Drawing the charts…" />}>
-              <CalculationCharts
-                kind={kind}
-                inputs={deferredInputs as Record<string, unknown>}
-                result={live.result}
-                unitSystem={unitSystem}
-              />
-            </Suspense>
+            <PanelBoundary what="the charts">
+              <Suspense fallback={<Spin description="Drawing the charts…" />}>
+                <CalculationCharts
+                  kind={kind}
+                  inputs={deferredInputs as Record<string, unknown>}
+                  result={live.result}
+                  unitSystem={unitSystem}
+                />
+              </Suspense>
+            </PanelBoundary>
           ) : null}
         </Col>
         <Col xs={24} lg={8}>
