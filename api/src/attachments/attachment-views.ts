@@ -1,3 +1,4 @@
+import { type AuthUser, hasRole } from '../auth/auth-user';
 import type { Attachment } from './attachment.entity';
 
 export interface AttachmentView {
@@ -12,11 +13,14 @@ export interface AttachmentView {
   uploadedBy: { id: string; displayName: string } | null;
   createdAt: string;
   contentUrl: string;
+  /** What the signed-in user may do with it. */
+  permissions: { remove: boolean };
 }
 
 export function attachmentView(
   attachment: Attachment,
   uploader: { id: string; displayName: string } | null,
+  permissions: { remove: boolean },
 ): AttachmentView {
   return {
     id: attachment.id,
@@ -30,5 +34,18 @@ export function attachmentView(
     uploadedBy: uploader,
     createdAt: attachment.createdAt.toISOString(),
     contentUrl: `/api/attachments/${attachment.id}/content`,
+    permissions,
   };
+}
+
+/**
+ * The uploader or an admin removes a file; an archived sign-off (a file of a version) only an
+ * admin removes.
+ */
+export function canRemoveAttachment(
+  user: AuthUser,
+  attachment: Pick<Attachment, 'uploadedBy' | 'versionNumber'>,
+): boolean {
+  if (hasRole(user, 'admin')) return true;
+  return attachment.uploadedBy === user.id && attachment.versionNumber === null;
 }

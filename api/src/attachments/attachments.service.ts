@@ -9,15 +9,15 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
-import { type AuthUser, hasRole } from '../auth/auth-user';
-import { canEdit } from '../calculations/calculation-access';
+import type { AuthUser } from '../auth/auth-user';
+import { canAddFiles } from '../calculations/calculation-access';
 import { CalculationsService } from '../calculations/calculations.service';
 import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
 import { FillLog } from '../fill-logs/fill-log.entity';
 import { UsersService } from '../users/users.service';
 import { Attachment } from './attachment.entity';
-import { attachmentView, type AttachmentView } from './attachment-views';
+import { attachmentView, type AttachmentView, canRemoveAttachment } from './attachment-views';
 import { cleanFileName } from './file-name';
 import { sniffMediaType } from './media-type';
 import type { StagedFile } from './staging-storage';
@@ -35,9 +35,14 @@ export class AttachmentsService {
     private readonly writeLock: WriteLock,
   ) {}
 
-  private async views(rows: Attachment[]): Promise<AttachmentView[]> {
+  /** Attachments as answered, each with what `viewer` may do with it (nothing when unknown). */
+  private async views(rows: Attachment[], viewer: AuthUser | null): Promise<AttachmentView[]> {
     const names = await this.users.names(rows.map((row) => row.uploadedBy));
-    return rows.map((row) => attachmentView(row, names(row.uploadedBy)));
+    return rows.map((row) =>
+      attachmentView(row, names(row.uploadedBy), {
+        remove: viewer !== null && canRemoveAttachment(viewer, row),
+      }),
+    );
   }
 
   /**
@@ -53,7 +58,7 @@ export class AttachmentsService {
   ): Promise<AttachmentView> {
     try {
       const calculation = await this.calculations.findReadable(user, calculationId);
-      if (!canEdit(user, calculation) && !hasRole(user, 'admin')) {
+      if (!canAddFiles(user, calculation)) {
         throw new ForbiddenException({
           message: 'Only the calculation’s owner or an admin adds files to it.',
         });
@@ -153,7 +158,8 @@ export class AttachmentsService {
       detail: { attachmentId: id, fileName: meta.fileName, mediaType: meta.mediaType, sha256 },
     });
     const found = await this.attachments.findOneByOrFail({ id });
-    return (await this.views([found]))[0] as AttachmentView;
+    const viewer = user && 'roles' in user ? (user as AuthUser) : null;
+    return (await this.views([found], viewer))[0] as AttachmentView;
   }
 
   async list(user: AuthUser, calculationId: string, fillLogId?: string): Promise<AttachmentView[]> {
@@ -162,7 +168,7 @@ export class AttachmentsService {
       where: { calculationId, ...(fillLogId ? { fillLogId } : {}) },
       order: { createdAt: 'ASC' },
     });
-    return this.views(rows);
+    return this.views(rows, user);
   }
 
   /** The attachment if its calculation is readable by the user; otherwise 404. */
@@ -187,12 +193,12 @@ export class AttachmentsService {
 
   async remove(user: AuthUser, id: string): Promise<void> {
     const attachment = await this.findReadable(user, id);
-    if (attachment.uploadedBy !== user.id && !hasRole(user, 'admin')) {
-      throw new ForbiddenException({ message: 'Only the uploader or an admin removes a file.' });
-    }
-    if (attachment.versionNumber !== null && !hasRole(user, 'admin')) {
+    if (!canRemoveAttachment(user, attachment)) {
       throw new ForbiddenException({
-        message: 'The archived sign-off of an approved version stays; only an admin removes it.',
+        message:
+          attachment.versionNumber !== null
+            ? 'The archived sign-off of an approved version stays; only an admin removes it.'
+            : 'Only the uploader or an admin removes a file.',
       });
     }
     await this.removeRecord(attachment);

@@ -6,8 +6,8 @@ import {
   Injectable,
 } from '@nestjs/common';
 import type { Request } from 'express';
-import { type AuthUser, hasRole } from '../auth/auth-user';
-import { canEdit } from '../calculations/calculation-access';
+import type { AuthUser } from '../auth/auth-user';
+import { canAddFiles } from '../calculations/calculation-access';
 import { CalculationsService } from '../calculations/calculations.service';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -28,7 +28,7 @@ export class UploadAccessGuard implements CanActivate {
       throw new BadRequestException({ message: 'id must be a UUID', field: 'id' });
     }
     const calculation = await this.calculations.findReadable(request.user, id);
-    if (!canEdit(request.user, calculation) && !hasRole(request.user, 'admin')) {
+    if (!canAddFiles(request.user, calculation)) {
       throw new ForbiddenException({
         message: 'Only the calculation’s owner or an admin adds files to it.',
       });

@@ -13,7 +13,7 @@ import { insertRow } from '../database/insert-row';
 import { WriteLock } from '../database/write-lock';
 import { AUTHOR_ROLES, TEAM_ROLES } from '../users/roles';
 import { UsersService } from '../users/users.service';
-import { canArchive, canEdit, canRead } from './calculation-access';
+import { calculationPermissions, canArchive, canEdit, canRead } from './calculation-access';
 import { CalculationVersion } from './calculation-version.entity';
 import { calculationSummary, versionDetail, versionSummary } from './calculation-views';
 import { Calculation } from './calculation.entity';
@@ -171,7 +171,7 @@ export class CalculationsService {
       ...calculationSummary(calculation, names),
       versions: versions.map((version) => versionSummary(version, names)),
       latest: latest ? versionDetail(latest, names) : null,
-      permissions: { edit: canEdit(user, calculation), archive: canArchive(user, calculation) },
+      permissions: calculationPermissions(user, calculation, latest),
     };
   }
 

@@ -48,26 +48,13 @@ export function CalculationEditorRoute() {
     }
     return byPath;
   }, [comments.data]);
-  const mayReview =
-    user !== undefined &&
-    latest !== null &&
-    latest !== undefined &&
-    user.roles.includes('reviewer') &&
-    latest.status === 'in_review' &&
-    latest.author?.id !== user.id &&
-    (latest.reviewer === null || latest.reviewer.id === user.id);
-  const mayWrite = Boolean(
-    user && calculation.data && (calculation.data.permissions.edit || user.roles.includes('admin')),
-  );
-  const mayRemove = (file: Attachment) =>
-    Boolean(
-      user &&
-      (user.roles.includes('admin') ||
-        (file.uploadedBy?.id === user.id && file.versionNumber === null)),
-    );
+  // What this user may do comes with the calculation and each file: the API owns the rules.
+  const mayReview = Boolean(latest && calculation.data?.permissions.review);
+  const mayWrite = Boolean(calculation.data?.permissions.upload);
+  const mayRemove = (file: Attachment) => file.permissions.remove;
   return (
     <>
-      {mayReview ? (
+      {mayReview && latest ? (
         <ReviewDecision
           calculationId={id}
           number={latest.number}

@@ -14,6 +14,8 @@ export interface Attachment {
   uploadedBy: { id: string; displayName: string } | null;
   createdAt: string;
   contentUrl: string;
+  /** What the signed-in user may do with it, as the API decides. */
+  permissions: { remove: boolean };
 }
 
 const listKey = (calculationId: string) => ['attachments', calculationId];

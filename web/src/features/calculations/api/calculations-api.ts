@@ -54,7 +54,15 @@ export interface VersionDetail extends VersionSummary {
 export interface CalculationDetail extends CalculationSummary {
   versions: VersionSummary[];
   latest: VersionDetail | null;
-  permissions: { edit: boolean; archive: boolean };
+  /** What the signed-in user may do with it (api/src/calculations/calculation-access.ts). */
+  permissions: {
+    edit: boolean;
+    archive: boolean;
+    submit: boolean;
+    review: boolean;
+    upload: boolean;
+    export: boolean;
+  };
 }
 
 export interface CalculationPage {

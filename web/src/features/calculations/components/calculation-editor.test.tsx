@@ -43,7 +43,14 @@ const detail: CalculationDetail = {
     warnings: stored.warnings,
     series: null,
   },
-  permissions: { edit: true, archive: true },
+  permissions: {
+    edit: true,
+    archive: true,
+    submit: true,
+    review: false,
+    upload: true,
+    export: true,
+  },
 };
 
 const renderEditor = () =>

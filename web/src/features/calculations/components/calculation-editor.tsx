@@ -358,7 +358,7 @@ export function EditorBody({
                   >
                     Save as version {detail.latestVersion + 1}
                   </Button>
-                  {detail.status === 'draft' && !dirty ? (
+                  {detail.permissions.submit && !dirty ? (
                     <SubmitForReview calculationId={id} versionNumber={detail.latestVersion} />
                   ) : null}
                 </Space>
