@@ -94,10 +94,12 @@ describe('a designer’s editor and list: stale saves, unsaved changes, units, q
         dialog().getByRole('columnheader', { name: 'Theirs (version 2)' }).first().isVisible(),
       )
       .toBe(true);
-    const diameterRow = dialog().getByRole('row', { name: /envelope\.diameterM/ });
-    expect(await diameterRow.textContent()).toMatch(/1\.2.*2/);
-    const payloadRow = dialog().getByRole('row', { name: /payloadMassKg/ });
-    expect(await payloadRow.textContent()).toMatch(/0\.55.*0\.4/);
+    // By the label the editor shows, each row in one unit, never the internal path.
+    const diameterRow = dialog().getByRole('row', { name: /^Diameter/ });
+    expect(await diameterRow.textContent()).toMatch(/1\.2 m.*2 m/);
+    const payloadRow = dialog().getByRole('row', { name: /^Payload hanging below the envelope/ });
+    expect(await payloadRow.textContent()).toMatch(/550 g.*400 g/);
+    expect(await dialog().innerText()).not.toMatch(/diameterM|payloadMassKg/);
     expect(await dialog().getByText('“Payload weighed again”', { exact: false }).isVisible()).toBe(
       true,
     );

@@ -12,6 +12,7 @@ import {
   type GasSupplyInput,
   planGas,
   sphereGeometry,
+  kindCapabilities,
 } from '@loftwright/buoyancy';
 import { randomUUID } from 'node:crypto';
 import { Repository } from 'typeorm';
@@ -58,9 +59,13 @@ export class PlansService {
               field: `lines.${index}.versionNumber`,
             });
           });
-          const volume = (
-            version.outputs as Record<string, { value: number; unit: string } | undefined>
-          ).volume;
+          // Which result is the envelope's volume is the kind's to say (engine capabilities).
+          const volumeOutput = kindCapabilities(calculation.kind).volumeOutput;
+          const volume = volumeOutput
+            ? (version.outputs as Record<string, { value: number; unit: string } | undefined>)[
+                volumeOutput
+              ]
+            : undefined;
           if (!volume || volume.unit !== 'm³') {
             throw new UnprocessableEntityException({
               message: `lines.${index}: "${calculation.title}" gives no envelope volume (a lift check, sizing or geometry does).`,

@@ -30,8 +30,16 @@ export type {
   StandardAtmosphereState,
 } from './atmosphere/standard-atmosphere.js';
 export * from './constants.js';
-export { evaluate, isKindId, KIND_IDS, KINDS, normaliseInputs } from './kinds/registry.js';
+export {
+  evaluate,
+  isKindId,
+  KIND_IDS,
+  kindCapabilities,
+  KINDS,
+  normaliseInputs,
+} from './kinds/registry.js';
 export type { EvaluateOptions, KindDescription, KindId } from './kinds/registry.js';
+export type { KindCapabilities, KindChart } from './kinds/kind.js';
 export { CHECK_THIS, plausibilityNotes } from './schema/plausibility.js';
 export { USUAL } from './schema/usual-ranges.js';
 export type { LiftCheckInput } from './kinds/lift-check.kind.js';

@@ -144,6 +144,12 @@ const SIZE_LABEL: Record<ShapeFamily['shape'], string> = {
 
 export const envelopeSizingKind = defineKind({
   id: 'envelope-sizing',
+  capabilities: {
+    charts: ['sizing-sweep'],
+    volumeOutput: 'volume',
+    predictsFillLift: false,
+    meterImport: false,
+  },
   title: 'Envelope sizing',
   description:
     'The size an envelope must have to lift a payload with a wanted free lift or initial ascent rate, its mass when made of a film of given areal density, and the gas it takes.',

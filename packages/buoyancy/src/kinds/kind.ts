@@ -1,6 +1,30 @@
 import type * as z from 'zod';
 import type { CalculationResult } from '../derivation.js';
 
+/** Charts the web draws for a kind beyond a flight's series (which any kind with `series` gets). */
+export type KindChart = 'lift-sweeps' | 'sizing-sweep' | 'supply-cost';
+
+/**
+ * What a kind offers besides its results, so the web and the API read it here rather than
+ * switching on kind ids.
+ */
+export interface KindCapabilities {
+  /** Charts drawn from its inputs and results. */
+  readonly charts: readonly KindChart[];
+  /** The result that is an envelope volume a gas plan can fill, if it gives one. */
+  readonly volumeOutput?: string;
+  /** Fill logs of it compare the measured lift with its predicted net lift. */
+  readonly predictsFillLift: boolean;
+  /** Its metered energy can be read from an energy-meter log (CSV). */
+  readonly meterImport: boolean;
+}
+
+export const NO_CAPABILITIES: KindCapabilities = {
+  charts: [],
+  predictsFillLift: false,
+  meterImport: false,
+};
+
 /** One kind of calculation: its inputs (schema with ranges and units), an example, and its rule. */
 export interface CalculationKind<S extends z.ZodType = z.ZodType> {
   readonly id: string;
@@ -9,6 +33,8 @@ export interface CalculationKind<S extends z.ZodType = z.ZodType> {
   readonly schema: S;
   /** A valid input, for documentation, forms and tests. Not demo data. */
   readonly example: z.input<S>;
+  /** What it offers besides results; none when left out. */
+  readonly capabilities?: KindCapabilities;
   compute(inputs: z.output<S>): CalculationResult;
 }
 

@@ -59,6 +59,12 @@ export function warnAboutLift(d: Derivation, lift: LiftMasses, gasName: string):
 
 export const liftCheckKind = defineKind({
   id: 'lift-check',
+  capabilities: {
+    charts: ['lift-sweeps'],
+    volumeOutput: 'volume',
+    predictsFillLift: true,
+    meterImport: false,
+  },
   title: 'Lift check',
   description:
     'Gross, net and free lift of a given envelope, gas and payload in the given air, with the masses of displaced air and gas.',

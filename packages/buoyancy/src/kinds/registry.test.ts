@@ -51,3 +51,24 @@ describe('the kind registry', () => {
     }
   });
 });
+
+describe('kind capabilities', () => {
+  it('names, for every kind that offers a volume, a result in m³ its example gives', async () => {
+    const { KINDS, evaluate, kindCapabilities } = await import('./registry.js');
+    const withVolume = KINDS.filter((kind) => kind.capabilities.volumeOutput);
+    expect(withVolume.map((kind) => kind.id).sort()).toEqual([
+      'envelope-geometry',
+      'envelope-sizing',
+      'lift-check',
+    ]);
+    for (const kind of withVolume) {
+      const output = evaluate(kind.id, kind.example).outputs[kind.capabilities.volumeOutput ?? ''];
+      expect(output?.unit, kind.id).toBe('m³');
+    }
+    expect(kindCapabilities('no-such-kind')).toEqual({
+      charts: [],
+      predictsFillLift: false,
+      meterImport: false,
+    });
+  });
+});

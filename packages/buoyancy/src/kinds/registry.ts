@@ -10,7 +10,7 @@ import { envelopeGeometryKind } from './envelope-geometry.kind.js';
 import { envelopeSizingKind } from './envelope-sizing.kind.js';
 import { flightProfileKind } from './flight-profile.kind.js';
 import { gasSupplyKind } from './gas-supply.kind.js';
-import type { CalculationKind } from './kind.js';
+import { type CalculationKind, type KindCapabilities, NO_CAPABILITIES } from './kind.js';
 import { liftCheckKind } from './lift-check.kind.js';
 import { liftingGasKind } from './lifting-gas.kind.js';
 import { liftMeasurementKind } from './lift-measurement.kind.js';
@@ -37,6 +37,7 @@ export interface KindDescription {
   /** JSON Schema (draft 2020-12) of the inputs; numbers carry `unit`, `minimum`, `maximum`. */
   readonly inputSchema: Record<string, unknown>;
   readonly example: unknown;
+  readonly capabilities: KindCapabilities;
 }
 
 const byId = new Map<string, CalculationKind>(
@@ -71,6 +72,7 @@ export const KINDS: readonly KindDescription[] = KIND_LIST.map((kind) => ({
     >;
   },
   example: kind.example,
+  capabilities: kind.capabilities ?? NO_CAPABILITIES,
 }));
 
 export const KIND_IDS = KIND_LIST.map((kind) => kind.id) as readonly KindId[];
@@ -113,4 +115,9 @@ export function normaliseInputs(kindId: string, inputs: unknown): unknown {
   const kind = byId.get(kindId);
   if (!kind) throw new InputError('kind', kindId, `must be one of: ${[...byId.keys()].join(', ')}`);
   return parseInputs(kind.schema, inputs);
+}
+
+/** What a kind offers besides its results; nothing for an id the engine does not know. */
+export function kindCapabilities(id: string): KindCapabilities {
+  return byId.get(id)?.capabilities ?? NO_CAPABILITIES;
 }

@@ -1,4 +1,5 @@
 import { App, Button, Space, Typography } from 'antd';
+import { kindCapabilities } from '@loftwright/buoyancy';
 import { lazy, Suspense, useMemo } from 'react';
 import { useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
@@ -94,7 +95,7 @@ export function CalculationEditorRoute() {
             <FillLogsPanel
               calculationId={id}
               latestVersion={calculation.data.latestVersion}
-              predicts={calculation.data.kind === 'lift-check'}
+              predicts={kindCapabilities(calculation.data.kind).predictsFillLift}
               canEdit={mayWrite}
               unitSystem={user.unitSystem}
               filesFor={(log) => (

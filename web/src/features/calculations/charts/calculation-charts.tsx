@@ -1,4 +1,4 @@
-import type { CalculationResult, UnitSystem } from '@loftwright/buoyancy';
+import { type CalculationResult, kindCapabilities, type UnitSystem } from '@loftwright/buoyancy';
 import { useMemo } from 'react';
 import { FlightChart } from './flight-chart';
 import { airTemperatureSweep, puritySweep, sizeSweep, sizingSweep } from './lift-sweeps';
@@ -19,12 +19,19 @@ export function CalculationCharts({
   result: CalculationResult;
   unitSystem: UnitSystem;
 }) {
-  const sweeps = useMemo(() => {
-    if (kind === 'lift-check')
-      return [sizeSweep(inputs), airTemperatureSweep(inputs), puritySweep(inputs)];
-    if (kind === 'envelope-sizing') return [sizingSweep(inputs, result.outputs.size?.value)];
-    return [];
-  }, [kind, inputs, result]);
+  // Which charts a kind has is the engine's to say (kindCapabilities), not a switch on its id.
+  const offered = kindCapabilities(kind).charts;
+  const sweeps = useMemo(
+    () => [
+      ...(offered.includes('lift-sweeps')
+        ? [sizeSweep(inputs), airTemperatureSweep(inputs), puritySweep(inputs)]
+        : []),
+      ...(offered.includes('sizing-sweep')
+        ? [sizingSweep(inputs, result.outputs.size?.value)]
+        : []),
+    ],
+    [offered, inputs, result],
+  );
   const charts = [
     ...sweeps.map((sweep) =>
       sweep ? <SweepChart key={sweep.id} sweep={sweep} unitSystem={unitSystem} /> : null,
@@ -32,7 +39,9 @@ export function CalculationCharts({
     result.series ? (
       <FlightChart key="flight" series={result.series} outputs={result.outputs} />
     ) : null,
-    kind === 'gas-supply' ? <SupplyCostChart key="cost" result={result} inputs={inputs} /> : null,
+    offered.includes('supply-cost') ? (
+      <SupplyCostChart key="cost" result={result} inputs={inputs} />
+    ) : null,
   ].filter((chart) => chart !== null);
   if (charts.length === 0) return null;
   return <section aria-label="Charts">{charts}</section>;

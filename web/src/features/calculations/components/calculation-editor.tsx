@@ -4,6 +4,7 @@ import {
   evaluate,
   InputError,
   inputFieldInfo,
+  kindCapabilities,
   KINDS,
   normaliseInputs,
   readableIssue,
@@ -325,7 +326,7 @@ export function EditorBody({
                 />
               </UnreadableFieldsContext.Provider>
             </Form>
-            {editable && kind === 'gas-supply' ? (
+            {editable && kindCapabilities(kind).meterImport ? (
               <Button style={{ marginBottom: 12 }} onClick={() => setMeterOpen(true)}>
                 Energy from a meter log (CSV)
               </Button>

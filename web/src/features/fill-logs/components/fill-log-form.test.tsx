@@ -1,4 +1,4 @@
-import { fireEvent, screen } from '@testing-library/react';
+import { fireEvent, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { useState } from 'react';
 import { describe, expect, it } from 'vitest';
@@ -70,22 +70,27 @@ describe('the fill-log form', () => {
     await user.type(screen.getByLabelText('Reading 1 ballast mass'), '3 kg');
     await user.type(screen.getByLabelText('Reading 1 scale reading'), '1.05 kg');
     const save = screen.getByRole('button', { name: 'Save fill log' });
-    expect(save).toBeEnabled();
+    // The form checks as the person types and may render the verdict a moment later: wait for it.
+    await waitFor(() => expect(save).toBeEnabled());
 
     const humidity = screen.getByLabelText('Relative humidity');
     await user.clear(humidity);
     await user.type(humidity, '150');
-    expect(hintOf(humidity)).toBe('Relative humidity must be between 0 % and 100 %');
+    await waitFor(() =>
+      expect(hintOf(humidity)).toBe('Relative humidity must be between 0 % and 100 %'),
+    );
     expect(humidity).toHaveAttribute('aria-invalid', 'true');
-    expect(save).toBeDisabled();
+    await waitFor(() => expect(save).toBeDisabled());
     expect(screen.getByRole('alert')).toHaveTextContent(
       'Not saved until these are put right: Relative humidity: must be between 0 % and 100 %',
     );
 
     await user.clear(humidity);
     await user.type(humidity, '95');
-    expect(hintOf(humidity)).toBe('read as 95 % (a number alone is a percentage)');
-    expect(save).toBeEnabled();
+    await waitFor(() =>
+      expect(hintOf(humidity)).toBe('read as 95 % (a number alone is a percentage)'),
+    );
+    await waitFor(() => expect(save).toBeEnabled());
   });
 
   it('starts the instruments at the engine’s stated defaults and refuses a negative resolution', async () => {

@@ -1,4 +1,4 @@
-import type { CalculationResult } from '@loftwright/buoyancy';
+import { type CalculationResult, KINDS } from '@loftwright/buoyancy';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
 
@@ -112,8 +112,10 @@ export interface CalculationOption {
   latestVersion: number;
 }
 
-/** Kinds whose results include an envelope volume a plan can fill. */
-const KINDS_WITH_VOLUME = new Set(['lift-check', 'envelope-sizing', 'envelope-geometry']);
+/** Kinds whose results include an envelope volume a plan can fill, as the engine says. */
+const KINDS_WITH_VOLUME = new Set(
+  KINDS.filter((kind) => kind.capabilities.volumeOutput !== undefined).map((kind) => kind.id),
+);
 
 /** The calculations a plan line can take its envelope from. */
 export const useCalculationOptions = () =>
