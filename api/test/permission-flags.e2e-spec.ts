@@ -58,6 +58,15 @@ describe('permissions sent with each resource', () => {
     expect(await permissions(admin)).toMatchObject({ edit: false, archive: true, upload: true });
   });
 
+  it('says on each row of the list whether the reader may archive it', async () => {
+    const row = async (who: TestUser) =>
+      (await http().get('/api/calculations').set(who.auth)).body.items.find(
+        (item: { id: string }) => item.id === calculationId,
+      );
+    expect((await row(owner)).permissions).toEqual({ archive: true });
+    expect((await row(reviewer)).permissions).toEqual({ archive: false });
+  });
+
   it('says of each file whether the reader may remove it', async () => {
     const uploaded = await http()
       .post(`/api/calculations/${calculationId}/attachments`)

@@ -149,7 +149,11 @@ export class CalculationsService {
       .getManyAndCount();
     const names = await this.users.names(items.map((item) => item.ownerId));
     return {
-      items: items.map((item) => calculationSummary(item, names)),
+      items: items.map((item) => ({
+        ...calculationSummary(item, names),
+        // What the signed-in user may do with the row; the web shows its actions from this.
+        permissions: { archive: canArchive(user, item) },
+      })),
       total,
       page: query.page,
       pageSize: query.pageSize,

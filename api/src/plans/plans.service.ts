@@ -15,7 +15,7 @@ import {
   kindCapabilities,
 } from '@loftwright/buoyancy';
 import { randomUUID } from 'node:crypto';
-import { Repository } from 'typeorm';
+import { DataSource, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import { CalculationsService } from '../calculations/calculations.service';
@@ -37,6 +37,7 @@ export class PlansService {
     private readonly calculations: CalculationsService,
     private readonly audit: AuditService,
     private readonly writeLock: WriteLock,
+    private readonly dataSource: DataSource,
   ) {}
 
   /** Each line's gas per envelope: from the named calculation version's results, or as entered. */
@@ -167,23 +168,24 @@ export class PlansService {
     }
     const result = await this.compute(user, dto);
     const id = randomUUID();
+    // The plan and its audit record commit together, or neither does.
     await this.writeLock.run(() =>
-      insertRow(this.plans, {
-        id,
-        ownerId: user.id,
-        title: dto.title,
-        eventDate: dto.eventDate ?? '',
-        inputs: { ...dto },
-        result,
-        engineVersion: ENGINE_VERSION,
+      this.dataSource.transaction(async (manager) => {
+        await insertRow(manager.getRepository(GasPlanRecord), {
+          id,
+          ownerId: user.id,
+          title: dto.title,
+          eventDate: dto.eventDate ?? '',
+          inputs: { ...dto },
+          result,
+          engineVersion: ENGINE_VERSION,
+        });
+        await this.audit.record(
+          { actorId: user.id, action: 'plan.create', targetType: 'gas_plan', targetId: id },
+          manager,
+        );
       }),
     );
-    await this.audit.record({
-      actorId: user.id,
-      action: 'plan.create',
-      targetType: 'gas_plan',
-      targetId: id,
-    });
     return this.get(user, id);
   }
 
@@ -191,31 +193,33 @@ export class PlansService {
     await this.findOwn(user, id);
     const result = await this.compute(user, dto);
     await this.writeLock.run(() =>
-      this.plans.update({ id }, {
-        title: dto.title,
-        eventDate: dto.eventDate ?? '',
-        inputs: { ...dto },
-        result,
-        engineVersion: ENGINE_VERSION,
-      } as never),
+      this.dataSource.transaction(async (manager) => {
+        await manager.getRepository(GasPlanRecord).update({ id }, {
+          title: dto.title,
+          eventDate: dto.eventDate ?? '',
+          inputs: { ...dto },
+          result,
+          engineVersion: ENGINE_VERSION,
+        } as never);
+        await this.audit.record(
+          { actorId: user.id, action: 'plan.update', targetType: 'gas_plan', targetId: id },
+          manager,
+        );
+      }),
     );
-    await this.audit.record({
-      actorId: user.id,
-      action: 'plan.update',
-      targetType: 'gas_plan',
-      targetId: id,
-    });
     return this.get(user, id);
   }
 
   async remove(user: AuthUser, id: string): Promise<void> {
     await this.findOwn(user, id);
-    await this.writeLock.run(() => this.plans.delete({ id }));
-    await this.audit.record({
-      actorId: user.id,
-      action: 'plan.remove',
-      targetType: 'gas_plan',
-      targetId: id,
-    });
+    await this.writeLock.run(() =>
+      this.dataSource.transaction(async (manager) => {
+        await manager.getRepository(GasPlanRecord).delete({ id });
+        await this.audit.record(
+          { actorId: user.id, action: 'plan.remove', targetType: 'gas_plan', targetId: id },
+          manager,
+        );
+      }),
+    );
   }
 }

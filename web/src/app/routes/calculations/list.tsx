@@ -28,9 +28,6 @@ export function CalculationsRoute() {
       <CalculationsTable
         calculationHref={paths.calculation.href}
         sheetHref={paths.sheet.href}
-        mayArchive={(row) =>
-          Boolean(user && (user.roles.includes('admin') || row.owner?.id === user.id))
-        }
         mayDuplicate={mayCreate}
         onDuplicated={(id) => void navigate(paths.calculation.href(id))}
       />

@@ -65,8 +65,13 @@ export interface CalculationDetail extends CalculationSummary {
   };
 }
 
+/** A row of GET /api/calculations: the summary and what the signed-in user may do with it. */
+export interface CalculationListItem extends CalculationSummary {
+  permissions: { archive: boolean };
+}
+
 export interface CalculationPage {
-  items: CalculationSummary[];
+  items: CalculationListItem[];
   total: number;
   page: number;
   pageSize: number;

@@ -5,6 +5,7 @@ import { KINDS } from '@loftwright/buoyancy';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import {
+  type CalculationListItem,
   type CalculationSummary,
   type ListParams,
   useArchiveCalculation,
@@ -26,14 +27,12 @@ const STATUS_OPTIONS = [
 export function CalculationsTable({
   calculationHref,
   sheetHref,
-  mayArchive,
   mayDuplicate,
   onDuplicated,
 }: {
   calculationHref: (id: string) => string;
   sheetHref: (id: string, version: number) => string;
   /** Whether the signed-in user may archive this one (its owner, or an admin). */
-  mayArchive: (row: CalculationSummary) => boolean;
   mayDuplicate: boolean;
   onDuplicated: (id: string) => void;
 }) {
@@ -48,7 +47,7 @@ export function CalculationsTable({
   const onTableChange = (
     pagination: TablePaginationConfig,
     _filters: unknown,
-    sorter: SorterResult<CalculationSummary> | SorterResult<CalculationSummary>[],
+    sorter: SorterResult<CalculationListItem> | SorterResult<CalculationListItem>[],
   ) => {
     const single = Array.isArray(sorter) ? sorter[0] : sorter;
     const field = typeof single?.field === 'string' ? single.field : undefined;
@@ -111,7 +110,7 @@ export function CalculationsTable({
         <ExportButton path="/calculations/export" params={{ ...params }} what="the calculations" />
       </Space>
       {error ? <Typography.Text type="danger">{error.message}</Typography.Text> : null}
-      <Table<CalculationSummary>
+      <Table<CalculationListItem>
         rowKey="id"
         size="middle"
         loading={isFetching}
@@ -192,7 +191,7 @@ export function CalculationsTable({
                     Duplicate
                   </Button>
                 ) : null}
-                {mayArchive(row) ? (
+                {row.permissions.archive ? (
                   <Popconfirm
                     title={`Archive “${row.title}”?`}
                     description="It leaves the lists; its versions and sign-offs stay verifiable."
