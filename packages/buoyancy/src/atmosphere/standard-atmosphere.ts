@@ -82,7 +82,7 @@ const LAYERS: readonly Layer[] = LAYER_DEFINITIONS.reduce<Layer[]>((layers, defi
 /**
  * Ratio M/M0 of the mean molar mass to its sea-level value between 80 and 86 km geometric altitude,
  * U.S. Standard Atmosphere 1976 (NOAA-S/T 76-1562), Table 8, at 0.5 km steps. The thirteen values
- * as two independent public transcriptions of that table give them (W. Gravel's MATLAB
+ * as two independent public copies of that table give them (W. Gravel's MATLAB
  * MolecularWeightRatios.m, "Table 8", and a Rust implementation of the standard); the page of the
  * printed table was not seen. Checked by the standard's published 86 km kinetic temperature,
  * 186.87 K (Table I). Below 80 km it is 1.

@@ -4,7 +4,7 @@ import type { CompressibilityModel } from './compressibility-model.js';
  * The residual Helmholtz energy of helium-4 from D. O. Ortiz Vega, K. R. Hall, J. C. Holste,
  * A. H. Harvey and E. W. Lemmon, "An Equation of State for the Thermodynamic Properties of
  * Helium", NIST IR 8474 (2023), doi:10.6028/NIST.IR.8474 — the equation of REFPROP 10, valid for
- * the normal fluid up to 1500 K and 2000 MPa. Coefficients as transcribed in CoolProp's
+ * the normal fluid up to 1500 K and 2000 MPa. Coefficients as copied in CoolProp's
  * dev/fluids/Helium.json (entry "OrtizVega-NISTIR-2023"); checked in the reference tests against
  * NIST SRD 134's ab initio virial coefficients, an independent source.
  */
