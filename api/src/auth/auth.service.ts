@@ -1,3 +1,4 @@
+import { configuredBaseUrl } from '../common/public-url';
 import { BadRequestException, Injectable, UnauthorizedException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
@@ -170,10 +171,7 @@ export class AuthService {
 
   /** A link into the web app, on PUBLIC_URL when set. */
   private link(pathAndQuery: string): string {
-    const baseUrl =
-      this.config.get('PUBLIC_URL', { infer: true }) ??
-      `http://localhost:${this.config.get('PORT', { infer: true })}`;
-    return `${baseUrl.replace(/\/$/, '')}${pathAndQuery}`;
+    return `${configuredBaseUrl(this.config)}${pathAndQuery}`;
   }
 
   async login(dto: LoginDto): Promise<SignedIn> {

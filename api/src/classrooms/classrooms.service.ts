@@ -1,3 +1,4 @@
+import { configuredBaseUrl } from '../common/public-url';
 import {
   ConflictException,
   ForbiddenException,
@@ -45,10 +46,7 @@ export class ClassroomsService {
   ) {}
 
   private joinUrl(code: string): string {
-    const base =
-      this.config.get('PUBLIC_URL', { infer: true }) ??
-      `http://localhost:${this.config.get('PORT', { infer: true })}`;
-    return `${base.replace(/\/$/, '')}/join/${code}`;
+    return `${configuredBaseUrl(this.config)}/join/${code}`;
   }
 
   private summary(classroom: Classroom, standing: ClassroomStanding, studentCount: number) {

@@ -19,3 +19,17 @@ export function publicBaseUrl(configured: string | undefined, requestOrigin: str
 export function verifyUrl(baseUrl: string, fingerprint: string): string {
   return `${baseUrl}/verify/${fingerprint}`;
 }
+
+/**
+ * Where links sent without a request (mail, join links) point: PUBLIC_URL when set, else this
+ * server on its own port.
+ */
+export function configuredBaseUrl(config: {
+  get(key: 'PUBLIC_URL', options: { infer: true }): string | undefined;
+  get(key: 'PORT', options: { infer: true }): number;
+}): string {
+  return publicBaseUrl(
+    config.get('PUBLIC_URL', { infer: true }),
+    `http://localhost:${config.get('PORT', { infer: true })}`,
+  );
+}

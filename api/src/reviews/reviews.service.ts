@@ -4,7 +4,7 @@ import {
   ForbiddenException,
   Injectable,
 } from '@nestjs/common';
-import { publicBaseUrl, verifyUrl } from '../common/public-url';
+import { configuredBaseUrl, publicBaseUrl, verifyUrl } from '../common/public-url';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
@@ -38,10 +38,7 @@ export class ReviewsService {
   ) {}
 
   private link(calculationId: string, number: number): string {
-    const base =
-      this.config.get('PUBLIC_URL', { infer: true }) ??
-      `http://localhost:${this.config.get('PORT', { infer: true })}`;
-    return `${base.replace(/\/$/, '')}/calculations/${calculationId}/versions/${number}`;
+    return `${configuredBaseUrl(this.config)}/calculations/${calculationId}/versions/${number}`;
   }
 
   async submit(user: AuthUser, id: string, number: number, reviewerId: string | undefined) {
