@@ -33,6 +33,13 @@ export default tseslint.config(
     },
   },
   {
+    // Every exported function and public method states what it returns: controller handlers and
+    // service methods answer in the shapes of @loftwright/contract, checked by the compiler.
+    files: ['api/src/**/*.ts'],
+    ignores: ['**/*.spec.ts'],
+    rules: { '@typescript-eslint/explicit-module-boundary-types': 'error' },
+  },
+  {
     files: ['packages/**/src/**/*.ts'],
     ignores: ['**/*.test.ts'],
     rules: {

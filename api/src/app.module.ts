@@ -7,7 +7,7 @@ import { AuthModule } from './auth/auth.module';
 import { CalculationsModule } from './calculations/calculations.module';
 import { ClassroomsModule } from './classrooms/classrooms.module';
 import { EnvironmentVariables, validateEnvironment } from './config/env.validation';
-import { DatabaseModule } from './database/database.module';
+import { PersistenceModule } from './persistence/persistence.module';
 import { buildDataSourceOptions } from './database/database.options';
 import { EvaluateModule } from './evaluate/evaluate.module';
 import { FillLogsModule } from './fill-logs/fill-logs.module';
@@ -27,7 +27,7 @@ import { WorkedExamplesModule } from './worked-examples/worked-examples.module';
       useFactory: (config: ConfigService<EnvironmentVariables, true>) =>
         buildDataSourceOptions(config.get('DATA_DIR', { infer: true })),
     }),
-    DatabaseModule,
+    PersistenceModule,
     AuditModule,
     MailModule,
     UsersModule,

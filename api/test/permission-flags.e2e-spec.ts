@@ -86,4 +86,58 @@ describe('permissions sent with each resource', () => {
       .set(admin.auth);
     expect(asAdmin.body[0].permissions).toEqual({ remove: true });
   });
+
+  it('tells each account what its roles let it do across the product', async () => {
+    const me = async (who: TestUser) =>
+      (await http().get('/api/auth/me').set(who.auth)).body.permissions;
+    expect(await me(owner)).toEqual({
+      createCalculations: true,
+      planGas: true,
+      review: false,
+      runClasses: false,
+      joinClasses: false,
+      seeClasses: false,
+      administer: false,
+    });
+    expect(await me(reviewer)).toMatchObject({ createCalculations: false, review: true });
+    expect(await me(admin)).toMatchObject({
+      createCalculations: false,
+      planGas: true,
+      seeClasses: true,
+      administer: true,
+    });
+    const pupil = await createUser(testApp.app, ['student'], 'pupil');
+    expect(await me(pupil)).toMatchObject({
+      joinClasses: true,
+      seeClasses: true,
+      runClasses: false,
+    });
+  });
+
+  it('tells a class teacher they may publish until the class closes, and refuses it after', async () => {
+    const teacher = await createUser(testApp.app, ['teacher'], 'teacher');
+    const pupil = await createUser(testApp.app, ['student'], 'classmate');
+    const classroom = (await http().post('/api/classes').set(teacher.auth).send({ title: '9C' }))
+      .body;
+    await http().post('/api/classes/join').set(pupil.auth).send({ code: classroom.joinCode });
+    const flags = async (who: TestUser) =>
+      (await http().get(`/api/classes/${classroom.id}`).set(who.auth)).body.permissions;
+    expect(await flags(teacher)).toEqual({ publish: true });
+    expect(await flags(pupil)).toEqual({ publish: false });
+    // An admin oversees the class but, without the teacher role, publishes nothing.
+    expect(await flags(admin)).toEqual({ publish: false });
+
+    const own = await http()
+      .post('/api/calculations')
+      .set(teacher.auth)
+      .send({ title: 'For 9C', kind: 'lift-check', inputs: liftCheckInputs() });
+    await http().post(`/api/classes/${classroom.id}/close`).set(teacher.auth);
+    expect(await flags(teacher)).toEqual({ publish: false });
+    const late = await http()
+      .post(`/api/classes/${classroom.id}/examples`)
+      .set(teacher.auth)
+      .send({ calculationId: own.body.id, versionNumber: 1 });
+    expect(late.status).toBe(409);
+    expect(late.body.message).toMatch(/closed/);
+  });
 });

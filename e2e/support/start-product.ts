@@ -62,6 +62,12 @@ export async function startProduct(): Promise<RunningProduct> {
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
+  // A test that times out before it can call stop() must not leave the product running.
+  const killOnExit = () => {
+    if (child.exitCode === null) child.kill('SIGKILL');
+  };
+  process.once('exit', killOnExit);
+  child.once('exit', () => process.off('exit', killOnExit));
   let printed = '';
   child.stdout?.on('data', (chunk: Buffer) => (printed += chunk.toString()));
   child.stderr?.on('data', (chunk: Buffer) => (printed += chunk.toString()));
@@ -71,7 +77,10 @@ export async function startProduct(): Promise<RunningProduct> {
     if (child.exitCode === null) {
       const exited = new Promise((resolve) => child.once('exit', resolve));
       child.kill('SIGTERM');
+      // A product stuck in its shutdown is killed rather than waited for.
+      const stuck = setTimeout(() => child.kill('SIGKILL'), 15_000);
       await exited;
+      clearTimeout(stuck);
     }
     rmSync(dataDir, { recursive: true, force: true });
   };

@@ -1,25 +1,13 @@
+import type { Attachment as AttachmentShape, UserRef } from '@loftwright/contract';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import type { Attachment } from './attachment.entity';
 
-export interface AttachmentView {
-  id: string;
-  calculationId: string;
-  fillLogId: string | null;
-  versionNumber: number | null;
-  fileName: string;
-  mediaType: string;
-  sizeBytes: number;
-  sha256: string;
-  uploadedBy: { id: string; displayName: string } | null;
-  createdAt: string;
-  contentUrl: string;
-  /** What the signed-in user may do with it. */
-  permissions: { remove: boolean };
-}
+/** A file as the API shows it (the contract's Attachment). */
+export type AttachmentView = AttachmentShape;
 
 export function attachmentView(
   attachment: Attachment,
-  uploader: { id: string; displayName: string } | null,
+  uploader: UserRef | null,
   permissions: { remove: boolean },
 ): AttachmentView {
   return {

@@ -1,3 +1,4 @@
+import type { Attachment } from '@loftwright/contract';
 import {
   Body,
   Controller,
@@ -67,12 +68,15 @@ export class AttachmentsController {
     @Param('id', uuidParam('id')) id: string,
     @UploadedFile() file: StagedFile | undefined,
     @Body() body: UploadAttachmentDto,
-  ) {
+  ): Promise<Attachment> {
     return this.attachments.upload(user, id, file, body.fillLogId ?? null);
   }
 
   @Get('calculations/:id/attachments')
-  list(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  list(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<Attachment[]> {
     return this.attachments.list(user, id);
   }
 
@@ -101,7 +105,7 @@ export class AttachmentsController {
 
   @Delete('attachments/:id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  remove(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  remove(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string): Promise<void> {
     return this.attachments.remove(user, id);
   }
 }

@@ -7,13 +7,14 @@ import {
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
+import type { ReadStream } from 'node:fs';
 import { Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import type { AuthUser } from '../auth/auth-user';
 import { canAddFiles } from '../calculations/calculation-access';
 import { CalculationsService } from '../calculations/calculations.service';
-import { insertRow } from '../database/insert-row';
-import { WriteLock } from '../database/write-lock';
+import { insertRow } from '../persistence/insert-row';
+import { WriteLock } from '../persistence/write-lock';
 import { FillLog } from '../fill-logs/fill-log.entity';
 import { UsersService } from '../users/users.service';
 import { Attachment } from './attachment.entity';
@@ -183,7 +184,10 @@ export class AttachmentsService {
     return attachment;
   }
 
-  async content(user: AuthUser, id: string) {
+  async content(
+    user: AuthUser,
+    id: string,
+  ): Promise<{ attachment: Attachment; stream: ReadStream }> {
     const attachment = await this.findReadable(user, id);
     if (!this.store.exists(attachment.sha256)) {
       throw new NotFoundException({ message: 'The stored file is missing.', field: 'id' });

@@ -1,3 +1,4 @@
+import type { AuditRow, Page } from '@loftwright/contract';
 import { Controller, Get, Query, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
@@ -48,7 +49,7 @@ export class AuditController {
 
   @Get()
   @Roles('admin')
-  list(@Query() query: ListAuditDto) {
+  list(@Query() query: ListAuditDto): Promise<Page<AuditRow>> {
     return this.auditService.listReadable(query);
   }
 }

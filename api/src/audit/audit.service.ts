@@ -1,8 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { DataSource, type EntityManager, In, Repository } from 'typeorm';
-import { insertRow } from '../database/insert-row';
-import { WriteLock } from '../database/write-lock';
+import { insertRow } from '../persistence/insert-row';
+import { WriteLock } from '../persistence/write-lock';
 import { AuditEntry } from './audit-entry.entity';
 import { type AuditChange, type AuditNames, auditStory } from './audit-story';
 import type { ListAuditDto } from './dto/list-audit.dto';

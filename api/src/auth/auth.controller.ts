@@ -1,3 +1,4 @@
+import type { Account } from '@loftwright/contract';
 import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post, Res } from '@nestjs/common';
 import type { Response } from 'express';
 import {
@@ -11,7 +12,7 @@ import {
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import { RateLimited } from '../common/rate-limit';
-import { type PublicUser, toPublicUser } from '../users/user.entity';
+import { toPublicUser } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
 import { AuthService, type RegisterOutcome, type SignedIn } from './auth.service';
 import type { AuthUser } from './auth-user';
@@ -75,7 +76,7 @@ export class AuthController {
 
   @ApiBearerAuth()
   @Get('me')
-  async me(@CurrentUser() user: AuthUser): Promise<PublicUser> {
+  async me(@CurrentUser() user: AuthUser): Promise<Account> {
     const found = await this.usersService.findById(user.id);
     if (!found) throw new NotFoundException({ message: 'No such user.' });
     return toPublicUser(found);
@@ -91,7 +92,7 @@ export class AuthController {
   async updatePreferences(
     @CurrentUser() user: AuthUser,
     @Body() body: UpdatePreferencesDto,
-  ): Promise<PublicUser> {
+  ): Promise<Account> {
     await this.usersService.setPreferences(user.id, body);
     return this.me(user);
   }

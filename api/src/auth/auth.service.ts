@@ -1,3 +1,4 @@
+import type { RegisterOutcome, SignedIn } from '@loftwright/contract';
 import { configuredBaseUrl } from '../common/public-url';
 import { BadRequestException, Injectable, UnauthorizedException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
@@ -7,7 +8,7 @@ import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import { IsNull, MoreThan, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import type { EnvironmentVariables } from '../config/env.validation';
-import { WriteLock } from '../database/write-lock';
+import { WriteLock } from '../persistence/write-lock';
 import { MailService } from '../mail/mail.service';
 import {
   confirmRegistrationMail,
@@ -15,7 +16,7 @@ import {
   registrationAttemptMail,
 } from '../mail/mail-templates';
 import { PasswordHasher } from '../users/password-hasher.service';
-import { type PublicUser, toPublicUser, type User } from '../users/user.entity';
+import { toPublicUser, type User } from '../users/user.entity';
 import { UsersService } from '../users/users.service';
 import type { LoginDto } from './dto/login.dto';
 import type { RegisterDto } from './dto/register.dto';
@@ -29,14 +30,7 @@ export const RESET_TOKEN_TTL_MS = 30 * 60 * 1000;
 /** How long the link that finishes a registration works. */
 export const REGISTRATION_TOKEN_TTL_MS = 24 * 60 * 60 * 1000;
 
-export interface SignedIn {
-  accessToken: string;
-  user: PublicUser;
-}
-
-/** What registering did: signed in the first account, or mailed the address. */
-export type RegisterOutcome =
-  ({ status: 'signed-in' } & SignedIn) | { status: 'check-mail'; message: string };
+export type { RegisterOutcome, SignedIn } from '@loftwright/contract';
 
 const sha256 = (text: string) => createHash('sha256').update(text).digest('hex');
 

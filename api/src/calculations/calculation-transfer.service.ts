@@ -1,3 +1,4 @@
+import type { CalculationDetail } from '@loftwright/contract';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { InputError } from '@loftwright/buoyancy';
@@ -38,7 +39,7 @@ export class CalculationTransferService {
    * order. Every version's inputs are checked by the engine before anything is created, so a bad
    * file leaves nothing behind.
    */
-  async import(user: AuthUser, file: ImportCalculationDto) {
+  async import(user: AuthUser, file: ImportCalculationDto): Promise<CalculationDetail> {
     for (const [index, version] of file.versions.entries()) {
       // One version's engine run at a time, then other requests get their turn.
       await yieldToOtherRequests();

@@ -1,7 +1,8 @@
+import type { CalculationResult } from '@loftwright/buoyancy';
+import type { VersionStatus } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
 
-export const VERSION_STATUSES = ['draft', 'in_review', 'approved', 'changes_requested'] as const;
-export type VersionStatus = (typeof VERSION_STATUSES)[number];
+export { VERSION_STATUSES, type VersionStatus } from '@loftwright/contract';
 
 /**
  * One saved version of a calculation. Its content (inputs, outputs, steps, warnings, engine
@@ -20,19 +21,19 @@ export class CalculationVersion {
   number: number;
 
   @Column('simple-json')
-  inputs: unknown;
+  inputs: Record<string, unknown>;
 
   @Column('simple-json')
-  outputs: unknown;
+  outputs: CalculationResult['outputs'];
 
   @Column('simple-json')
-  steps: unknown;
+  steps: CalculationResult['steps'];
 
   @Column('simple-json')
-  warnings: unknown;
+  warnings: CalculationResult['warnings'];
 
   @Column('simple-json', { nullable: true })
-  series: unknown;
+  series: CalculationResult['series'] | null;
 
   @Column('varchar', { name: 'engine_version' })
   engineVersion: string;

@@ -1,3 +1,4 @@
+import type { CalculationSummary, VersionDetail, VersionSummary } from '@loftwright/contract';
 import type { CalculationVersion } from './calculation-version.entity';
 import type { Calculation } from './calculation.entity';
 
@@ -5,7 +6,10 @@ import type { NameLookup } from '../users/user-ref';
 
 export type { NameLookup, UserRef } from '../users/user-ref';
 
-export function calculationSummary(calculation: Calculation, names: NameLookup) {
+export function calculationSummary(
+  calculation: Calculation,
+  names: NameLookup,
+): CalculationSummary {
   return {
     id: calculation.id,
     title: calculation.title,
@@ -21,7 +25,7 @@ export function calculationSummary(calculation: Calculation, names: NameLookup) 
   };
 }
 
-export function versionSummary(version: CalculationVersion, names: NameLookup) {
+export function versionSummary(version: CalculationVersion, names: NameLookup): VersionSummary {
   return {
     number: version.number,
     status: version.status,
@@ -35,7 +39,7 @@ export function versionSummary(version: CalculationVersion, names: NameLookup) {
   };
 }
 
-export function versionDetail(version: CalculationVersion, names: NameLookup) {
+export function versionDetail(version: CalculationVersion, names: NameLookup): VersionDetail {
   return {
     ...versionSummary(version, names),
     inputs: version.inputs,

@@ -1,7 +1,7 @@
+import type { VersionStatus, Visibility } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 
-export const VISIBILITIES = ['private', 'team', 'published'] as const;
-export type Visibility = (typeof VISIBILITIES)[number];
+export { VISIBILITIES, type Visibility } from '@loftwright/contract';
 
 @Entity('calculation')
 export class Calculation {
@@ -29,7 +29,7 @@ export class Calculation {
 
   /** Status of the newest version, kept here so lists can filter and sort on it. */
   @Column('varchar', { name: 'latest_status' })
-  latestStatus: string;
+  latestStatus: VersionStatus;
 
   /** Set once any version has been submitted: reviewers may then read it. */
   @Column('boolean', { name: 'ever_submitted', default: false })

@@ -1,3 +1,9 @@
+import type {
+  CalculationDetail,
+  CalculationPage,
+  VersionDetail,
+  VersionDiff,
+} from '@loftwright/contract';
 import {
   Body,
   Controller,
@@ -20,6 +26,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { sendTable } from '../common/export/table-export';
 import { intParam } from '../common/pipes/int-param.pipe';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
+import type { CalculationFile } from './calculation-file';
 import { CalculationTransferService } from './calculation-transfer.service';
 import { CalculationsService } from './calculations.service';
 import { ImportCalculationDto } from './dto/import-calculation.dto';
@@ -39,7 +46,10 @@ export class CalculationsController {
 
   /** A Loftwright calculation file (docs/file-format.md) becomes a new calculation of the caller's. */
   @Post('import')
-  import(@CurrentUser() user: AuthUser, @Body() body: ImportCalculationDto) {
+  import(
+    @CurrentUser() user: AuthUser,
+    @Body() body: ImportCalculationDto,
+  ): Promise<CalculationDetail> {
     return this.transfer.import(user, body);
   }
 
@@ -81,7 +91,7 @@ export class CalculationsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Res({ passthrough: true }) response: Response,
-  ) {
+  ): Promise<CalculationFile> {
     const file = await this.transfer.export(user, id);
     const name = `${file.calculation.title.replace(/[^\p{L}\p{N}]+/gu, '-').replace(/^-|-$/g, '') || 'calculation'}.loftwright.json`;
     response.setHeader(
@@ -92,17 +102,26 @@ export class CalculationsController {
   }
 
   @Get()
-  list(@CurrentUser() user: AuthUser, @Query() query: ListCalculationsDto) {
+  list(
+    @CurrentUser() user: AuthUser,
+    @Query() query: ListCalculationsDto,
+  ): Promise<CalculationPage> {
     return this.calculationsService.list(user, query);
   }
 
   @Post()
-  create(@CurrentUser() user: AuthUser, @Body() body: CreateCalculationDto) {
+  create(
+    @CurrentUser() user: AuthUser,
+    @Body() body: CreateCalculationDto,
+  ): Promise<CalculationDetail> {
     return this.calculationsService.create(user, body);
   }
 
   @Get(':id')
-  findOne(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  findOne(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<CalculationDetail> {
     return this.calculationsService.detail(user, id);
   }
 
@@ -111,14 +130,14 @@ export class CalculationsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: UpdateCalculationDto,
-  ) {
+  ): Promise<CalculationDetail> {
     return this.calculationsService.update(user, id, body);
   }
 
   /** Archives (never deletes): the calculation leaves lists, its versions stay verifiable. */
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  archive(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  archive(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string): Promise<void> {
     return this.calculationsService.archive(user, id);
   }
 
@@ -130,7 +149,7 @@ export class CalculationsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: SaveVersionDto,
-  ) {
+  ): Promise<VersionDetail> {
     return this.calculationsService.saveVersion(user, id, body);
   }
 
@@ -139,7 +158,7 @@ export class CalculationsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Param('n', intParam('n')) n: number,
-  ) {
+  ): Promise<VersionDetail> {
     return this.calculationsService.version(user, id, n);
   }
 
@@ -149,7 +168,7 @@ export class CalculationsController {
     @Param('id', uuidParam('id')) id: string,
     @Param('a', intParam('a')) a: number,
     @Param('b', intParam('b')) b: number,
-  ) {
+  ): Promise<VersionDiff> {
     return this.calculationsService.diff(user, id, a, b);
   }
 }

@@ -1,3 +1,10 @@
+import type {
+  CalculationDetail,
+  CalculationListItem,
+  CalculationPage,
+  VersionDetail,
+  VersionDiff,
+} from '@loftwright/contract';
 import {
   ConflictException,
   ForbiddenException,
@@ -9,8 +16,8 @@ import { randomUUID } from 'node:crypto';
 import { DataSource, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
-import { insertRow } from '../database/insert-row';
-import { WriteLock } from '../database/write-lock';
+import { insertRow } from '../persistence/insert-row';
+import { WriteLock } from '../persistence/write-lock';
 import { AUTHOR_ROLES, TEAM_ROLES } from '../users/roles';
 import { UsersService } from '../users/users.service';
 import { calculationPermissions, canArchive, canEdit, canRead } from './calculation-access';
@@ -59,7 +66,7 @@ export class CalculationsService {
     return version;
   }
 
-  async create(user: AuthUser, dto: CreateCalculationDto) {
+  async create(user: AuthUser, dto: CreateCalculationDto): Promise<CalculationDetail> {
     if (!hasRole(user, ...AUTHOR_ROLES)) {
       throw new ForbiddenException({
         message: 'Creating calculations needs the designer or teacher role.',
@@ -107,7 +114,7 @@ export class CalculationsService {
     return this.detail(user, calculationId);
   }
 
-  async list(user: AuthUser, query: ListCalculationsDto) {
+  async list(user: AuthUser, query: ListCalculationsDto): Promise<CalculationPage> {
     const builder = this.calculations.createQueryBuilder('calculation');
     if (!hasRole(user, 'admin')) {
       builder.andWhere('calculation.archived_at IS NULL');
@@ -160,7 +167,7 @@ export class CalculationsService {
     };
   }
 
-  async detail(user: AuthUser, id: string) {
+  async detail(user: AuthUser, id: string): Promise<CalculationDetail> {
     const calculation = await this.findReadable(user, id);
     const versions = await this.versions.find({
       where: { calculationId: id },
@@ -180,7 +187,11 @@ export class CalculationsService {
   }
 
   /** Every calculation the list's filters match for this user, in its order, at most `limit`. */
-  async listAll(user: AuthUser, query: ListCalculationsDto, limit: number) {
+  async listAll(
+    user: AuthUser,
+    query: ListCalculationsDto,
+    limit: number,
+  ): Promise<CalculationListItem[]> {
     const rows: Awaited<ReturnType<CalculationsService['list']>>['items'] = [];
     for (let page = 1; rows.length < limit; page += 1) {
       const { items } = await this.list(user, { ...query, page, pageSize: 500 });
@@ -190,14 +201,14 @@ export class CalculationsService {
     return rows.slice(0, limit);
   }
 
-  async version(user: AuthUser, id: string, number: number) {
+  async version(user: AuthUser, id: string, number: number): Promise<VersionDetail> {
     await this.findReadable(user, id);
     const version = await this.findVersion(id, number);
     const names = await this.users.names([version.authorId, version.reviewerId]);
     return versionDetail(version, names);
   }
 
-  async saveVersion(user: AuthUser, id: string, dto: SaveVersionDto) {
+  async saveVersion(user: AuthUser, id: string, dto: SaveVersionDto): Promise<VersionDetail> {
     const calculation = await this.findReadable(user, id);
     if (!canEdit(user, calculation)) {
       throw new ForbiddenException({
@@ -257,7 +268,7 @@ export class CalculationsService {
     return versionDetail(version as CalculationVersion, names);
   }
 
-  async update(user: AuthUser, id: string, dto: UpdateCalculationDto) {
+  async update(user: AuthUser, id: string, dto: UpdateCalculationDto): Promise<CalculationDetail> {
     const calculation = await this.findReadable(user, id);
     if (!canEdit(user, calculation)) {
       throw new ForbiddenException({
@@ -318,7 +329,7 @@ export class CalculationsService {
     );
   }
 
-  async diff(user: AuthUser, id: string, a: number, b: number) {
+  async diff(user: AuthUser, id: string, a: number, b: number): Promise<VersionDiff> {
     await this.findReadable(user, id);
     const [left, right] = await Promise.all([this.findVersion(id, a), this.findVersion(id, b)]);
     type Outputs = Parameters<typeof diffOutputs>[0];

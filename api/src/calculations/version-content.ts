@@ -1,12 +1,18 @@
-import { ENGINE_VERSION, evaluate, InputError, normaliseInputs } from '@loftwright/buoyancy';
+import {
+  type CalculationResult,
+  ENGINE_VERSION,
+  evaluate,
+  InputError,
+  normaliseInputs,
+} from '@loftwright/buoyancy';
 import { versionFingerprint } from './fingerprint';
 
 export interface VersionContent {
-  inputs: unknown;
-  outputs: unknown;
-  steps: unknown;
-  warnings: unknown;
-  series: unknown;
+  inputs: Record<string, unknown>;
+  outputs: CalculationResult['outputs'];
+  steps: CalculationResult['steps'];
+  warnings: CalculationResult['warnings'];
+  series: CalculationResult['series'] | null;
   engineVersion: string;
   fingerprint: string;
 }
@@ -18,7 +24,8 @@ export interface VersionContent {
  */
 export function computeVersionContent(kind: string, inputs: unknown): VersionContent {
   const { normalised, result } = inBodyField('inputs', () => {
-    const normalisedInputs = normaliseInputs(kind, inputs);
+    // Every kind's inputs are an object, so what the engine hands back is one.
+    const normalisedInputs = normaliseInputs(kind, inputs) as Record<string, unknown>;
     return { normalised: normalisedInputs, result: evaluate(kind, normalisedInputs) };
   });
   return {

@@ -1,3 +1,4 @@
+import type { ClassDetail, ClassSummary } from '@loftwright/contract';
 import { RateLimited } from '../common/rate-limit';
 import { Body, Controller, Delete, Get, HttpCode, HttpStatus, Param, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
@@ -15,12 +16,12 @@ export class ClassroomsController {
 
   /** Classes the user teaches or has joined (every class, for an admin). */
   @Get()
-  list(@CurrentUser() user: AuthUser) {
+  list(@CurrentUser() user: AuthUser): Promise<ClassSummary[]> {
     return this.classrooms.list(user);
   }
 
   @Post()
-  create(@CurrentUser() user: AuthUser, @Body() body: CreateClassroomDto) {
+  create(@CurrentUser() user: AuthUser, @Body() body: CreateClassroomDto): Promise<ClassDetail> {
     return this.classrooms.create(user, body);
   }
 
@@ -28,12 +29,15 @@ export class ClassroomsController {
   @RateLimited('class-join')
   @Post('join')
   @HttpCode(HttpStatus.OK)
-  join(@CurrentUser() user: AuthUser, @Body() body: JoinClassroomDto) {
+  join(@CurrentUser() user: AuthUser, @Body() body: JoinClassroomDto): Promise<ClassDetail> {
     return this.classrooms.join(user, body.code);
   }
 
   @Get(':id')
-  detail(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  detail(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<ClassDetail> {
     return this.classrooms.detail(user, id);
   }
 
@@ -44,13 +48,16 @@ export class ClassroomsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: RenewJoinCodeDto,
-  ) {
+  ): Promise<ClassDetail> {
     return this.classrooms.renewCode(user, id, body.joinCodeValidDays);
   }
 
   @Post(':id/close')
   @HttpCode(HttpStatus.OK)
-  close(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  close(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<ClassDetail> {
     return this.classrooms.close(user, id);
   }
 
@@ -60,7 +67,7 @@ export class ClassroomsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Param('userId', uuidParam('userId')) userId: string,
-  ) {
+  ): Promise<void> {
     return this.classrooms.removeStudent(user, id, userId);
   }
 }

@@ -1,3 +1,4 @@
+import type { ClassroomStanding, ClassDetail, ClassSummary } from '@loftwright/contract';
 import { configuredBaseUrl } from '../common/public-url';
 import {
   ConflictException,
@@ -13,8 +14,8 @@ import { In, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import type { EnvironmentVariables } from '../config/env.validation';
-import { insertRow } from '../database/insert-row';
-import { WriteLock } from '../database/write-lock';
+import { insertRow } from '../persistence/insert-row';
+import { WriteLock } from '../persistence/write-lock';
 import { UsersService } from '../users/users.service';
 import { ClassroomMember } from './classroom-member.entity';
 import { Classroom } from './classroom.entity';
@@ -25,13 +26,25 @@ const DAY_MS = 86_400_000;
 const DEFAULT_JOIN_DAYS = 14;
 
 /** How a user stands towards a class: runs it, sits in it, or neither. */
-export type ClassroomStanding = 'teacher' | 'student' | 'admin';
+export type { ClassroomStanding } from '@loftwright/contract';
 
 /** Teacher-only actions on a class and what is published to it: a student gets 403. */
 export function requireTeaching(standing: ClassroomStanding): void {
   if (standing === 'student') {
     throw new ForbiddenException({ message: 'Only the class teacher may do this.' });
   }
+}
+
+/**
+ * Worked examples go to a class that is open, from someone teaching it (its teacher, or an admin
+ * who also teaches) who holds the teacher role.
+ */
+export function mayPublishTo(
+  user: AuthUser,
+  classroom: Pick<Classroom, 'closedAt'>,
+  standing: ClassroomStanding,
+): boolean {
+  return standing !== 'student' && hasRole(user, 'teacher') && classroom.closedAt === null;
 }
 
 @Injectable()
@@ -113,7 +126,7 @@ export class ClassroomsService {
     return new Map(rows.map((row) => [row.id, Number(row.count)]));
   }
 
-  async list(user: AuthUser) {
+  async list(user: AuthUser): Promise<ClassSummary[]> {
     const memberships = await this.members.findBy({ studentId: user.id });
     const joinedIds = memberships.map((member) => member.classroomId);
     const rows = await this.classrooms.find({
@@ -132,7 +145,7 @@ export class ClassroomsService {
     );
   }
 
-  async detail(user: AuthUser, id: string) {
+  async detail(user: AuthUser, id: string): Promise<ClassDetail> {
     const { classroom, standing } = await this.findVisible(user, id);
     const members = await this.members.find({
       where: { classroomId: id },
@@ -142,6 +155,7 @@ export class ClassroomsService {
     const base = {
       ...this.summary(classroom, standing, members.length),
       teacher: { id: classroom.teacherId, displayName: teacher?.displayName ?? 'unknown user' },
+      permissions: { publish: mayPublishTo(user, classroom, standing) },
     };
     if (standing === 'student') return base;
     const names = await this.users.names(members.map((member) => member.studentId));
@@ -155,7 +169,7 @@ export class ClassroomsService {
     };
   }
 
-  async create(user: AuthUser, dto: CreateClassroomDto) {
+  async create(user: AuthUser, dto: CreateClassroomDto): Promise<ClassDetail> {
     if (!hasRole(user, 'teacher')) {
       throw new ForbiddenException({ message: 'Running a class needs the teacher role.' });
     }
@@ -188,7 +202,7 @@ export class ClassroomsService {
     }
   }
 
-  async renewCode(user: AuthUser, id: string, validDays = DEFAULT_JOIN_DAYS) {
+  async renewCode(user: AuthUser, id: string, validDays = DEFAULT_JOIN_DAYS): Promise<ClassDetail> {
     const classroom = await this.findTaught(user, id);
     if (classroom.closedAt) {
       throw new ConflictException({ message: 'The class is closed.', field: 'id' });
@@ -242,7 +256,7 @@ export class ClassroomsService {
   }
 
   /** Puts a student on the roster of the class the code belongs to (once). */
-  async join(user: AuthUser, rawCode: string) {
+  async join(user: AuthUser, rawCode: string): Promise<ClassDetail> {
     if (!hasRole(user, 'student')) {
       throw new ForbiddenException({
         message: 'Joining a class needs a student account; teachers open their classes directly.',
@@ -289,7 +303,7 @@ export class ClassroomsService {
     });
   }
 
-  async close(user: AuthUser, id: string) {
+  async close(user: AuthUser, id: string): Promise<ClassDetail> {
     const classroom = await this.findTaught(user, id);
     if (!classroom.closedAt) {
       await this.writeLock.run(() => this.classrooms.update({ id }, { closedAt: new Date() }));

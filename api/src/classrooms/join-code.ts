@@ -20,4 +20,4 @@ export function newJoinCode(): string {
 export const normaliseJoinCode = (text: string): string => text.toUpperCase().replace(/[\s-]/g, '');
 
 /** "ABCD-EFGH": the code as shown to people. */
-export const formatJoinCode = (code: string) => `${code.slice(0, 4)}-${code.slice(4)}`;
+export const formatJoinCode = (code: string): string => `${code.slice(0, 4)}-${code.slice(4)}`;

@@ -10,7 +10,7 @@ export type RateLimitBucket = 'sign-in' | 'register' | 'class-join' | 'evaluate'
  * Counts requests to this route per client address in the bucket's window and answers 429 past
  * its limit. Each route keeps its own count.
  */
-export const RateLimited = (bucket: RateLimitBucket) =>
+export const RateLimited = (bucket: RateLimitBucket): ReturnType<typeof applyDecorators> =>
   applyDecorators(SetMetadata(RATE_LIMIT_BUCKET, bucket), UseGuards(ThrottlerGuard));
 
 const bucketOf = (context: ExecutionContext): unknown =>

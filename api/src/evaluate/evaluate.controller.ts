@@ -1,3 +1,4 @@
+import type { Evaluation, KindCatalogue } from '@loftwright/contract';
 import { Body, Controller, Get, HttpCode, HttpStatus, Post } from '@nestjs/common';
 import { ApiTags, ApiUnprocessableEntityResponse } from '@nestjs/swagger';
 import { ENGINE_VERSION, evaluate, KINDS } from '@loftwright/buoyancy';
@@ -17,7 +18,7 @@ export class EvaluateController {
   @ApiUnprocessableEntityResponse({
     description: 'an input is outside the range the model is valid for; the body names the field',
   })
-  evaluate(@Body() body: EvaluateDto) {
+  evaluate(@Body() body: EvaluateDto): Evaluation {
     const result = inBodyField('inputs', () => evaluate(body.kind, body.inputs));
     return { kind: body.kind, engineVersion: ENGINE_VERSION, ...result };
   }
@@ -25,7 +26,7 @@ export class EvaluateController {
   /** The kinds the engine offers, with their inputs as JSON Schema. */
   @Public()
   @Get('kinds')
-  kinds() {
+  kinds(): KindCatalogue {
     return {
       engineVersion: ENGINE_VERSION,
       kinds: KINDS.map((kind) => ({ ...kind, inputSchema: kind.inputSchema })),

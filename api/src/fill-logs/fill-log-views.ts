@@ -1,31 +1,10 @@
+import type { FillLog as FillLogShape, UserRef } from '@loftwright/contract';
 import type { FillLog } from './fill-log.entity';
 
-export interface FillLogView {
-  id: string;
-  calculationId: string;
-  versionNumber: number;
-  filledAt: string;
-  place: string;
-  envelopeLabel: string;
-  gasSource: string;
-  ambient: unknown;
-  readings: unknown[];
-  instrument: { scaleResolutionKg: number; ballastToleranceKg: number } | null;
-  note: string;
-  outputs: unknown;
-  steps: unknown;
-  warnings: unknown;
-  points: unknown;
-  engineVersion: string;
-  createdBy: { id: string; displayName: string } | null;
-  createdAt: string;
-  updatedAt: string;
-}
+/** A fill log as the API shows it (the contract's FillLog). */
+export type FillLogView = FillLogShape;
 
-export function fillLogView(
-  log: FillLog,
-  author: { id: string; displayName: string } | null,
-): FillLogView {
+export function fillLogView(log: FillLog, author: UserRef | null): FillLogView {
   return {
     id: log.id,
     calculationId: log.calculationId,

@@ -1,3 +1,5 @@
+import type { CalculationResult, FillAmbient, FillReading } from '@loftwright/buoyancy';
+import type { FillLogPoint, GasSource } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 
 /**
@@ -30,13 +32,13 @@ export class FillLog {
   envelopeLabel: string;
 
   @Column('varchar', { name: 'gas_source' })
-  gasSource: string;
+  gasSource: GasSource;
 
   @Column('simple-json')
-  ambient: unknown;
+  ambient: FillAmbient;
 
   @Column('simple-json')
-  readings: unknown[];
+  readings: FillReading[];
 
   /** The scale's resolution and the ballast's tolerance [kg]; null: the engine's stated defaults. */
   @Column('simple-json', { nullable: true })
@@ -46,16 +48,16 @@ export class FillLog {
   note: string;
 
   @Column('simple-json')
-  outputs: unknown;
+  outputs: CalculationResult['outputs'];
 
   @Column('simple-json')
-  steps: unknown;
+  steps: CalculationResult['steps'];
 
   @Column('simple-json')
-  warnings: unknown;
+  warnings: CalculationResult['warnings'];
 
   @Column('simple-json')
-  points: unknown;
+  points: FillLogPoint[];
 
   @Column('varchar', { name: 'engine_version' })
   engineVersion: string;

@@ -35,12 +35,15 @@ export class FillLogsController {
     @Param('id', uuidParam('id')) id: string,
     @Param('n', intParam('n')) n: number,
     @Body() body: CreateFillLogDto,
-  ) {
+  ): Promise<FillLogView> {
     return this.fillLogs.create(user, id, n, body);
   }
 
   @Get('calculations/:id/fill-logs')
-  list(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  list(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<FillLogView[]> {
     return this.fillLogs.list(user, id);
   }
 
@@ -93,7 +96,10 @@ export class FillLogsController {
   }
 
   @Get('fill-logs/:id')
-  get(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  get(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<FillLogView> {
     return this.fillLogs.get(user, id);
   }
 
@@ -102,7 +108,7 @@ export class FillLogsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: UpdateFillLogDto,
-  ) {
+  ): Promise<FillLogView> {
     return this.fillLogs.update(user, id, body);
   }
 
@@ -111,13 +117,13 @@ export class FillLogsController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: AddReadingsDto,
-  ) {
+  ): Promise<FillLogView> {
     return this.fillLogs.addReadings(user, id, body);
   }
 
   @Delete('fill-logs/:id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  remove(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  remove(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string): Promise<void> {
     return this.fillLogs.remove(user, id);
   }
 }

@@ -1,10 +1,11 @@
+import type { OutboxMessage as OutboxMessageView, Page } from '@loftwright/contract';
 import { Injectable, Logger, type OnModuleDestroy, type OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectRepository } from '@nestjs/typeorm';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { Repository } from 'typeorm';
 import type { EnvironmentVariables } from '../config/env.validation';
-import { WriteLock } from '../database/write-lock';
+import { WriteLock } from '../persistence/write-lock';
 import { FakeSmtpServer } from './fake-smtp-server';
 import type { MailMessage } from './mail-templates';
 import { OutboxMessage } from './outbox-message.entity';
@@ -86,9 +87,22 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     return this.fakePort;
   }
 
-  listOutbox(page: number, pageSize: number) {
+  listOutbox(page: number, pageSize: number): Promise<Page<OutboxMessageView>> {
     return this.outbox
       .findAndCount({ order: { id: 'DESC' }, skip: (page - 1) * pageSize, take: pageSize })
-      .then(([items, total]) => ({ items, total, page, pageSize }));
+      .then(([rows, total]) => ({
+        items: rows.map((row): OutboxMessageView => ({
+          id: row.id,
+          from: row.from,
+          to: row.to,
+          subject: row.subject,
+          text: row.text,
+          attachments: row.attachments,
+          receivedAt: new Date(row.receivedAt).toISOString(),
+        })),
+        total,
+        page,
+        pageSize,
+      }));
   }
 }

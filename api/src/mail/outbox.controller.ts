@@ -1,3 +1,4 @@
+import type { OutboxMessage, Page } from '@loftwright/contract';
 import { Controller, Get, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { Roles } from '../common/decorators/roles.decorator';
@@ -13,7 +14,7 @@ export class OutboxController {
   /** Mail the local fake server received, newest first. */
   @Get()
   @Roles('admin')
-  list(@Query() query: PageQueryDto) {
+  list(@Query() query: PageQueryDto): Promise<Page<OutboxMessage>> {
     return this.mailService.listOutbox(query.page, query.pageSize);
   }
 }

@@ -1,3 +1,4 @@
+import type { Plan, SavePlanBody } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 
 /**
@@ -21,11 +22,11 @@ export class GasPlanRecord {
 
   /** What the planner entered: lines (calculation versions or volumes) and supply settings. */
   @Column('simple-json')
-  inputs: unknown;
+  inputs: SavePlanBody;
 
   /** Lines with their volumes resolved, totals, and the gas-supply result. */
   @Column('simple-json')
-  result: unknown;
+  result: Plan['result'];
 
   @Column('varchar', { name: 'engine_version' })
   engineVersion: string;

@@ -1,3 +1,4 @@
+import type { Plan } from '@loftwright/contract';
 import {
   Body,
   Controller,
@@ -28,17 +29,17 @@ export class PlansController {
   constructor(private readonly plans: PlansService) {}
 
   @Get()
-  list(@CurrentUser() user: AuthUser) {
+  list(@CurrentUser() user: AuthUser): Promise<Plan[]> {
     return this.plans.list(user);
   }
 
   @Post()
-  create(@CurrentUser() user: AuthUser, @Body() body: SavePlanDto) {
+  create(@CurrentUser() user: AuthUser, @Body() body: SavePlanDto): Promise<Plan> {
     return this.plans.create(user, body);
   }
 
   @Get(':id')
-  get(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  get(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string): Promise<Plan> {
     return this.plans.get(user, id);
   }
 
@@ -48,13 +49,13 @@ export class PlansController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: SavePlanDto,
-  ) {
+  ): Promise<Plan> {
     return this.plans.replace(user, id, body);
   }
 
   @Delete(':id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  remove(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  remove(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string): Promise<void> {
     return this.plans.remove(user, id);
   }
 

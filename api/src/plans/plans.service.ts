@@ -1,3 +1,4 @@
+import type { Plan } from '@loftwright/contract';
 import {
   BadRequestException,
   ForbiddenException,
@@ -19,8 +20,8 @@ import { DataSource, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import { CalculationsService } from '../calculations/calculations.service';
-import { insertRow } from '../database/insert-row';
-import { WriteLock } from '../database/write-lock';
+import { insertRow } from '../persistence/insert-row';
+import { WriteLock } from '../persistence/write-lock';
 import { AUTHOR_ROLES } from '../users/roles';
 import type { SavePlanDto } from './dto/plan.dto';
 import { GasPlanRecord } from './plan.entity';
@@ -150,7 +151,7 @@ export class PlansService {
     return record;
   }
 
-  async list(user: AuthUser) {
+  async list(user: AuthUser): Promise<Plan[]> {
     const rows = await this.plans.find({
       where: hasRole(user, 'admin') ? {} : { ownerId: user.id },
       order: { updatedAt: 'DESC' },
@@ -158,11 +159,11 @@ export class PlansService {
     return rows.map((row) => this.view(row));
   }
 
-  async get(user: AuthUser, id: string) {
+  async get(user: AuthUser, id: string): Promise<Plan> {
     return this.view(await this.findOwn(user, id));
   }
 
-  async create(user: AuthUser, dto: SavePlanDto) {
+  async create(user: AuthUser, dto: SavePlanDto): Promise<Plan> {
     if (!hasRole(user, ...AUTHOR_ROLES)) {
       throw new ForbiddenException({ message: 'Planning gas needs the designer or teacher role.' });
     }
@@ -189,7 +190,7 @@ export class PlansService {
     return this.get(user, id);
   }
 
-  async replace(user: AuthUser, id: string, dto: SavePlanDto) {
+  async replace(user: AuthUser, id: string, dto: SavePlanDto): Promise<Plan> {
     await this.findOwn(user, id);
     const result = await this.compute(user, dto);
     await this.writeLock.run(() =>

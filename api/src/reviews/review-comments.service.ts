@@ -13,7 +13,7 @@ import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import { canEdit } from '../calculations/calculation-access';
 import { CalculationsService } from '../calculations/calculations.service';
-import { WriteLock } from '../database/write-lock';
+import { WriteLock } from '../persistence/write-lock';
 import { UsersService } from '../users/users.service';
 import type { AddReviewCommentDto } from './dto/review-comment.dto';
 import { ReviewComment } from './review-comment.entity';

@@ -1,3 +1,4 @@
+import type { ReviewQueueItem, ReviewedVersion, VersionDetail } from '@loftwright/contract';
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user';
@@ -27,7 +28,7 @@ export class ReviewsController {
     @Param('id', uuidParam('id')) id: string,
     @Param('n', intParam('n')) n: number,
     @Body() body: SubmitVersionDto,
-  ) {
+  ): Promise<VersionDetail> {
     return this.reviewsService.submit(user, id, n, body.reviewerId);
   }
 
@@ -39,7 +40,7 @@ export class ReviewsController {
     @Param('n', intParam('n')) n: number,
     @Body() body: ApproveVersionDto,
     @RequestOrigin() origin: string,
-  ) {
+  ): Promise<ReviewedVersion> {
     return this.reviewsService.approve(user, id, n, body.comment ?? '', origin, body.timeZone);
   }
 
@@ -51,7 +52,7 @@ export class ReviewsController {
     @Param('n', intParam('n')) n: number,
     @Body() body: SendBackVersionDto,
     @RequestOrigin() origin: string,
-  ) {
+  ): Promise<ReviewedVersion> {
     return this.reviewsService.sendBack(user, id, n, body.comment, origin);
   }
 
@@ -61,7 +62,7 @@ export class ReviewsController {
     @Param('id', uuidParam('id')) id: string,
     @Param('n', intParam('n')) n: number,
     @RequestOrigin() origin: string,
-  ) {
+  ): Promise<ReviewedVersion> {
     return this.reviewsService.versionWithReviews(user, id, n, origin);
   }
 
@@ -104,7 +105,7 @@ export class ReviewsController {
 
   @Get('reviews/queue')
   @Roles('reviewer')
-  queue(@CurrentUser() user: AuthUser) {
+  queue(@CurrentUser() user: AuthUser): Promise<ReviewQueueItem[]> {
     return this.reviewsService.queue(user);
   }
 }

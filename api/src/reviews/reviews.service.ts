@@ -1,3 +1,4 @@
+import type { ReviewQueueItem, ReviewedVersion, VersionDetail } from '@loftwright/contract';
 import {
   BadRequestException,
   ConflictException,
@@ -15,7 +16,7 @@ import { CalculationVersion, type VersionStatus } from '../calculations/calculat
 import { Calculation } from '../calculations/calculation.entity';
 import { CalculationsService } from '../calculations/calculations.service';
 import type { EnvironmentVariables } from '../config/env.validation';
-import { WriteLock } from '../database/write-lock';
+import { WriteLock } from '../persistence/write-lock';
 import { decisionMail, submittedMail } from '../mail/mail-templates';
 import { MailService } from '../mail/mail.service';
 import { SignOffService } from '../sign-off/sign-off.service';
@@ -41,7 +42,12 @@ export class ReviewsService {
     return `${configuredBaseUrl(this.config)}/calculations/${calculationId}/versions/${number}`;
   }
 
-  async submit(user: AuthUser, id: string, number: number, reviewerId: string | undefined) {
+  async submit(
+    user: AuthUser,
+    id: string,
+    number: number,
+    reviewerId: string | undefined,
+  ): Promise<VersionDetail> {
     const calculation = await this.calculationsService.findReadable(user, id);
     const version = await this.calculationsService.findVersion(id, number);
     if (version.authorId !== user.id && calculation.ownerId !== user.id) {
@@ -120,11 +126,17 @@ export class ReviewsService {
     comment: string,
     origin: string,
     approverTimeZone?: string,
-  ) {
+  ): Promise<ReviewedVersion> {
     return this.decide(user, id, number, 'approved', comment, origin, approverTimeZone);
   }
 
-  sendBack(user: AuthUser, id: string, number: number, comment: string, origin: string) {
+  sendBack(
+    user: AuthUser,
+    id: string,
+    number: number,
+    comment: string,
+    origin: string,
+  ): Promise<ReviewedVersion> {
     return this.decide(user, id, number, 'changes_requested', comment, origin);
   }
 
@@ -141,7 +153,7 @@ export class ReviewsService {
     comment: string,
     origin: string,
     approverTimeZone?: string,
-  ) {
+  ): Promise<ReviewedVersion> {
     if (!hasRole(user, 'reviewer'))
       throw new ForbiddenException({ message: 'Reviewing needs the reviewer role.' });
     const calculation = await this.calculationsService.findReadable(user, id);
@@ -253,7 +265,12 @@ export class ReviewsService {
     if (Object.keys(changes).length > 0) await calculations.update({ id: calculation.id }, changes);
   }
 
-  async versionWithReviews(user: AuthUser, id: string, number: number, origin: string) {
+  async versionWithReviews(
+    user: AuthUser,
+    id: string,
+    number: number,
+    origin: string,
+  ): Promise<ReviewedVersion> {
     const version = await this.calculationsService.version(user, id, number);
     const stored = await this.calculationsService.findVersion(id, number);
     const reviews = await this.reviews.find({
@@ -286,7 +303,7 @@ export class ReviewsService {
   }
 
   /** Versions waiting for this reviewer: asked of them by name, or left open, and not their own. */
-  async queue(user: AuthUser) {
+  async queue(user: AuthUser): Promise<ReviewQueueItem[]> {
     const waiting = await this.versions
       .createQueryBuilder('version')
       .innerJoin(Calculation, 'calculation', 'calculation.id = version.calculation_id')

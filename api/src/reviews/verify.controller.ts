@@ -1,3 +1,4 @@
+import type { Verification } from '@loftwright/contract';
 import { Controller, Get, Param } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user';
@@ -17,7 +18,7 @@ export class VerifyController {
   verify(
     @Param('fingerprint', FingerprintPipe) fingerprint: string,
     @OptionalUser() user: AuthUser | undefined,
-  ) {
+  ): Promise<Verification> {
     return this.verifyService.verify(fingerprint, user);
   }
 }

@@ -1,3 +1,4 @@
+import type { Verification } from '@loftwright/contract';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { ENGINE_VERSION, evaluate, type OutputQuantity, sameResult } from '@loftwright/buoyancy';
@@ -33,7 +34,7 @@ export class VerifyService {
    * Whether a fingerprint belongs to an approved version, by whom and when it was approved, and
    * whether the engine running now still gives the same outputs from the stored inputs.
    */
-  async verify(fingerprint: string, reader?: AuthUser) {
+  async verify(fingerprint: string, reader?: AuthUser): Promise<Verification> {
     // Identical content has an identical fingerprint, so several approvals may share one.
     const approvedVersions = await this.versions.findBy({ fingerprint, status: 'approved' });
     if (approvedVersions.length === 0) {

@@ -1,7 +1,8 @@
-import type { InputSection } from '@loftwright/buoyancy';
+import type { InputSection, LiftSweep, NumberFormat, UnitSystem } from '@loftwright/buoyancy';
 import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
 import { fontRuns, type SheetFont, sheetFonts } from './sheet-fonts';
+import { drawSweepCharts, SWEEP_CHART_HEIGHT } from './sweep-chart-pdf';
 
 /** What the printed sheet shows (docs: ../shared/design.md, "Printed sign-off sheet"). */
 export interface SignOffContent {
@@ -18,18 +19,22 @@ export interface SignOffContent {
   /** The inputs as the editor shows them (labels, sections, units); engine describeInputs. */
   inputSections: InputSection[];
   outputs: Record<string, { label: string; value: number; unit: string; context?: string }>;
-  steps: {
+  steps: readonly {
     label: string;
     formula: string;
-    values: { symbol: string; value: number; unit: string }[];
+    values: readonly { symbol: string; value: number; unit: string }[];
     result: { symbol: string; value: number; unit: string };
     source: string;
   }[];
-  warnings: { severity: string; message: string }[];
+  warnings: readonly { severity: string; message: string }[];
   /** The approval; `timeZone` the approver's (IANA), when their browser said it. */
   review?: { reviewer: string; decidedAt: Date; comment: string; timeZone?: string };
   /** The verify page of the fingerprint, with host; printed and drawn as a QR code. */
   verifyUrl: string;
+  /** Lift sweeps of the kinds that chart them (engine liftSweeps), drawn as line charts. */
+  charts?: LiftSweep[];
+  /** The reader's units and number format for the charts; SI and 1,234.5 when not given. */
+  reading?: { unitSystem: UnitSystem; numberFormat: NumberFormat };
 }
 
 const MARGIN = 50;
@@ -74,7 +79,7 @@ export function approvalMomentText(moment: Date, timeZone?: string): string {
 }
 
 /** A 64-character fingerprint in four groups of 16, so a printed copy is read without losing place. */
-export const groupedFingerprint = (fingerprint: string) =>
+export const groupedFingerprint = (fingerprint: string): string =>
   fingerprint.match(/.{1,16}/g)?.join(' ') ?? fingerprint;
 
 /**
@@ -218,6 +223,27 @@ export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer>
       );
       doc.moveDown(0.3);
     }
+  }
+
+  const charts = content.charts ?? [];
+  if (charts.length > 0) {
+    // The heading and its note stay with the first chart.
+    if (doc.y + 70 + SWEEP_CHART_HEIGHT > doc.page.height - MARGIN) doc.addPage();
+    heading('Charts');
+    write(
+      'Net and free lift as one input changes, every other input as above; the dot is this version.',
+      sans,
+      9,
+      { color: GREY },
+    );
+    doc.moveDown(0.6);
+    drawSweepCharts(
+      doc,
+      charts,
+      { left: MARGIN, width, bottom: doc.page.height - MARGIN },
+      content.reading ?? { unitSystem: 'si', numberFormat: 'point-comma' },
+      { sans, bold },
+    );
   }
 
   heading('Derivation');

@@ -1,5 +1,11 @@
 import { Injectable, Logger } from '@nestjs/common';
-import { describeInputs, KINDS, type ReadableOptions } from '@loftwright/buoyancy';
+import {
+  describeInputs,
+  KINDS,
+  type LiftSweep,
+  liftSweeps,
+  type ReadableOptions,
+} from '@loftwright/buoyancy';
 import { AttachmentsService } from '../attachments/attachments.service';
 import type { AttachmentView } from '../attachments/attachment-views';
 import type { CalculationVersion } from '../calculations/calculation-version.entity';
@@ -7,7 +13,7 @@ import type { Calculation } from '../calculations/calculation.entity';
 import { renderSignOffPdf, type SignOffContent } from './sign-off-pdf';
 
 /** File name of an archived sheet: the title's letters and digits, the version. */
-export const sheetFileName = (title: string, number: number) =>
+export const sheetFileName = (title: string, number: number): string =>
   `${
     title
       .replace(/[^\p{L}\p{N}]+/gu, '-')
@@ -51,9 +57,9 @@ export class SignOffService {
       savedAt: version.createdAt,
       note: version.note,
       inputs: version.inputs,
-      outputs: version.outputs as SignOffContent['outputs'],
-      steps: version.steps as SignOffContent['steps'],
-      warnings: version.warnings as SignOffContent['warnings'],
+      outputs: version.outputs,
+      steps: version.steps,
+      warnings: version.warnings,
       review: {
         reviewer: people.reviewer,
         decidedAt,
@@ -66,6 +72,8 @@ export class SignOffService {
         version.inputs,
         SHEET_READING,
       ),
+      charts: this.charts(calculation.kind, version),
+      reading: SHEET_READING,
     };
     try {
       const bytes = await renderSignOffPdf(content);
@@ -86,6 +94,19 @@ export class SignOffService {
         `Could not archive the sign-off sheet of ${calculation.id} v${version.number}: ${String(error)}`,
       );
       return undefined;
+    }
+  }
+
+  /**
+   * The lift sweeps the kind charts (engine capabilities), from the version's inputs and stored
+   * results. They illustrate the sheet; if they cannot be drawn the sheet goes without them.
+   */
+  private charts(kind: string, version: CalculationVersion): LiftSweep[] {
+    try {
+      return liftSweeps(kind, version.inputs, version.outputs);
+    } catch (error) {
+      this.logger.warn(`No charts on the sheet of ${kind} v${version.number}: ${String(error)}`);
+      return [];
     }
   }
 }

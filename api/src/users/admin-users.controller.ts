@@ -1,3 +1,4 @@
+import type { Account } from '@loftwright/contract';
 import { Body, Controller, Get, Param, Patch } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user';
@@ -5,7 +6,7 @@ import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
 import { UpdateRolesDto } from './dto/update-roles.dto';
-import { type PublicUser, toPublicUser } from './user.entity';
+import { toPublicUser } from './user.entity';
 import { UsersService } from './users.service';
 
 @ApiTags('admin')
@@ -16,7 +17,7 @@ export class AdminUsersController {
   constructor(private readonly usersService: UsersService) {}
 
   @Get()
-  async list(): Promise<PublicUser[]> {
+  async list(): Promise<Account[]> {
     return (await this.usersService.list()).map(toPublicUser);
   }
 
@@ -25,7 +26,7 @@ export class AdminUsersController {
     @CurrentUser() actor: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: UpdateRolesDto,
-  ): Promise<PublicUser> {
+  ): Promise<Account> {
     return toPublicUser(await this.usersService.updateRoles(actor.id, id, body.roles));
   }
 }

@@ -1,6 +1,6 @@
-/** What a user may do; a user may hold several roles. */
-export const ROLES = ['admin', 'designer', 'reviewer', 'teacher', 'student'] as const;
-export type Role = (typeof ROLES)[number];
+import type { Role } from '@loftwright/contract';
+
+export { ROLES, type Role } from '@loftwright/contract';
 
 /** Roles that make up "the team": they see calculations shared with the team. */
 export const TEAM_ROLES: readonly Role[] = ['admin', 'designer', 'reviewer', 'teacher'];

@@ -1,8 +1,6 @@
-/** A user as other records show them: id and display name, never the e-mail or roles. */
-export interface UserRef {
-  id: string;
-  displayName: string;
-}
+import type { UserRef } from '@loftwright/contract';
+
+export type { UserRef };
 
 /** Display names by user id; an id of a deleted account reads "unknown user", null stays null. */
 export type NameLookup = (id: string | null) => UserRef | null;

@@ -1,3 +1,5 @@
+import type { Account } from '@loftwright/contract';
+import { accountPermissions } from './account-permissions';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import type { NumberFormat, UnitSystem } from './preferences';
 import type { Role } from './roles';
@@ -42,23 +44,13 @@ export class User {
 }
 
 /** A user as the API shows it: never the password hash or token version. */
-export interface PublicUser {
-  id: string;
-  email: string;
-  displayName: string;
-  roles: Role[];
-  unitSystem: UnitSystem;
-  numberFormat: NumberFormat;
-  currency: string;
-  createdAt: string;
-}
-
-export function toPublicUser(user: User): PublicUser {
+export function toPublicUser(user: User): Account {
   return {
     id: user.id,
     email: user.email,
     displayName: user.displayName,
     roles: user.roles,
+    permissions: accountPermissions(user.roles),
     unitSystem: user.unitSystem,
     numberFormat: user.numberFormat,
     currency: user.currency,

@@ -4,7 +4,7 @@ import { randomUUID } from 'node:crypto';
 import { In, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { fieldIssuesException } from '../common/errors/field-issues';
-import { WriteLock } from '../database/write-lock';
+import { WriteLock } from '../persistence/write-lock';
 import { PasswordHasher } from './password-hasher.service';
 import {
   DEFAULT_CURRENCY,

@@ -1,11 +1,11 @@
 import type { CalculationWarning, DerivationStep, OutputQuantity } from '@loftwright/buoyancy';
 import { isWithheldValue, numberAtPath, withheldByDerivation } from '@loftwright/buoyancy';
-import type { ExerciseSettings } from './worked-example.entity';
+import type { ExampleStep, ExerciseSettings, Question } from '@loftwright/contract';
 
 export interface ExampleContent {
   inputs: unknown;
   outputs: Record<string, OutputQuantity>;
-  steps: DerivationStep[];
+  steps: readonly DerivationStep[];
 }
 
 /** A problem with a teacher's settings, named by field, for a 400 answer. */
@@ -82,11 +82,15 @@ export function settingsIssues(
 }
 
 /** A step as a student sees it before answering: what is to be worked out is left blank. */
-export type MaskedStep = Omit<DerivationStep, 'result' | 'values'> & {
-  result: Omit<DerivationStep['result'], 'value'> & { value: number | null };
-  values: (Omit<DerivationStep['values'][number], 'value'> & { value: number | null })[];
-  hidden: boolean;
-};
+export type MaskedStep = ExampleStep;
+
+/** What a student sees of an exercise before answering, and what they are asked. */
+export interface MaskedContent {
+  outputs: Record<string, OutputQuantity>;
+  steps: MaskedStep[];
+  warnings: CalculationWarning[];
+  questions: Question[];
+}
 
 /**
  * The content with the exercise's answers taken out, by derivation: the hidden outputs, every
@@ -98,7 +102,7 @@ export type MaskedStep = Omit<DerivationStep, 'result' | 'values'> & {
 export function maskForExercise(
   content: ExampleContent & { warnings?: readonly CalculationWarning[] },
   exercise: ExerciseSettings,
-) {
+): MaskedContent {
   const hiddenStepIds = new Set(
     exercise.hiddenOutputs.flatMap((name) => content.outputs[name]?.stepId ?? []),
   );

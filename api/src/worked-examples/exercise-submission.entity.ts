@@ -1,3 +1,4 @@
+import type { Submission } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
 
 /** One attempt by a student at an exercise, with the engine's check of every answer. */
@@ -23,7 +24,7 @@ export class ExerciseSubmission {
 
   /** The engine's check (checkExerciseAnswers), with the tolerance it was checked at. */
   @Column('simple-json')
-  check: unknown;
+  check: Submission['check'];
 
   @Column('integer', { name: 'correct_count' })
   correctCount: number;

@@ -1,25 +1,18 @@
+import type {
+  CalculationWarning,
+  DataSeries,
+  DerivationStep,
+  OutputQuantity,
+} from '@loftwright/buoyancy';
+import type { ExerciseSettings, TryRanges } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 
-/** Limits a teacher sets on one input for "try it yourself", in the input's SI unit. */
-export type TryRanges = Record<string, { min: number; max: number }>;
-
-/**
- * When a student who has answered may see the engine's values: after a right answer, after a
- * right answer or a number of attempts, or only once the class is closed. A closed class shows
- * them under every rule.
- */
-export const REVEAL_RULES = ['after-correct', 'after-attempts', 'when-closed'] as const;
-export type RevealRule = (typeof REVEAL_RULES)[number];
-
-/** What makes an example an exercise: the outputs students must work out, and how close counts. */
-export interface ExerciseSettings {
-  hiddenOutputs: string[];
-  tolerancePercent: number;
-  /** Absent on exercises set before the rule existed: they reveal after a right answer. */
-  reveal?: RevealRule;
-  /** With 'after-attempts': how many attempts reveal the values. */
-  revealAfterAttempts?: number;
-}
+export {
+  REVEAL_RULES,
+  type ExerciseSettings,
+  type RevealRule,
+  type TryRanges,
+} from '@loftwright/contract';
 
 /**
  * A calculation version published to a class. The calculation content (inputs, outputs, steps,
@@ -55,19 +48,19 @@ export class WorkedExample {
   kind: string;
 
   @Column('simple-json')
-  inputs: unknown;
+  inputs: Record<string, unknown>;
 
   @Column('simple-json')
-  outputs: unknown;
+  outputs: Record<string, OutputQuantity>;
 
   @Column('simple-json')
-  steps: unknown;
+  steps: readonly DerivationStep[];
 
   @Column('simple-json')
-  warnings: unknown;
+  warnings: readonly CalculationWarning[];
 
   @Column('simple-json', { nullable: true })
-  series: unknown;
+  series: Record<string, DataSeries> | null;
 
   @Column('varchar', { name: 'engine_version' })
   engineVersion: string;

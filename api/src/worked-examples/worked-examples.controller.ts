@@ -1,3 +1,4 @@
+import type { ExampleDetail, ExampleSummary, Submission } from '@loftwright/contract';
 import {
   Body,
   Controller,
@@ -12,7 +13,6 @@ import {
   Res,
 } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import type { AnswerCheck } from '@loftwright/buoyancy';
 import type { Response } from 'express';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
@@ -31,7 +31,10 @@ export class WorkedExamplesController {
   constructor(private readonly examples: WorkedExamplesService) {}
 
   @Get('classes/:id/examples')
-  list(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  list(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<ExampleSummary[]> {
     return this.examples.listForClass(user, id);
   }
 
@@ -41,12 +44,15 @@ export class WorkedExamplesController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: PublishExampleDto,
-  ) {
+  ): Promise<ExampleDetail> {
     return this.examples.publish(user, id, body);
   }
 
   @Get('examples/:id')
-  get(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  get(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<ExampleDetail> {
     return this.examples.get(user, id);
   }
 
@@ -56,13 +62,13 @@ export class WorkedExamplesController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: ExampleSettingsDto,
-  ) {
+  ): Promise<ExampleDetail> {
     return this.examples.update(user, id, body);
   }
 
   @Delete('examples/:id')
   @HttpCode(HttpStatus.NO_CONTENT)
-  remove(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  remove(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string): Promise<void> {
     return this.examples.remove(user, id);
   }
 
@@ -71,12 +77,15 @@ export class WorkedExamplesController {
     @CurrentUser() user: AuthUser,
     @Param('id', uuidParam('id')) id: string,
     @Body() body: SubmitAnswersDto,
-  ) {
+  ): Promise<Submission> {
     return this.examples.submit(user, id, body.answers);
   }
 
   @Get('examples/:id/submissions')
-  submissions(@CurrentUser() user: AuthUser, @Param('id', uuidParam('id')) id: string) {
+  submissions(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+  ): Promise<Submission[]> {
     return this.examples.listSubmissions(user, id);
   }
 
@@ -89,7 +98,7 @@ export class WorkedExamplesController {
     @Res() response: Response,
   ): Promise<void> {
     const { example, steps, rows } = await this.examples.submissionTable(user, id);
-    const answersOf = (row: SubmissionRow) => (row.check as { answers: AnswerCheck[] }).answers;
+    const answersOf = (row: SubmissionRow) => row.check.answers;
     const stepLabel = (row: SubmissionRow) => {
       const stepId = (row.check as { firstWrongStepId: string | null }).firstWrongStepId;
       const index = steps.findIndex((step) => step.id === stepId);

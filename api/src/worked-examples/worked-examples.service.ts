@@ -1,4 +1,5 @@
-import type { CalculationWarning } from '@loftwright/buoyancy';
+import type { ExampleDetail, ExampleSummary, Submission } from '@loftwright/contract';
+import type { CalculationWarning, DerivationStep } from '@loftwright/buoyancy';
 import {
   ConflictException,
   ForbiddenException,
@@ -12,10 +13,10 @@ import { Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import { CalculationsService } from '../calculations/calculations.service';
-import { ClassroomsService, requireTeaching } from '../classrooms/classrooms.service';
+import { ClassroomsService, mayPublishTo, requireTeaching } from '../classrooms/classrooms.service';
 import { fieldIssuesException } from '../common/errors/field-issues';
-import { insertRow } from '../database/insert-row';
-import { WriteLock } from '../database/write-lock';
+import { insertRow } from '../persistence/insert-row';
+import { WriteLock } from '../persistence/write-lock';
 import { UsersService } from '../users/users.service';
 import type {
   ExampleSettingsDto,
@@ -50,6 +51,13 @@ const exerciseSettings = (dto: ExerciseSettingsDto | null | undefined): Exercise
 const shownSteps = (example: WorkedExample) =>
   (example.steps as ExampleContent['steps']).map((step) => ({ ...step, hidden: false }));
 
+/** The teacher's export of an exercise's attempts. */
+export interface SubmissionTable {
+  example: WorkedExample;
+  steps: readonly DerivationStep[];
+  rows: Submission[];
+}
+
 @Injectable()
 export class WorkedExamplesService {
   constructor(
@@ -67,7 +75,7 @@ export class WorkedExamplesService {
     return {
       inputs: example.inputs,
       outputs: example.outputs as Record<string, OutputQuantity>,
-      steps: example.steps as ExampleContent['steps'],
+      steps: example.steps,
       warnings: example.warnings as CalculationWarning[],
     };
   }
@@ -104,10 +112,21 @@ export class WorkedExamplesService {
     };
   }
 
-  async publish(user: AuthUser, classroomId: string, dto: PublishExampleDto) {
-    const classroom = await this.classrooms.findTaught(user, classroomId);
+  async publish(
+    user: AuthUser,
+    classroomId: string,
+    dto: PublishExampleDto,
+  ): Promise<ExampleDetail> {
+    const { classroom, standing } = await this.classrooms.findVisible(user, classroomId);
+    requireTeaching(standing);
     if (!hasRole(user, 'teacher')) {
       throw new ForbiddenException({ message: 'Publishing to a class needs the teacher role.' });
+    }
+    if (!mayPublishTo(user, classroom, standing)) {
+      throw new ConflictException({
+        message: 'The class is closed: nothing more is published to it.',
+        field: 'id',
+      });
     }
     const calculation = await this.calculations.findReadable(user, dto.calculationId).catch(() => {
       throw new NotFoundException({
@@ -177,7 +196,7 @@ export class WorkedExamplesService {
     return this.get(user, id);
   }
 
-  async listForClass(user: AuthUser, classroomId: string) {
+  async listForClass(user: AuthUser, classroomId: string): Promise<ExampleSummary[]> {
     const { standing } = await this.classrooms.findVisible(user, classroomId);
     const rows = await this.examples.find({
       where: { classroomId },
@@ -200,7 +219,7 @@ export class WorkedExamplesService {
    * The example as the user may see it. Teachers see everything. A student sees an exercise with
    * its answers blanked until their first submission, then in full with their attempts.
    */
-  async get(user: AuthUser, id: string) {
+  async get(user: AuthUser, id: string): Promise<ExampleDetail> {
     const { example, classroom, standing } = await this.findVisible(user, id);
     const teacher = await this.users.findById(example.teacherId);
     const base = {
@@ -255,7 +274,7 @@ export class WorkedExamplesService {
     };
   }
 
-  async update(user: AuthUser, id: string, dto: ExampleSettingsDto) {
+  async update(user: AuthUser, id: string, dto: ExampleSettingsDto): Promise<ExampleDetail> {
     const { example } = await this.findTaught(user, id);
     const issues = settingsIssues(this.content(example), dto);
     if (issues.length > 0) throw fieldIssuesException(issues);
@@ -301,8 +320,8 @@ export class WorkedExamplesService {
     submission: ExerciseSubmission,
     student: { id: string; displayName: string } | null,
     revealed = true,
-  ) {
-    const check = submission.check as { answers: Record<string, unknown>[] };
+  ): Submission {
+    const check = submission.check;
     return {
       id: submission.id,
       exampleId: submission.exampleId,
@@ -330,7 +349,7 @@ export class WorkedExamplesService {
    * A student's answers, checked against the engine's value recomputed from the example's inputs
    * (never against numbers a client sent or stored ones), at the exercise's tolerance.
    */
-  async submit(user: AuthUser, id: string, answers: Record<string, unknown>) {
+  async submit(user: AuthUser, id: string, answers: Record<string, unknown>): Promise<Submission> {
     const { example, classroom, standing } = await this.findVisible(user, id);
     if (standing !== 'student') {
       throw new ForbiddenException({ message: 'Only students of the class submit answers.' });
@@ -375,6 +394,7 @@ export class WorkedExamplesService {
       given,
       example.exercise.tolerancePercent / 100,
     );
+    const { tolerancePercent } = example.exercise;
     const submissionId = randomUUID();
     await this.writeLock.run(async () => {
       const attempt = (await this.submissions.countBy({ exampleId: id, studentId: user.id })) + 1;
@@ -384,7 +404,7 @@ export class WorkedExamplesService {
         studentId: user.id,
         attempt,
         answers: given,
-        check: { ...check, tolerancePercent: example.exercise?.tolerancePercent },
+        check: { ...check, tolerancePercent },
         correctCount: check.correctCount,
         answerCount: check.answers.length,
         allCorrect: check.allCorrect,
@@ -406,7 +426,7 @@ export class WorkedExamplesService {
   }
 
   /** Every attempt for the teacher; a student's own attempts for a student. */
-  async listSubmissions(user: AuthUser, id: string) {
+  async listSubmissions(user: AuthUser, id: string): Promise<Submission[]> {
     const { example, classroom, standing } = await this.findVisible(user, id);
     const rows = await this.submissions.find({
       where: standing === 'student' ? { exampleId: id, studentId: user.id } : { exampleId: id },
@@ -420,8 +440,8 @@ export class WorkedExamplesService {
     return rows.map((row) => this.submissionView(row, names(row.studentId), revealed));
   }
 
-  /** The rows of the teacher's submissions export. */
-  async submissionTable(user: AuthUser, id: string) {
+  /** The rows of the teacher's submissions export, with the example they answer. */
+  async submissionTable(user: AuthUser, id: string): Promise<SubmissionTable> {
     const { example } = await this.findTaught(user, id);
     return {
       example,

@@ -11,6 +11,15 @@ export interface ServerProcess {
   output(): string;
 }
 
+/**
+ * Every server a test started, so none outlives the test run: a test that times out while a server
+ * is still starting never gets its handle, and the worker's exit must take the process down.
+ */
+const started = new Set<ChildProcess>();
+process.once('exit', () => {
+  for (const child of started) if (child.exitCode === null) child.kill('SIGKILL');
+});
+
 async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
     const server = createServer();
@@ -43,6 +52,8 @@ export async function startServerProcess(
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
+  started.add(child);
+  child.once('exit', () => started.delete(child));
   let printed = '';
   child.stdout?.on('data', (chunk: Buffer) => (printed += chunk.toString()));
   child.stderr?.on('data', (chunk: Buffer) => (printed += chunk.toString()));

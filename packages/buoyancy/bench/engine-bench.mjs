@@ -1,7 +1,7 @@
 // Speed of the engine as shipped (dist), against goals stated as ratios and medians. Prints a
 // table; it is a measurement, not a test, and always exits 0 unless the engine throws.
 import { Bench } from 'tinybench';
-import { evaluate, fastLift, sweepSphereDiameter } from '../dist/index.js';
+import { evaluate, fastLift, liftSweeps, sweepSphereDiameter } from '../dist/index.js';
 
 const fastInput = {
   volumeM3: 0.0731,
@@ -41,6 +41,63 @@ const flightInputs = {
   timeStepS: 1,
 };
 
+// The lift check the web's lift charts draw: its size, air-temperature and purity sweeps.
+const chartedLiftCheck = {
+  envelope: { shape: 'sphere', diameterM: 1.4 },
+  envelopeMass: { kind: 'areal', arealDensityKgM2: 0.05, fittingsKg: 0.02 },
+  payloadMassKg: 0.25,
+  gas: { gasId: 'hydrogen', purity: 0.97 },
+  ambient: {
+    mode: 'measured',
+    temperatureK: 288.15,
+    pressurePa: 101325,
+    humidity: { kind: 'relative', relativeHumidity: 0.5 },
+  },
+};
+
+// The same three sweeps as the web built them before they moved into the engine: the full
+// evaluate('lift-check', ...) at each of the 61 points of a curve, and once for its design point.
+function sweepsThroughEvaluate(inputs) {
+  const liftAt = (changed, x) => {
+    try {
+      const { outputs } = evaluate('lift-check', changed);
+      return { x, netKg: outputs.netLift.value, freeKg: outputs.freeLift.value };
+    } catch {
+      return undefined;
+    }
+  };
+  const sweep = (from, to, inputsAt) => {
+    const points = [];
+    for (let index = 0; index <= 60; index += 1) {
+      const x = from + ((to - from) * index) / 60;
+      const point = liftAt(inputsAt(x), x);
+      if (point) points.push(point);
+    }
+    return points;
+  };
+  const { envelope, ambient, gas } = inputs;
+  return [
+    {
+      design: liftAt(inputs, envelope.diameterM),
+      points: sweep(0.4 * envelope.diameterM, 2 * envelope.diameterM, (diameterM) => ({
+        ...inputs,
+        envelope: { ...envelope, diameterM },
+      })),
+    },
+    {
+      design: liftAt(inputs, ambient.temperatureK),
+      points: sweep(ambient.temperatureK - 25, ambient.temperatureK + 25, (temperatureK) => ({
+        ...inputs,
+        ambient: { ...ambient, temperatureK },
+      })),
+    },
+    {
+      design: liftAt(inputs, gas.purity),
+      points: sweep(0.5, 1, (purity) => ({ ...inputs, gas: { ...gas, purity } })),
+    },
+  ];
+}
+
 // Two inputs alternated, so neither side can be folded into a constant.
 const fastInputs = [fastInput, { ...fastInput, volumeM3: 0.0732 }];
 const volumes = [0.0731, 0.0732];
@@ -65,6 +122,12 @@ bench
       1000,
     );
     sink += sweep[999].freeLiftKg;
+  })
+  .add('lift-check chart sweeps through evaluate (3 × 61 points)', () => {
+    sink += sweepsThroughEvaluate(chartedLiftCheck)[2].points[60].freeKg;
+  })
+  .add('lift-check chart sweeps on the fast path (liftSweeps)', () => {
+    sink += liftSweeps('lift-check', chartedLiftCheck)[2].points[60].freeKg;
   })
   .add('flight profile to burst at 1 s steps (with steps and series)', () => {
     sink += evaluate('flight-profile', flightInputs).outputs.ascentTime.value;
@@ -93,6 +156,8 @@ const inlined = median('hand-inlined lift formula');
 const sweep = median('1,000-point diameter sweep');
 const flight = median('flight profile to burst at 1 s steps (with steps and series)');
 const full = median('lift check through evaluate (validation and derivation)');
+const slowSweeps = median('lift-check chart sweeps through evaluate (3 × 61 points)');
+const fastSweeps = median('lift-check chart sweeps on the fast path (liftSweeps)');
 
 const rows = [
   [
@@ -102,6 +167,13 @@ const rows = [
     fast / inlined <= 3,
   ],
   ['1,000-point diameter sweep, median', ms(sweep), '< 2 ms', sweep < 2],
+  ['lift-check chart sweeps (liftSweeps), median', ms(fastSweeps), '< 1 ms', fastSweeps < 1],
+  [
+    'lift-check chart sweeps through evaluate / liftSweeps',
+    `${(slowSweeps / fastSweeps).toFixed(1)} x`,
+    '(for information)',
+    true,
+  ],
   ['flight profile to burst at 1 s steps, median', ms(flight), '< 10 ms', flight < 10],
   [
     'lift check through evaluate / without steps',

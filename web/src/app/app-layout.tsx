@@ -33,20 +33,16 @@ export function AppLayout() {
     ...(signedIn
       ? [
           { href: paths.calculations.href(), icon: <TableOutlined />, label: 'Calculations' },
-          ...(user?.roles.some(
-            (role) => role === 'designer' || role === 'teacher' || role === 'admin',
-          )
+          ...(user?.permissions.planGas
             ? [{ href: paths.plans.href(), icon: <FireOutlined />, label: 'Gas plans' }]
             : []),
-          ...(user?.roles.some(
-            (role) => role === 'teacher' || role === 'student' || role === 'admin',
-          )
+          ...(user?.permissions.seeClasses
             ? [{ href: paths.classes.href(), icon: <TeamOutlined />, label: 'Classes' }]
             : []),
-          ...(user?.roles.includes('reviewer')
+          ...(user?.permissions.review
             ? [{ href: paths.reviews.href(), icon: <AuditOutlined />, label: 'Review queue' }]
             : []),
-          ...(user?.roles.includes('admin')
+          ...(user?.permissions.administer
             ? [{ href: paths.admin.href(), icon: <SettingOutlined />, label: 'Admin' }]
             : []),
         ]

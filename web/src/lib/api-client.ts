@@ -1,12 +1,8 @@
 import axios, { AxiosError } from 'axios';
+import type { ApiErrorBody, ApiIssue } from '@loftwright/contract';
 import { getToken, setToken } from './session';
 
-/** One problem the API found with a request field. */
-export interface ApiIssue {
-  field: string;
-  reason: string;
-  range?: { min?: number; max?: number; unit: string };
-}
+export type { ApiIssue } from '@loftwright/contract';
 
 /** An API failure as the UI shows it: status, message and, where the API names one, the field. */
 export class ApiError extends Error {
@@ -24,11 +20,10 @@ export class ApiError extends Error {
   }
 }
 
-interface ErrorBody {
+/** What a failed request's body may hold; a proxy in front may answer with anything. */
+type ErrorBody = Partial<Pick<ApiErrorBody, 'field' | 'issues'>> & {
   message?: string | string[];
-  field?: string;
-  issues?: ApiIssue[];
-}
+};
 
 function toApiError(error: unknown): ApiError {
   if (error instanceof AxiosError) {

@@ -1,9 +1,10 @@
+import type { AuditQuery } from '@loftwright/contract';
 import { ApiPropertyOptional, IntersectionType } from '@nestjs/swagger';
 import { IsISO8601, IsOptional, IsString, IsUUID, MaxLength } from 'class-validator';
 import { ExportFormatQuery } from '../../common/export/export-format.query';
 import { PageQueryDto } from '../../common/dto/page-query.dto';
 
-export class ListAuditDto extends PageQueryDto {
+export class ListAuditDto extends PageQueryDto implements AuditQuery {
   @ApiPropertyOptional({ example: 'version.approve' })
   @IsOptional()
   @IsString()

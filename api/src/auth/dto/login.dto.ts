@@ -1,7 +1,8 @@
+import type { SignInBody } from '@loftwright/contract';
 import { ApiProperty } from '@nestjs/swagger';
 import { IsString, MaxLength, MinLength } from 'class-validator';
 
-export class LoginDto {
+export class LoginDto implements SignInBody {
   @ApiProperty({ example: 'designer@demo.test' })
   @IsString()
   @MinLength(3)

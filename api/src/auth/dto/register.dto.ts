@@ -1,10 +1,11 @@
+import type { ConfirmRegistrationBody, RegisterBody } from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsEmail, IsOptional, IsString, Length, MaxLength, MinLength } from 'class-validator';
 import { type NumberFormat, NUMBER_FORMATS } from '../../users/preferences';
 import { IsBcryptSafe } from './password.validator';
 import { IsNumberFormat, IsSent } from './preference.validators';
 
-export class RegisterDto {
+export class RegisterDto implements RegisterBody {
   @ApiProperty({ example: 'wren@example.org' })
   @IsEmail({}, { message: 'email must be an e-mail address' })
   @MaxLength(254)
@@ -41,7 +42,7 @@ export class RegisterDto {
   numberFormat?: NumberFormat;
 }
 
-export class ConfirmRegistrationDto {
+export class ConfirmRegistrationDto implements ConfirmRegistrationBody {
   @ApiProperty({ description: 'the token from the link mailed at registration' })
   @IsString({ message: 'token must be text' })
   @Length(20, 200, { message: 'token is not a registration token' })

@@ -1,3 +1,4 @@
+import type { Preferences } from '@loftwright/contract';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import {
   type NumberFormat,
@@ -8,7 +9,7 @@ import {
 import { IsCurrencyCode, IsNumberFormat, IsSent, IsUnitSystem } from './preference.validators';
 
 /** Any of the account's preferences; at least one must be sent (UsersService.setPreferences). */
-export class UpdatePreferencesDto {
+export class UpdatePreferencesDto implements Partial<Preferences> {
   @ApiPropertyOptional({ enum: [...UNIT_SYSTEMS] })
   @IsSent()
   @IsUnitSystem()

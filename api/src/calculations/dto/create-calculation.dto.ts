@@ -1,3 +1,4 @@
+import type { CreateCalculationBody } from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   ArrayMaxSize,
@@ -15,7 +16,7 @@ import { type Visibility, VISIBILITIES } from '../calculation.entity';
 
 export const TAG_PATTERN = /^[\p{L}\p{N}][\p{L}\p{N} ._-]{0,39}$/u;
 
-export class CreateCalculationDto {
+export class CreateCalculationDto implements CreateCalculationBody {
   @ApiProperty({ example: 'Survey pod envelope, spring campaign' })
   @IsString()
   @MinLength(1)

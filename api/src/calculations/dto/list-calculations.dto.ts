@@ -1,3 +1,4 @@
+import type { CalculationListQuery } from '@loftwright/contract';
 import { ApiPropertyOptional, IntersectionType } from '@nestjs/swagger';
 import { IsIn, IsOptional, IsString, MaxLength } from 'class-validator';
 import { ExportFormatQuery } from '../../common/export/export-format.query';
@@ -8,7 +9,7 @@ import { VERSION_STATUSES } from '../calculation-version.entity';
 export const SORT_FIELDS = ['updatedAt', 'createdAt', 'title', 'kind', 'status'] as const;
 export const SORTS = SORT_FIELDS.flatMap((field) => [field, `-${field}`]);
 
-export class ListCalculationsDto extends PageQueryDto {
+export class ListCalculationsDto extends PageQueryDto implements CalculationListQuery {
   @ApiPropertyOptional({
     enum: SORTS,
     default: '-updatedAt',

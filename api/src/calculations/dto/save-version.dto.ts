@@ -1,7 +1,8 @@
+import type { SaveVersionBody } from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsInt, IsObject, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
 
-export class SaveVersionDto {
+export class SaveVersionDto implements SaveVersionBody {
   @ApiProperty({ description: 'the version number this edit started from', example: 1 })
   @IsInt()
   @Min(1)

@@ -1,7 +1,8 @@
+import type { CreateClassBody, JoinClassBody, RenewJoinCodeBody } from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsInt, IsOptional, IsString, Max, MaxLength, Min, MinLength } from 'class-validator';
 
-export class CreateClassroomDto {
+export class CreateClassroomDto implements CreateClassBody {
   @ApiProperty({ example: 'Physics 11B: buoyancy week' })
   @IsString()
   @MinLength(1, { message: 'title must not be empty' })
@@ -16,7 +17,7 @@ export class CreateClassroomDto {
   joinCodeValidDays?: number;
 }
 
-export class RenewJoinCodeDto {
+export class RenewJoinCodeDto implements RenewJoinCodeBody {
   @ApiPropertyOptional({ description: 'days the new code admits students (default 14)' })
   @IsOptional()
   @IsInt({ message: 'joinCodeValidDays must be a whole number of days' })
@@ -25,7 +26,7 @@ export class RenewJoinCodeDto {
   joinCodeValidDays?: number;
 }
 
-export class JoinClassroomDto {
+export class JoinClassroomDto implements JoinClassBody {
   @ApiProperty({ example: 'K7QM-3XPA', description: 'the code the teacher handed out' })
   @IsString({ message: 'code must be text' })
   @MinLength(1, { message: 'code must not be empty' })

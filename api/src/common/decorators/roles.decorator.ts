@@ -1,7 +1,7 @@
-import { SetMetadata } from '@nestjs/common';
+import { type CustomDecorator, SetMetadata } from '@nestjs/common';
 import type { Role } from '../../users/roles';
 
 export const ROLES_KEY = 'roles';
 
 /** The route needs a user holding at least one of these roles. */
-export const Roles = (...roles: Role[]) => SetMetadata(ROLES_KEY, roles);
+export const Roles = (...roles: Role[]): CustomDecorator<string> => SetMetadata(ROLES_KEY, roles);

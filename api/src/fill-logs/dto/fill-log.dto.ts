@@ -1,3 +1,5 @@
+import type { AddReadingsBody, FillLogBody } from '@loftwright/contract';
+import { GAS_SOURCES, type GasSource } from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -13,8 +15,6 @@ import {
   MaxLength,
   ValidateNested,
 } from 'class-validator';
-
-export const GAS_SOURCES = ['electrolysis', 'cylinder', 'delivered', 'other'] as const;
 
 export class FillAmbientDto {
   @ApiProperty({ description: 'air temperature at the fill [K]', example: 287.2 })
@@ -48,7 +48,8 @@ export class FillInstrumentDto {
   ballastToleranceKg: number;
 }
 
-export class CreateFillLogDto {
+// The parts the engine checks arrive as plain objects; the rest is held to the contract.
+export class CreateFillLogDto implements Omit<FillLogBody, 'ambient' | 'readings' | 'instrument'> {
   @ApiProperty({ example: '2026-11-28T09:40:00Z' })
   @IsISO8601({ strict: true }, { message: 'filledAt must be a date and time (ISO 8601)' })
   filledAt: string;
@@ -67,7 +68,7 @@ export class CreateFillLogDto {
 
   @ApiProperty({ enum: GAS_SOURCES })
   @IsIn(GAS_SOURCES, { message: `gasSource must be one of: ${GAS_SOURCES.join(', ')}` })
-  gasSource: string;
+  gasSource: GasSource;
 
   @ApiProperty({ type: FillAmbientDto })
   @ValidateNested()
@@ -102,8 +103,11 @@ export class CreateFillLogDto {
 
 export class UpdateFillLogDto extends PartialType(CreateFillLogDto) {}
 
-/** Readings from an import, checked all together and stored in one write, or not at all. */
-export class AddReadingsDto {
+/**
+ * Readings from an import, checked all together and stored in one write, or not at all. The
+ * readings arrive as plain objects for the engine to check; the rest is held to the contract.
+ */
+export class AddReadingsDto implements Omit<AddReadingsBody, 'readings'> {
   @ApiProperty({ enum: ['append', 'replace'] })
   @IsIn(['append', 'replace'])
   mode: 'append' | 'replace';

@@ -1,3 +1,4 @@
+import type { PlanLineInput, SavePlanBody } from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -19,7 +20,7 @@ import {
 } from 'class-validator';
 
 /** One kind of envelope: a saved calculation version, or a gas volume entered directly. */
-export class PlanLineDto {
+export class PlanLineDto implements PlanLineInput {
   @ApiPropertyOptional({ example: 'Survey sondes' })
   @IsOptional()
   @IsString()
@@ -71,7 +72,11 @@ export class PlanFillDto {
   pressurePa: number;
 }
 
-export class SavePlanDto {
+// The parts the engine checks arrive as plain objects; the rest is held to the contract.
+export class SavePlanDto implements Omit<
+  SavePlanBody,
+  'electrolyser' | 'measured' | 'cylinder' | 'prices'
+> {
   @ApiProperty({ example: 'Spring launch weekend' })
   @IsString()
   @MinLength(1)

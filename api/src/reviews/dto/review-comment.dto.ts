@@ -1,3 +1,4 @@
+import type { AddReviewCommentBody, MarkAddressedBody } from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
@@ -26,7 +27,7 @@ export class CommentAnchorDto {
   path: string;
 }
 
-export class AddReviewCommentDto {
+export class AddReviewCommentDto implements AddReviewCommentBody {
   @ApiProperty({ example: 'The film was weighed at 52 g/m², not 45.' })
   @IsString({ message: 'body must be text' })
   @MinLength(1, { message: 'body must not be empty' })
@@ -40,7 +41,7 @@ export class AddReviewCommentDto {
   anchor?: CommentAnchorDto;
 }
 
-export class MarkAddressedDto {
+export class MarkAddressedDto implements MarkAddressedBody {
   @ApiProperty({ example: 4, description: 'the later version that addresses the comment' })
   @Type(() => Number)
   @IsInt({ message: 'versionNumber must be a whole number' })

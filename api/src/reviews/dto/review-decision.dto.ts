@@ -1,10 +1,15 @@
+import type {
+  ApproveVersionBody,
+  SendBackVersionBody,
+  SubmitVersionBody,
+} from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { IsOptional, IsString, IsUUID, MaxLength, MinLength, ValidateBy } from 'class-validator';
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 
-export class SubmitVersionDto {
+export class SubmitVersionDto implements SubmitVersionBody {
   @ApiPropertyOptional({
     description: 'the reviewer asked for; leave out to let any reviewer take it',
   })
@@ -24,7 +29,7 @@ const isTimeZone = (value: unknown) => {
   }
 };
 
-export class ApproveVersionDto {
+export class ApproveVersionDto implements ApproveVersionBody {
   @ApiPropertyOptional({ example: 'Checked against the fill log of the test envelope.' })
   @IsOptional()
   @Transform(trim)
@@ -48,7 +53,7 @@ export class ApproveVersionDto {
   timeZone?: string;
 }
 
-export class SendBackVersionDto {
+export class SendBackVersionDto implements SendBackVersionBody {
   @ApiProperty({ example: 'Use the measured film mass, not the catalogue value.' })
   @Transform(trim)
   @IsString()

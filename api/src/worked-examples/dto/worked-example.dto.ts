@@ -1,3 +1,9 @@
+import type {
+  ExampleSettings,
+  ExerciseSettings,
+  PublishExampleBody,
+  SubmitAnswersBody,
+} from '@loftwright/contract';
 import { Nullable } from '../../common/pipes/request-shape';
 import { REVEAL_RULES, type RevealRule } from '../worked-example.entity';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
@@ -20,7 +26,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 
-export class ExerciseSettingsDto {
+export class ExerciseSettingsDto implements ExerciseSettings {
   @ApiProperty({ example: ['grossLift'], description: 'outputs the students must work out' })
   @IsArray()
   @ArrayMinSize(1, { message: 'exercise.hiddenOutputs needs at least one output' })
@@ -53,7 +59,7 @@ export class ExerciseSettingsDto {
 }
 
 /** What a teacher may set around a published example; the calculation content stays fixed. */
-export class ExampleSettingsDto {
+export class ExampleSettingsDto implements ExampleSettings {
   @ApiPropertyOptional({ example: 'How much does a litre of helium lift?' })
   @IsOptional()
   @IsString()
@@ -95,7 +101,7 @@ export class ExampleSettingsDto {
   exercise?: ExerciseSettingsDto | null;
 }
 
-export class PublishExampleDto extends ExampleSettingsDto {
+export class PublishExampleDto extends ExampleSettingsDto implements PublishExampleBody {
   @ApiProperty()
   @IsUUID('4', { message: 'calculationId must be a calculation id (a UUID)' })
   calculationId: string;
@@ -106,7 +112,7 @@ export class PublishExampleDto extends ExampleSettingsDto {
   versionNumber: number;
 }
 
-export class SubmitAnswersDto {
+export class SubmitAnswersDto implements SubmitAnswersBody {
   @ApiProperty({
     example: { grossLift: 1.114 },
     description: 'an answer per hidden output, in the unit the output is given in',

@@ -96,10 +96,12 @@ export const envelopeSizingSchema = z
   .strict();
 
 export type EnvelopeSizingInput = z.input<typeof envelopeSizingSchema>;
-type ShapeFamily = z.output<typeof shapeFamilySchema>;
+/** A sizing's inputs as the kind reads them, defaults filled in. */
+export type EnvelopeSizingValues = z.output<typeof envelopeSizingSchema>;
+export type ShapeFamily = z.output<typeof shapeFamilySchema>;
 
 /** The envelope of a family at characteristic size s (diameter, equatorial or flat diameter). */
-function envelopeAtSize(family: ShapeFamily, sizeM: number): EnvelopeInput & EnvelopeShape {
+export function envelopeAtSize(family: ShapeFamily, sizeM: number): EnvelopeInput & EnvelopeShape {
   switch (family.shape) {
     case 'sphere':
       return { shape: 'sphere', diameterM: sizeM };

@@ -27,6 +27,8 @@ export const liftCheckSchema = z
   .strict();
 
 export type LiftCheckInput = z.input<typeof liftCheckSchema>;
+/** A lift check's inputs as the kind reads them, defaults filled in. */
+export type LiftCheckValues = z.output<typeof liftCheckSchema>;
 
 /** Superpressure above which the lift check notes the ideal-gas error (one atmosphere) [Pa]. */
 const IDEAL_GAS_NOTE_SUPERPRESSURE_PA = 101325;

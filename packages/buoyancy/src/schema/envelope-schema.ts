@@ -5,6 +5,11 @@ import { quantity } from './quantity-schema.js';
 import { type UsualRange, usually } from './usual-range.js';
 import { USUAL } from './usual-ranges.js';
 
+/** Measured circumference of a sphere the inputs accept [m]. */
+export const CIRCUMFERENCE_RANGE_M = { min: 0.03, max: 1600 } as const;
+/** Overall length of a capsule the inputs accept [m]; the geometry also wants it ≥ its diameter. */
+export const CAPSULE_LENGTH_RANGE_M = { min: ENVELOPE_SIZE_RANGE_M.min, max: 2000 } as const;
+
 const size = (description: string, usual: UsualRange = USUAL.envelopeAcrossM) =>
   usually(
     quantity('length', ENVELOPE_SIZE_RANGE_M.min, ENVELOPE_SIZE_RANGE_M.max, description),
@@ -29,7 +34,12 @@ export const envelopeSchema = z
       .object({
         shape: z.literal('sphere-circumference'),
         circumferenceM: usually(
-          quantity('length', 0.03, 1600, 'measured circumference at the equator'),
+          quantity(
+            'length',
+            CIRCUMFERENCE_RANGE_M.min,
+            CIRCUMFERENCE_RANGE_M.max,
+            'measured circumference at the equator',
+          ),
           USUAL.envelopeCircumferenceM,
         ),
       })
@@ -46,7 +56,12 @@ export const envelopeSchema = z
         shape: z.literal('capsule'),
         diameterM: size('diameter of the cylinder and its hemispherical ends'),
         lengthM: usually(
-          quantity('length', ENVELOPE_SIZE_RANGE_M.min, 2000, 'overall length, ends included'),
+          quantity(
+            'length',
+            CAPSULE_LENGTH_RANGE_M.min,
+            CAPSULE_LENGTH_RANGE_M.max,
+            'overall length, ends included',
+          ),
           USUAL.envelopeLengthM,
         ),
         axis: capsuleAxis,

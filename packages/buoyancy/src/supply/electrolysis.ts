@@ -6,6 +6,9 @@ import { FARADAY_C_PER_MOL } from '../constants.js';
  */
 export const HYDROGEN_HHV_J_PER_KG = 141.88e6;
 
+/** Lowest voltage across one cell the gas-supply kind accepts, typed or from a stack [V]. */
+export const CELL_VOLTAGE_FLOOR_V = 1;
+
 /**
  * Hydrogen produced by water electrolysis, by Faraday's law: two electrons per H₂ molecule, so
  * ṅ = I·N·η_F / (2F) for N cells in series carrying current I at faradaic efficiency η_F.

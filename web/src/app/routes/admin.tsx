@@ -6,7 +6,7 @@ import { UsersTable } from '@/features/admin/components/users-table';
 
 export function AdminRoute() {
   const { user } = useMe();
-  if (!user?.roles.includes('admin')) {
+  if (!user?.permissions.administer) {
     return (
       <Result
         status="403"

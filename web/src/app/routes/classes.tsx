@@ -12,8 +12,8 @@ import { PublishExampleForm } from '@/features/classroom/components/publish-exam
 export function ClassesRoute() {
   const navigate = useNavigate();
   const { user } = useMe();
-  const teaches = user?.roles.includes('teacher') ?? false;
-  const studies = user?.roles.includes('student') ?? false;
+  const teaches = user?.permissions.runClasses ?? false;
+  const studies = user?.permissions.joinClasses ?? false;
   return (
     <>
       <Typography.Title level={1}>Classes</Typography.Title>
@@ -74,7 +74,7 @@ export function ClassRoute() {
                   forStudent={false}
                 />
               </Card>
-              {user && !data.closed && user.roles.includes('teacher') ? (
+              {user && data.permissions.publish ? (
                 <PublishExampleForm
                   classId={data.id}
                   userId={user.id}
@@ -117,7 +117,7 @@ export function JoinRoute() {
   return (
     <>
       <Typography.Title level={2}>Join a class</Typography.Title>
-      {user && !user.roles.includes('student') ? (
+      {user && !user.permissions.joinClasses ? (
         <Alert
           type="info"
           showIcon

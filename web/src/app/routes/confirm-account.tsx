@@ -19,7 +19,7 @@ export function ConfirmAccountRoute() {
     confirm.mutate(token, {
       onSuccess: ({ user }) =>
         void navigate(
-          user.roles.includes('student') ? paths.classes.href() : paths.calculations.href(),
+          user.permissions.joinClasses ? paths.classes.href() : paths.calculations.href(),
           { replace: true },
         ),
     });

@@ -1,11 +1,15 @@
-import { Alert, Space, Spin, Tabs, Tag, Typography } from 'antd';
-import type { CalculationResult, DerivationStep } from '@loftwright/buoyancy';
-import { lazy, Suspense, useState } from 'react';
+import { Alert, Space, Spin, Tabs, Typography } from 'antd';
+import type { CalculationResult, DerivationStep, UnitSystem } from '@loftwright/buoyancy';
+import { lazy, type ReactNode, Suspense, useState } from 'react';
 import { PanelBoundary } from '@/components/errors/panel-boundary';
-import { Link, useParams } from 'react-router-dom';
-import { paths } from '@/config/paths';
+import { useParams } from 'react-router-dom';
 import { useMe } from '@/features/auth/api/auth-api';
 import { type ExampleDetail, useExample } from '@/features/classroom/api/classroom-api';
+import {
+  ExamplePublishedNote,
+  ExampleTitle,
+  ExampleWarningAlert,
+} from '@/features/classroom/components/example-heading';
 import { ExampleSettingsForm } from '@/features/classroom/components/example-settings';
 import { ExercisePanel } from '@/features/classroom/components/exercise-panel';
 import { SubmissionsTable } from '@/features/classroom/components/submissions-table';
@@ -19,8 +23,6 @@ const CalculationCharts = lazy(() =>
   })),
 );
 
-const SEVERITY = { caution: 'error', warning: 'warning', note: 'info' } as const;
-
 /** The result as the charts take it; only for a fully revealed example. */
 function chartResult(example: ExampleDetail): CalculationResult {
   return {
@@ -31,31 +33,29 @@ function chartResult(example: ExampleDetail): CalculationResult {
   };
 }
 
-export function ExampleRoute() {
-  const { id = '' } = useParams();
-  const { user } = useMe();
-  const example = useExample(id);
-  const [tab, setTab] = useState('walk');
-  if (example.isPending) return <Spin description="Loading the worked example…" />;
-  if (example.error) return <Alert type="warning" showIcon title={example.error.message} />;
-  const data = example.data;
-  const unitSystem = user?.unitSystem ?? 'si';
-  const teaching = data.standing !== 'student';
-  const wrongStepId = data.mySubmissions[0]?.check.firstWrongStepId ?? null;
-  const chart = data.revealed ? (
+/** The example's chart, loaded when first shown. */
+function ExampleChart({ example, unitSystem }: { example: ExampleDetail; unitSystem: UnitSystem }) {
+  return (
     <PanelBoundary what="the chart">
       <Suspense fallback={<Spin description="Loading the chart…" />}>
         <CalculationCharts
-          kind={data.kind}
-          inputs={data.inputs}
-          result={chartResult(data)}
+          kind={example.kind}
+          inputs={example.inputs}
+          result={chartResult(example)}
           unitSystem={unitSystem}
         />
       </Suspense>
     </PanelBoundary>
-  ) : undefined;
+  );
+}
 
-  const items = [
+/**
+ * The tabs of an example: walk through and try it for all; the exercise for students; the
+ * submissions and set-up for those who teach the class.
+ */
+function exampleTabs(data: ExampleDetail, unitSystem: UnitSystem, chart: ReactNode) {
+  const teaching = data.standing !== 'student';
+  return [
     {
       key: 'walk',
       label: 'Walk through',
@@ -68,7 +68,7 @@ export function ExampleRoute() {
             notes={data.stepNotes}
             chart={chart}
             chartStepId={data.chartStepId}
-            wrongStepId={wrongStepId}
+            wrongStepId={data.mySubmissions[0]?.check.firstWrongStepId ?? null}
           />
         </PanelBoundary>
       ),
@@ -128,42 +128,35 @@ export function ExampleRoute() {
         ]
       : []),
   ];
+}
+
+export function ExampleRoute() {
+  const { id = '' } = useParams();
+  const { user } = useMe();
+  const example = useExample(id);
+  const [tab, setTab] = useState('walk');
+  if (example.isPending) return <Spin description="Loading the worked example…" />;
+  if (example.error) return <Alert type="warning" showIcon title={example.error.message} />;
+  const data = example.data;
+  const unitSystem = user?.unitSystem ?? 'si';
+  const chart = data.revealed ? <ExampleChart example={data} unitSystem={unitSystem} /> : undefined;
 
   return (
     <>
-      <Typography.Text type="secondary">
-        <Link to={paths.classroom.href(data.classroomId)}>{data.classroomTitle}</Link>
-      </Typography.Text>
-      <Typography.Title level={2} style={{ marginTop: 4 }}>
-        {data.title}{' '}
-        {data.exercise ? (
-          <Tag color="warning">exercise, ±{data.exercise.tolerancePercent} %</Tag>
-        ) : null}
-      </Typography.Title>
+      <ExampleTitle example={data} />
       <Space orientation="vertical" size="middle" style={{ width: '100%', maxWidth: 1100 }}>
         {data.intro ? (
           <Typography.Paragraph style={{ fontSize: 16, margin: 0, whiteSpace: 'pre-line' }}>
             {data.intro}
           </Typography.Paragraph>
         ) : null}
-        <Typography.Text type="secondary" style={{ fontSize: 12 }}>
-          Published by {data.teacher.displayName} from version {data.versionNumber} of the
-          calculation (fingerprint <span className="lw-mono">{data.fingerprint.slice(0, 12)}</span>,
-          engine {data.engineVersion}). This copy does not change when the calculation does.
-        </Typography.Text>
+        <ExamplePublishedNote example={data} />
         {data.warnings
           .filter((warning) => warning.severity !== 'note')
           .map((warning) => (
-            <Alert
-              key={warning.code}
-              type={SEVERITY[warning.severity]}
-              showIcon
-              title={warning.severity === 'caution' ? 'Caution' : 'Check this'}
-              description={warning.message}
-              data-warning={warning.code}
-            />
+            <ExampleWarningAlert key={warning.code} warning={warning} />
           ))}
-        <Tabs activeKey={tab} onChange={setTab} items={items} />
+        <Tabs activeKey={tab} onChange={setTab} items={exampleTabs(data, unitSystem, chart)} />
       </Space>
     </>
   );

@@ -9,7 +9,7 @@ import { NewCalculationButton } from '@/features/calculations/components/new-cal
 export function CalculationsRoute() {
   const navigate = useNavigate();
   const { user } = useMe();
-  const mayCreate = user?.roles.some((role) => role === 'designer' || role === 'teacher') ?? false;
+  const mayCreate = user?.permissions.createCalculations ?? false;
   return (
     <>
       <Space style={{ width: '100%', justifyContent: 'space-between' }} wrap>

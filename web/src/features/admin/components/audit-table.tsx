@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { ExportButton } from '@/components/export/export-button';
 import { localMoment } from '@/lib/local-moment';
 import {
-  type AuditFilters,
+  type AuditQuery,
   type AuditRow,
   useAudit,
   useAuditActions,
@@ -15,11 +15,11 @@ import {
  * "label: old → new" when a row is opened. Filters by person, action and dates.
  */
 export function AuditTable() {
-  const [params, setParams] = useState<AuditFilters>({ page: 1, pageSize: 50 });
+  const [params, setParams] = useState<AuditQuery>({ page: 1, pageSize: 50 });
   const audit = useAudit(params);
   const actions = useAuditActions();
   const users = useUsers();
-  const filter = (changes: Partial<AuditFilters>) =>
+  const filter = (changes: Partial<AuditQuery>) =>
     setParams((current) => ({ ...current, ...changes, page: 1 }));
   // What the export takes: the filters, not the page.
   const filters = Object.fromEntries(

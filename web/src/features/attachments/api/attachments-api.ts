@@ -1,22 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { Attachment } from '@loftwright/contract';
 import { apiClient } from '@/lib/api-client';
 
-/** GET /api/calculations/:id/attachments (api/src/attachments/attachment-views.ts). */
-export interface Attachment {
-  id: string;
-  calculationId: string;
-  fillLogId: string | null;
-  versionNumber: number | null;
-  fileName: string;
-  mediaType: string;
-  sizeBytes: number;
-  sha256: string;
-  uploadedBy: { id: string; displayName: string } | null;
-  createdAt: string;
-  contentUrl: string;
-  /** What the signed-in user may do with it, as the API decides. */
-  permissions: { remove: boolean };
-}
+export type { Attachment } from '@loftwright/contract';
 
 const listKey = (calculationId: string) => ['attachments', calculationId];
 

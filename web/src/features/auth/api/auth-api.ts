@@ -1,40 +1,20 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type {
+  Account,
+  PasswordResetConfirmBody,
+  PasswordResetRequestBody,
+  Preferences,
+  RegisterBody,
+  RegisterOutcome,
+  SignedIn,
+  SignInBody,
+} from '@loftwright/contract';
 import { apiClient } from '@/lib/api-client';
-import type { NumberFormat } from '@loftwright/buoyancy';
 import { setToken, useToken } from '@/lib/session';
 
-export type Role = 'admin' | 'designer' | 'reviewer' | 'teacher' | 'student';
+export type { Account, Preferences, RegisterOutcome, Role } from '@loftwright/contract';
 
-/** The account as GET /api/auth/me answers (api/src/users/user.entity.ts, PublicUser). */
-export interface CurrentUser {
-  id: string;
-  email: string;
-  displayName: string;
-  roles: Role[];
-  unitSystem: 'si' | 'us';
-  /** How the person writes numbers: 1,234.5 (point-comma), 1 234,5 (comma-space), 1.234,5. */
-  numberFormat: NumberFormat;
-  /** ISO 4217 code, upper case: the default currency of new gas plans and prices. */
-  currency: string;
-}
-
-/** The preferences PATCH /api/auth/me/preferences changes; send any of them. */
-export type Preferences = Pick<CurrentUser, 'unitSystem' | 'numberFormat' | 'currency'>;
-
-interface SignedIn {
-  accessToken: string;
-  user: CurrentUser;
-}
-
-/**
- * What POST /api/auth/register did (api/src/auth/auth.service.ts, RegisterOutcome): signed in
- * the first account of an empty database, or mailed the address a link to finish.
- */
-export type RegisterOutcome =
-  ({ status: 'signed-in' } & SignedIn) | { status: 'check-mail'; message: string };
-
-export const getMe = async (): Promise<CurrentUser> =>
-  (await apiClient.get<CurrentUser>('/auth/me')).data;
+export const getMe = async (): Promise<Account> => (await apiClient.get<Account>('/auth/me')).data;
 
 export const meQueryOptions = (signedIn: boolean) =>
   queryOptions({ queryKey: ['auth', 'me'], queryFn: getMe, staleTime: 60_000, enabled: signedIn });
@@ -49,7 +29,7 @@ export function useMe() {
 export function useSignIn() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (body: { email: string; password: string }) =>
+    mutationFn: async (body: SignInBody) =>
       (await apiClient.post<SignedIn>('/auth/login', body)).data,
     onSuccess: (data) => {
       setToken(data.accessToken);
@@ -61,15 +41,8 @@ export function useSignIn() {
 export function useRegister() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (body: {
-      email: string;
-      password: string;
-      displayName: string;
-      /** A class join code: the account becomes a student account in that class. */
-      joinCode?: string;
-      /** As guessed from the browser's locale (guessNumberFormat). */
-      numberFormat?: NumberFormat;
-    }) => (await apiClient.post<RegisterOutcome>('/auth/register', body)).data,
+    mutationFn: async (body: RegisterBody) =>
+      (await apiClient.post<RegisterOutcome>('/auth/register', body)).data,
     onSuccess: (data) => {
       if (data.status !== 'signed-in') return;
       setToken(data.accessToken);
@@ -106,13 +79,13 @@ export function useSignOut() {
 
 export const useRequestReset = () =>
   useMutation({
-    mutationFn: async (body: { email: string }) =>
+    mutationFn: async (body: PasswordResetRequestBody) =>
       (await apiClient.post<{ message: string }>('/auth/password-reset/request', body)).data,
   });
 
 export const useConfirmReset = () =>
   useMutation({
-    mutationFn: async (body: { token: string; password: string }) =>
+    mutationFn: async (body: PasswordResetConfirmBody) =>
       apiClient.post('/auth/password-reset/confirm', body),
   });
 
@@ -120,7 +93,7 @@ export function useSetPreferences() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async (changes: Partial<Preferences>) =>
-      (await apiClient.patch<CurrentUser>('/auth/me/preferences', changes)).data,
+      (await apiClient.patch<Account>('/auth/me/preferences', changes)).data,
     onSuccess: (user) => queryClient.setQueryData(['auth', 'me'], user),
   });
 }

@@ -2,10 +2,10 @@ import { Select } from 'antd';
 import type { NumberFormat } from '@loftwright/buoyancy';
 import { NUMBER_FORMAT_OPTIONS } from '@/components/reading/number-format-options';
 import { CURRENCIES } from '@/config/currencies';
-import { type CurrentUser, useSetPreferences } from '../api/auth-api';
+import { type Account, useSetPreferences } from '../api/auth-api';
 
 /** The number format and currency kept on the account, each saved as soon as it is picked. */
-export function PreferenceSelects({ user }: { user: CurrentUser }) {
+export function PreferenceSelects({ user }: { user: Account }) {
   const setPreferences = useSetPreferences();
   const currencies = CURRENCIES.includes(user.currency)
     ? CURRENCIES

@@ -5,93 +5,35 @@ import {
   useQuery,
   useQueryClient,
 } from '@tanstack/react-query';
-import type { CalculationResult } from '@loftwright/buoyancy';
+import type {
+  CalculationDetail,
+  CalculationListQuery,
+  CalculationPage,
+  CreateCalculationBody,
+  SaveVersionBody,
+  UserRef,
+  VersionDetail,
+  VersionDiff,
+} from '@loftwright/contract';
 import { apiClient } from '@/lib/api-client';
 import { dispositionFileName, saveBlob } from '@/lib/save-blob';
 
-export type VersionStatus = 'draft' | 'in_review' | 'approved' | 'changes_requested';
+export type {
+  CalculationDetail,
+  CalculationListItem,
+  CalculationListQuery,
+  CalculationPage,
+  CalculationSummary,
+  VersionDetail,
+  VersionDiff,
+  VersionStatus,
+  VersionSummary,
+} from '@loftwright/contract';
 
-interface UserRef {
-  id: string;
-  displayName: string;
-}
-
-/** Shapes of api/src/calculations/calculation-views.ts. */
-export interface CalculationSummary {
-  id: string;
-  title: string;
-  kind: string;
-  owner: UserRef | null;
-  visibility: 'private' | 'team' | 'published';
-  tags: string[];
-  latestVersion: number;
-  status: VersionStatus;
-  archived: boolean;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface VersionSummary {
-  number: number;
-  status: VersionStatus;
-  note: string;
-  author: UserRef | null;
-  reviewer: UserRef | null;
-  engineVersion: string;
-  fingerprint: string;
-  createdAt: string;
-  submittedAt: string | null;
-}
-
-export interface VersionDetail extends VersionSummary {
-  inputs: Record<string, unknown>;
-  outputs: CalculationResult['outputs'];
-  steps: CalculationResult['steps'];
-  warnings: CalculationResult['warnings'];
-  series: CalculationResult['series'] | null;
-}
-
-export interface CalculationDetail extends CalculationSummary {
-  versions: VersionSummary[];
-  latest: VersionDetail | null;
-  /** What the signed-in user may do with it (api/src/calculations/calculation-access.ts). */
-  permissions: {
-    edit: boolean;
-    archive: boolean;
-    submit: boolean;
-    review: boolean;
-    upload: boolean;
-    export: boolean;
-  };
-}
-
-/** A row of GET /api/calculations: the summary and what the signed-in user may do with it. */
-export interface CalculationListItem extends CalculationSummary {
-  permissions: { archive: boolean };
-}
-
-export interface CalculationPage {
-  items: CalculationListItem[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
-
-export interface ListParams {
-  page: number;
-  pageSize: number;
-  sort?: string;
-  kind?: string;
-  status?: string;
-  owner?: string;
-  tag?: string;
-  q?: string;
-}
-
-export const getCalculations = async (params: ListParams) =>
+export const getCalculations = async (params: CalculationListQuery) =>
   (await apiClient.get<CalculationPage>('/calculations', { params })).data;
 
-export const useCalculations = (params: ListParams) =>
+export const useCalculations = (params: CalculationListQuery) =>
   useQuery({
     queryKey: ['calculations', 'list', params],
     queryFn: () => getCalculations(params),
@@ -109,13 +51,8 @@ export const useCalculation = (id: string) => useQuery(calculationQueryOptions(i
 export function useCreateCalculation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (body: {
-      title: string;
-      kind: string;
-      inputs: unknown;
-      visibility?: string;
-      tags?: string[];
-    }) => (await apiClient.post<CalculationDetail>('/calculations', body)).data,
+    mutationFn: async (body: CreateCalculationBody) =>
+      (await apiClient.post<CalculationDetail>('/calculations', body)).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations', 'list'] }),
   });
 }
@@ -165,7 +102,7 @@ export function useDuplicateCalculation() {
   return useMutation({
     mutationFn: async (id: string) => {
       const source = await queryClient.fetchQuery(calculationQueryOptions(id));
-      const body = {
+      const body: CreateCalculationBody = {
         title: `${source.title} (copy)`.slice(0, 200),
         kind: source.kind,
         inputs: source.latest?.inputs ?? {},
@@ -181,7 +118,7 @@ export function useDuplicateCalculation() {
 export function useSaveVersion(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (body: { baseVersion: number; inputs: unknown; note: string }) =>
+    mutationFn: async (body: SaveVersionBody) =>
       (await apiClient.post<VersionDetail>(`/calculations/${id}/versions`, body)).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations'] }),
   });
@@ -205,20 +142,11 @@ export function useSubmitVersion(id: string) {
 export const useReviewers = (enabled: boolean) =>
   useQuery({
     queryKey: ['reviewers'],
-    queryFn: async () =>
-      (await apiClient.get<{ id: string; displayName: string }[]>('/reviewers')).data,
+    queryFn: async () => (await apiClient.get<UserRef[]>('/reviewers')).data,
     enabled,
   });
 
 /** GET .../versions/:a/diff/:b (diffInputs/diffOutputs of @loftwright/buoyancy). */
-export interface VersionDiff {
-  from: number;
-  to: number;
-  inputs: { path: string; from: unknown; to: unknown }[];
-  outputs: { name: string; label: string; unit: string; from: number | null; to: number | null }[];
-  engineVersion: { from: string; to: string };
-}
-
 export const useVersionDiff = (id: string, a: number | undefined, b: number | undefined) =>
   useQuery({
     queryKey: ['calculations', 'diff', id, a, b],

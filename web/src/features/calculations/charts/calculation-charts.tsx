@@ -1,7 +1,11 @@
-import { type CalculationResult, kindCapabilities, type UnitSystem } from '@loftwright/buoyancy';
+import {
+  type CalculationResult,
+  kindCapabilities,
+  liftSweeps,
+  type UnitSystem,
+} from '@loftwright/buoyancy';
 import { useMemo } from 'react';
 import { FlightChart } from './flight-chart';
-import { airTemperatureSweep, puritySweep, sizeSweep, sizingSweep } from './lift-sweeps';
 import { SupplyCostChart } from '@/components/charts/supply-cost-chart';
 import { SweepChart } from './sweep-chart';
 
@@ -21,21 +25,13 @@ export function CalculationCharts({
 }) {
   // Which charts a kind has is the engine's to say (kindCapabilities), not a switch on its id.
   const offered = kindCapabilities(kind).charts;
+  // The engine's sweeps, on its fast path: the lift check's curves, or a sizing's.
   const sweeps = useMemo(
-    () => [
-      ...(offered.includes('lift-sweeps')
-        ? [sizeSweep(inputs), airTemperatureSweep(inputs), puritySweep(inputs)]
-        : []),
-      ...(offered.includes('sizing-sweep')
-        ? [sizingSweep(inputs, result.outputs.size?.value)]
-        : []),
-    ],
-    [offered, inputs, result],
+    () => liftSweeps(kind, inputs, result.outputs),
+    [kind, inputs, result.outputs],
   );
   const charts = [
-    ...sweeps.map((sweep) =>
-      sweep ? <SweepChart key={sweep.id} sweep={sweep} unitSystem={unitSystem} /> : null,
-    ),
+    ...sweeps.map((sweep) => <SweepChart key={sweep.id} sweep={sweep} unitSystem={unitSystem} />),
     result.series ? (
       <FlightChart key="flight" series={result.series} outputs={result.outputs} />
     ) : null,

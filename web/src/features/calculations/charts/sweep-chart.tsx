@@ -1,5 +1,5 @@
 import { theme } from 'antd';
-import { formatQuantity, type UnitSystem } from '@loftwright/buoyancy';
+import { type LiftSweep, sweepPlot, type UnitSystem } from '@loftwright/buoyancy';
 import {
   CartesianGrid,
   Legend,
@@ -13,17 +13,7 @@ import {
   YAxis,
 } from 'recharts';
 import { ChartFrame } from '@/components/charts/chart-frame';
-import type { LiftSweep } from './lift-sweeps';
-import { niceAxis, tickDecimals } from './nice-axis';
 import { useNumberDisplay } from '@/components/reading/use-number-display';
-
-/** A quantity's unit for a whole axis, picked by the size of a typical value on it. */
-function axisUnit(typicalSI: number, dimension: LiftSweep['xDimension'], unitSystem: UnitSystem) {
-  const { unitName, unit } = formatQuantity(typicalSI, dimension, unitSystem);
-  const convert = (valueSI: number) =>
-    formatQuantity(valueSI, dimension, unitSystem, { unit: unitName }).value;
-  return { unit, convert };
-}
 
 /**
  * Net and free lift against one varied input. The design point is a first-light dot with dashed
@@ -32,29 +22,17 @@ function axisUnit(typicalSI: number, dimension: LiftSweep['xDimension'], unitSys
 export function SweepChart({ sweep, unitSystem }: { sweep: LiftSweep; unitSystem: UnitSystem }) {
   const { token } = theme.useToken();
   const display = useNumberDisplay(unitSystem);
-  const x = axisUnit(sweep.design.x, sweep.xDimension, unitSystem);
-  const largestLiftKg = Math.max(...sweep.points.map((point) => Math.abs(point.netKg)));
-  const lift = axisUnit(largestLiftKg, 'mass', unitSystem);
-  const data = sweep.points.map((point) => ({
-    x: x.convert(point.x),
-    net: lift.convert(point.netKg),
-    free: lift.convert(point.freeKg),
-  }));
-  if (data.length < 2) return null;
-  const design = { x: x.convert(sweep.design.x), y: lift.convert(sweep.design.freeKg) };
-  const target = sweep.targetFreeKg === undefined ? undefined : lift.convert(sweep.targetFreeKg);
-  const ys = data.flatMap((point) => [point.net, point.free]).concat(0, target ?? 0);
-  const yAxis = niceAxis(Math.min(...ys), Math.max(...ys));
-  const xDomain: [number, number] = [data[0]?.x ?? 0, data.at(-1)?.x ?? 1];
-  const yDecimals = tickDecimals(yAxis.ticks);
-  // Round ticks inside the data's span, so the curve fills the plot and the guides reach the axis.
-  const xTicks = niceAxis(xDomain[0], xDomain[1], 6).ticks.filter(
-    (tick) => tick >= xDomain[0] - 1e-9 && tick <= xDomain[1] + 1e-9,
-  );
-  const xDecimals = tickDecimals(xTicks);
+  // Units, conversion and round ticks come from the engine, which lays out the printed sheet's
+  // charts the same way.
+  const plot = sweepPlot(sweep, unitSystem);
+  if (!plot) return null;
+  const { x, y: lift, design, target } = plot;
+  const data = [...plot.points];
+  const xDomain: [number, number] = [x.domain[0], x.domain[1]];
+  const yDomain: [number, number] = [lift.domain[0], lift.domain[1]];
   const description =
-    `${sweep.title}: net and free lift from ${display.fixed(xDomain[0], xDecimals)} to ` +
-    `${display.fixed(xDomain[1], xDecimals)} ${x.unit}; design point ${display.number(design.x, { significantDigits: 3 })} ${x.unit}, ` +
+    `${sweep.title}: net and free lift from ${display.fixed(xDomain[0], x.decimals)} to ` +
+    `${display.fixed(xDomain[1], x.decimals)} ${x.unit}; design point ${display.number(design.x, { significantDigits: 3 })} ${x.unit}, ` +
     `free lift ${display.number(design.y, { significantDigits: 3 })} ${lift.unit}`;
   const guide = {
     stroke: token.colorWarning,
@@ -70,25 +48,25 @@ export function SweepChart({ sweep, unitSystem }: { sweep: LiftSweep; unitSystem
             dataKey="x"
             type="number"
             domain={xDomain}
-            ticks={xTicks}
+            ticks={[...x.ticks]}
             allowDataOverflow
-            tickFormatter={(value: number) => display.fixed(value, xDecimals)}
-            label={{ value: `${sweep.xLabel} (${x.unit})`, position: 'insideBottom', offset: -12 }}
+            tickFormatter={(value: number) => display.fixed(value, x.decimals)}
+            label={{ value: x.label, position: 'insideBottom', offset: -12 }}
           />
           <YAxis
-            domain={yAxis.domain}
-            ticks={yAxis.ticks}
+            domain={yDomain}
+            ticks={[...lift.ticks]}
             allowDataOverflow
-            tickFormatter={(value: number) => display.fixed(value, yDecimals)}
-            label={{ value: `Lift (${lift.unit})`, angle: -90, position: 'insideLeft', offset: -4 }}
+            tickFormatter={(value: number) => display.fixed(value, lift.decimals)}
+            label={{ value: lift.label, angle: -90, position: 'insideLeft', offset: -4 }}
           />
           <Tooltip
             formatter={(value) =>
               typeof value === 'number'
-                ? `${display.fixed(value, yDecimals + 1)} ${lift.unit}`
+                ? `${display.fixed(value, lift.decimals + 1)} ${lift.unit}`
                 : String(value)
             }
-            labelFormatter={(label) => `${display.fixed(Number(label), xDecimals + 1)} ${x.unit}`}
+            labelFormatter={(label) => `${display.fixed(Number(label), x.decimals + 1)} ${x.unit}`}
           />
           <Legend verticalAlign="top" />
           <ReferenceLine y={0} stroke={token.colorError} />
@@ -120,7 +98,7 @@ export function SweepChart({ sweep, unitSystem }: { sweep: LiftSweep; unitSystem
           />
           <ReferenceLine
             segment={[
-              { x: design.x, y: yAxis.domain[0] },
+              { x: design.x, y: yDomain[0] },
               { x: design.x, y: design.y },
             ]}
             {...guide}

@@ -1,6 +1,8 @@
-import { DeleteOutlined, PlusOutlined } from '@ant-design/icons';
-import { Button, Flex, Typography, theme } from 'antd';
-import { type ReactNode, useState } from 'react';
+import { PlusOutlined } from '@ant-design/icons';
+import { Button, Typography, theme } from 'antd';
+import type { ReactNode } from 'react';
+import { useRowKeys } from '../hooks/use-row-keys';
+import { ArrayRow } from './array-row';
 
 const NO_ITEMS: readonly unknown[] = [];
 
@@ -29,14 +31,6 @@ export interface ArrayRowsFieldProps {
   disabled?: boolean;
 }
 
-interface Rows {
-  /** The list these keys belong to. */
-  items: readonly unknown[];
-  /** One stable React key per item, so a row's inputs stay with its item when another goes. */
-  keys: readonly number[];
-  next: number;
-}
-
 /**
  * A list of objects as rows: each item's fields in a numbered fieldset ("Package 1") with a
  * Remove button, and an Add button that appends a fresh item, within the schema's minItems and
@@ -58,32 +52,7 @@ export function ArrayRowsField({
 }: ArrayRowsFieldProps) {
   const { token } = theme.useToken();
   const items = Array.isArray(value) ? (value as readonly unknown[]) : NO_ITEMS;
-  const [rows, setRows] = useState<Rows>(() => ({
-    items,
-    keys: items.map((_, index) => index),
-    next: items.length,
-  }));
-  // A list from outside (a row's edit, another version taken, a reset): a row's edit keeps the
-  // length and the keys; a list of another length gets new rows (adjusting state while rendering,
-  // as React recommends, rather than in an effect).
-  let keys = rows.keys;
-  if (rows.items !== items) {
-    const next =
-      rows.keys.length === items.length
-        ? { ...rows, items }
-        : {
-            items,
-            keys: items.map((_, index) => rows.next + index),
-            next: rows.next + items.length,
-          };
-    keys = next.keys;
-    setRows(next);
-  }
-
-  const report = (nextItems: unknown[], nextKeys: readonly number[], next = rows.next) => {
-    setRows({ items: nextItems, keys: nextKeys, next });
-    onChange(nextItems);
-  };
+  const rows = useRowKeys(items, onChange);
   const noun = capitalise(itemLabel);
   const full = maxItems !== undefined && items.length >= maxItems;
   const atLeast = items.length <= minItems;
@@ -109,66 +78,23 @@ export function ArrayRowsField({
       {items.length === 0 ? (
         <Typography.Paragraph type="secondary">No {pluralOf(itemLabel)} yet.</Typography.Paragraph>
       ) : null}
-      {items.map((item, index) => {
-        const itemError = errors[`${path}.${index}`];
-        return (
-          <fieldset
-            key={keys[index] ?? `extra-${index}`}
-            style={{
-              border: `1px solid ${token.colorBorderSecondary}`,
-              borderRadius: token.borderRadiusLG,
-              padding: `0 ${token.paddingSM}px ${token.paddingSM}px`,
-              margin: `0 0 ${token.marginSM}px`,
-            }}
-          >
-            <legend
-              style={{
-                width: 'auto',
-                fontSize: token.fontSize,
-                fontWeight: token.fontWeightStrong,
-                color: token.colorTextHeading,
-                padding: `0 ${token.paddingXXS}px`,
-                margin: 0,
-                border: 'none',
-              }}
-            >
-              {noun} {index + 1}
-            </legend>
-            {renderItem(item, index, (next) =>
-              report(
-                items.map((current, at) => (at === index ? next : current)),
-                keys,
-              ),
-            )}
-            {itemError ? (
-              <Typography.Paragraph type="danger">{itemError}</Typography.Paragraph>
-            ) : null}
-            <Flex justify="flex-end">
-              <Button
-                size="small"
-                type="text"
-                danger
-                icon={<DeleteOutlined aria-hidden />}
-                aria-label={`Remove ${itemLabel} ${index + 1}`}
-                title={
-                  atLeast
-                    ? `Needs at least ${minItems} ${minItems === 1 ? itemLabel : pluralOf(itemLabel)}`
-                    : undefined
-                }
-                disabled={disabled || atLeast}
-                onClick={() =>
-                  report(
-                    items.filter((_, at) => at !== index),
-                    keys.filter((_, at) => at !== index),
-                  )
-                }
-              >
-                Remove
-              </Button>
-            </Flex>
-          </fieldset>
-        );
-      })}
+      {items.map((item, index) => (
+        <ArrayRow
+          key={rows.keys[index] ?? `extra-${index}`}
+          legend={`${noun} ${index + 1}`}
+          error={errors[`${path}.${index}`]}
+          removeLabel={`Remove ${itemLabel} ${index + 1}`}
+          removeTitle={
+            atLeast
+              ? `Needs at least ${minItems} ${minItems === 1 ? itemLabel : pluralOf(itemLabel)}`
+              : undefined
+          }
+          removeDisabled={disabled || atLeast}
+          onRemove={() => rows.remove(index)}
+        >
+          {renderItem(item, index, (next) => rows.change(index, next))}
+        </ArrayRow>
+      ))}
       {listError ? (
         <Typography.Paragraph id={`${id}-error`} type="danger">
           {listError}
@@ -179,7 +105,7 @@ export function ArrayRowsField({
         block
         icon={<PlusOutlined aria-hidden />}
         disabled={disabled || full}
-        onClick={() => report([...items, newItem()], [...keys, rows.next], rows.next + 1)}
+        onClick={() => rows.add(newItem())}
       >
         Add {itemLabel}
       </Button>

@@ -1,37 +1,19 @@
-import { Form, Input, Select, Typography } from 'antd';
-import { fieldLabel, humaniseKey, type UnitSystem } from '@loftwright/buoyancy';
-import { CURRENCIES } from '@/config/currencies';
+import { Form, Typography } from 'antd';
+import type { UnitSystem } from '@loftwright/buoyancy';
 import { FieldRemarks } from '@/components/reading/field-remarks';
 import { NumberField } from './number-field';
 import { ArrayRowsField } from './array-rows-field';
-
-type Schema = Record<string, unknown>;
-type Value = Record<string, unknown>;
-
-const asSchema = (value: unknown): Schema =>
-  value && typeof value === 'object' ? (value as Schema) : {};
-
-const humanise = humaniseKey;
-const labelOf = (key: string, schema: Schema): string => fieldLabel(key, schema);
-
-/** The discriminator of a union: the property that is a constant in every variant. */
-function discriminatorOf(variants: Schema[]): string | undefined {
-  const first = asSchema(variants[0]?.properties);
-  return Object.keys(first).find((key) =>
-    variants.every((variant) => asSchema(asSchema(variant.properties)[key]).const !== undefined),
-  );
-}
-
-/** Defaults of a schema's properties, for a freshly chosen variant. */
-function defaultsOf(schema: Schema): Value {
-  const result: Value = {};
-  for (const [key, property] of Object.entries(asSchema(schema.properties))) {
-    const child = asSchema(property);
-    if (child.const !== undefined) result[key] = child.const;
-    else if (child.default !== undefined) result[key] = child.default;
-  }
-  return result;
-}
+import { CurrencyCodeField, EnumField, TextField, VariantSelect } from './schema-choice-fields';
+import {
+  asSchema,
+  constOf,
+  defaultsOf,
+  discriminatorOf,
+  hiddenBy,
+  labelOf,
+  type Schema,
+  type Value,
+} from './schema-helpers';
 
 const NO_NOTES: Record<string, string> = {};
 
@@ -63,100 +45,25 @@ export function SchemaField(props: SchemaFieldProps) {
 }
 
 /** One input of a kind, rendered from its JSON Schema: objects, variants, quantities, choices. */
-function SchemaFieldControl({
-  name,
-  path,
-  schema,
-  value,
-  onChange,
-  unitSystem,
-  errors,
-  notes = NO_NOTES,
-  required = true,
-  disabled,
-  currency,
-}: SchemaFieldProps) {
+function SchemaFieldControl(props: SchemaFieldProps) {
+  const { name, path, schema, value, onChange, unitSystem, required = true, disabled } = props;
+  const notes = props.notes ?? NO_NOTES;
   const variants = (schema.oneOf ?? schema.anyOf) as Schema[] | undefined;
   const fieldId = `field-${path.replace(/[^\w]+/g, '-')}`;
-  const help = errors[path];
-  if (Array.isArray(variants)) {
-    const key = discriminatorOf(variants);
-    const current = (value ?? {}) as Value;
-    const selected =
-      variants.find(
-        (variant) => asSchema(asSchema(variant.properties)[key ?? '']).const === current[key ?? ''],
-      ) ?? variants[0];
-    if (!key || !selected) return null;
-    return (
-      <fieldset style={{ border: 'none', padding: 0, margin: 0 }}>
-        <Form.Item
-          label={labelOf(name, schema)}
-          htmlFor={fieldId}
-          validateStatus={help ? 'error' : undefined}
-          help={help}
-        >
-          <Select
-            id={fieldId}
-            value={current[key] as string}
-            disabled={disabled}
-            options={variants.map((variant) => {
-              const constValue = String(asSchema(asSchema(variant.properties)[key]).const);
-              return {
-                value: constValue,
-                label: humanise(
-                  constValue.replace(/-/g, ' ').replace(/^\w/, (c) => c.toUpperCase()),
-                ),
-              };
-            })}
-            onChange={(next) => {
-              const variant = variants.find(
-                (candidate) => asSchema(asSchema(candidate.properties)[key]).const === next,
-              );
-              onChange(variant ? defaultsOf(variant) : { [key]: next });
-            }}
-          />
-        </Form.Item>
-        <ObjectFields
-          schema={selected}
-          path={path}
-          value={current}
-          onChange={onChange}
-          unitSystem={unitSystem}
-          errors={errors}
-          notes={notes}
-          disabled={disabled}
-          currency={currency}
-        />
-      </fieldset>
-    );
-  }
+  const help = props.errors[path];
+  if (Array.isArray(variants))
+    return <VariantFields {...props} notes={notes} variants={variants} />;
   if (schema.type === 'object') {
     return (
       <fieldset style={{ border: 'none', padding: 0, margin: 0 }}>
         {path.includes('.') || name === '' ? null : (
           <Typography.Title level={5}>{labelOf(name, schema)}</Typography.Title>
         )}
-        <ObjectFields
-          schema={schema}
-          path={path}
-          value={(value ?? {}) as Value}
-          onChange={onChange}
-          unitSystem={unitSystem}
-          errors={errors}
-          notes={notes}
-          disabled={disabled}
-          currency={currency}
-        />
+        <ObjectFields {...props} notes={notes} value={(value ?? {}) as Value} />
       </fieldset>
     );
   }
   const label = `${labelOf(name, schema)}${required ? '' : ' (optional)'}`;
-  const common = {
-    validateStatus: help ? ('error' as const) : undefined,
-    help,
-    label,
-    htmlFor: fieldId,
-  };
   if (schema.type === 'number' || schema.type === 'integer') {
     return (
       <Form.Item label={label} htmlFor={fieldId}>
@@ -169,103 +76,89 @@ function SchemaFieldControl({
           unitSystem={unitSystem}
           problem={help}
           note={notes[path]}
-          currency={currency}
+          currency={props.currency}
           disabled={disabled}
         />
       </Form.Item>
     );
   }
-  if (schema.currencyCode === true) {
-    const code = typeof value === 'string' ? value : '';
-    const codes = code === '' || CURRENCIES.includes(code) ? CURRENCIES : [code, ...CURRENCIES];
-    return (
-      <Form.Item {...common}>
-        <Select
-          id={fieldId}
-          value={code || undefined}
-          disabled={disabled}
-          options={codes.map((option) => ({ value: option, label: option }))}
-          onChange={onChange}
-        />
-      </Form.Item>
-    );
-  }
-  if (Array.isArray(schema.enum)) {
-    const titles = asSchema(schema.enumTitles);
-    return (
-      <Form.Item {...common}>
-        <Select
-          id={fieldId}
-          value={value as string}
-          disabled={disabled}
-          options={schema.enum.map((option) => {
-            const title = titles[String(option)];
-            return {
-              value: option,
-              label:
-                typeof title === 'string' ? title : humanise(String(option).replace(/-/g, ' ')),
-            };
-          })}
-          onChange={onChange}
-        />
-      </Form.Item>
-    );
-  }
+  const leaf = { fieldId, label, help, value, onChange, disabled };
+  if (schema.currencyCode === true) return <CurrencyCodeField {...leaf} />;
+  if (Array.isArray(schema.enum)) return <EnumField {...leaf} schema={schema} />;
   if (schema.type === 'array') {
-    const items = asSchema(schema.items);
-    const itemVariants = (items.oneOf ?? items.anyOf) as Schema[] | undefined;
-    return (
-      <ArrayRowsField
-        id={fieldId}
-        path={path}
-        label={label}
-        itemLabel={typeof schema.itemLabel === 'string' ? schema.itemLabel : 'item'}
-        value={value}
-        onChange={onChange}
-        newItem={() =>
-          Array.isArray(itemVariants)
-            ? defaultsOf(asSchema(itemVariants[0]))
-            : items.type === 'object'
-              ? defaultsOf(items)
-              : items.default
-        }
-        renderItem={(item, index, onItemChange) => (
-          <SchemaField
-            name=""
-            path={`${path}.${index}`}
-            schema={items}
-            value={item}
-            onChange={onItemChange}
-            unitSystem={unitSystem}
-            errors={errors}
-            notes={notes}
-            disabled={disabled}
-          />
-        )}
-        minItems={typeof schema.minItems === 'number' ? schema.minItems : undefined}
-        maxItems={typeof schema.maxItems === 'number' ? schema.maxItems : undefined}
-        errors={errors}
-        disabled={disabled}
-      />
-    );
+    return <ArraySchemaField {...props} notes={notes} fieldId={fieldId} label={label} />;
   }
+  return <TextField {...leaf} />;
+}
+
+/** A union: the variant chosen by its discriminator, then that variant's fields. */
+function VariantFields({ variants, ...props }: SchemaFieldProps & { variants: Schema[] }) {
+  const { name, path, schema, value, onChange, disabled } = props;
+  const fieldId = `field-${path.replace(/[^\w]+/g, '-')}`;
+  const key = discriminatorOf(variants);
+  const current = (value ?? {}) as Value;
+  const selected =
+    variants.find((variant) => constOf(variant, key ?? '') === current[key ?? '']) ?? variants[0];
+  if (!key || !selected) return null;
   return (
-    <Form.Item {...common}>
-      <Input
-        id={fieldId}
-        value={typeof value === 'string' ? value : ''}
-        onChange={(event) => onChange(event.target.value)}
+    <fieldset style={{ border: 'none', padding: 0, margin: 0 }}>
+      <VariantSelect
+        fieldId={fieldId}
+        label={labelOf(name, schema)}
+        help={props.errors[path]}
+        value={current[key]}
+        onChange={onChange}
         disabled={disabled}
+        variants={variants}
+        discriminator={key}
       />
-    </Form.Item>
+      <ObjectFields {...props} schema={selected} value={current} />
+    </fieldset>
   );
 }
 
-/** Whether the engine says this field means nothing given its siblings' values (`notWhen`). */
-function hiddenBy(field: Schema, siblings: Value): boolean {
-  const condition = asSchema(field.notWhen);
-  return Object.entries(condition).some(
-    ([key, values]) => Array.isArray(values) && values.includes(siblings[key]),
+/** A list from its item schema: rows of items, each item's fields from the schema. */
+function ArraySchemaField({
+  fieldId,
+  label,
+  ...props
+}: SchemaFieldProps & { fieldId: string; label: string }) {
+  const { path, schema, value, onChange, unitSystem, errors, notes, disabled } = props;
+  const items = asSchema(schema.items);
+  const itemVariants = (items.oneOf ?? items.anyOf) as Schema[] | undefined;
+  return (
+    <ArrayRowsField
+      id={fieldId}
+      path={path}
+      label={label}
+      itemLabel={typeof schema.itemLabel === 'string' ? schema.itemLabel : 'item'}
+      value={value}
+      onChange={onChange}
+      newItem={() =>
+        Array.isArray(itemVariants)
+          ? defaultsOf(asSchema(itemVariants[0]))
+          : items.type === 'object'
+            ? defaultsOf(items)
+            : items.default
+      }
+      renderItem={(item, index, onItemChange) => (
+        <SchemaField
+          name=""
+          path={`${path}.${index}`}
+          schema={items}
+          value={item}
+          onChange={onItemChange}
+          unitSystem={unitSystem}
+          errors={errors}
+          notes={notes}
+          disabled={disabled}
+        />
+      )}
+      minItems={typeof schema.minItems === 'number' ? schema.minItems : undefined}
+      maxItems={typeof schema.maxItems === 'number' ? schema.maxItems : undefined}
+      errors={errors}
+      disabled={disabled}
+    />
   );
 }
 

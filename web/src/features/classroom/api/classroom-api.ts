@@ -1,127 +1,31 @@
 import type {
-  AnswerCheck,
-  CalculationWarning,
-  DataSeries,
-  DerivationStep,
-  ExerciseCheck,
-  OutputQuantity,
-} from '@loftwright/buoyancy';
+  CalculationDetail,
+  CalculationListItem,
+  ClassDetail,
+  ClassSummary,
+  CreateClassBody,
+  ExampleDetail,
+  ExampleSettings,
+  ExampleSummary,
+  PublishExampleBody,
+  Submission,
+} from '@loftwright/contract';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
 
-/** A class as the API shows it (api/src/classrooms/classrooms.service.ts). */
-export interface ClassSummary {
-  id: string;
-  title: string;
-  teacherId: string;
-  closed: boolean;
-  closedAt: string | null;
-  createdAt: string;
-  standing: 'teacher' | 'student' | 'admin';
-  studentCount: number;
-  /** Only for the teacher (and admins). */
-  joinCode?: string;
-  joinUrl?: string;
-  joinCodeExpiresAt?: string;
-}
-
-export interface ClassDetail extends ClassSummary {
-  teacher: { id: string; displayName: string };
-  students?: { id: string; displayName: string; joinedAt: string }[];
-}
-
-/** When a student who has answered sees the engine's values (a closed class shows them always). */
-export type RevealRule = 'after-correct' | 'after-attempts' | 'when-closed';
-
-export interface ExerciseSettings {
-  hiddenOutputs: string[];
-  tolerancePercent: number;
-  reveal?: RevealRule;
-  revealAfterAttempts?: number;
-}
-
-export type TryRanges = Record<string, { min: number; max: number }>;
-
-export interface ExampleSummary {
-  id: string;
-  classroomId: string;
-  title: string;
-  kind: string;
-  calculationId: string;
-  versionNumber: number;
-  fingerprint: string;
-  isExercise: boolean;
-  tolerancePercent: number | null;
-  publishedAt: string;
-  updatedAt: string;
-  myAttempts?: number;
-  myLatestAllCorrect?: boolean | null;
-}
-
-/** A step as the class sees it; in an exercise not yet answered, hidden numbers are null. */
-export interface ExampleStep extends Omit<DerivationStep, 'result' | 'values'> {
-  result: Omit<DerivationStep['result'], 'value'> & { value: number | null };
-  values: readonly (Omit<DerivationStep['values'][number], 'value'> & { value: number | null })[];
-  hidden: boolean;
-}
-
-export interface Question {
-  output: string;
-  label: string;
-  unit: string;
-  stepId: string;
-}
-
-export interface Submission {
-  id: string;
-  exampleId: string;
-  student: { id: string; displayName: string };
-  attempt: number;
-  answers: Record<string, number | null>;
-  check: ExerciseCheck & {
-    tolerancePercent: number;
-    /** The engine's value and the error are null until the answers are revealed to the student. */
-    answers: (Omit<AnswerCheck, 'expected' | 'relativeError'> & {
-      expected: number | null;
-      relativeError: number | null;
-    })[];
-  };
-  correctCount: number;
-  answerCount: number;
-  allCorrect: boolean;
-  submittedAt: string;
-}
-
-export interface ExampleDetail extends ExampleSummary {
-  classroomTitle: string;
-  classroomClosed: boolean;
-  teacher: { id: string; displayName: string };
-  intro: string;
-  engineVersion: string;
-  inputs: Record<string, unknown>;
-  outputs: Record<string, OutputQuantity>;
-  steps: ExampleStep[];
-  warnings: CalculationWarning[];
-  series: Record<string, DataSeries> | null;
-  stepNotes: Record<string, string>;
-  tryRanges: TryRanges;
-  chartStepId: string | null;
-  exercise: ExerciseSettings | null;
-  standing: 'teacher' | 'student' | 'admin';
-  /** False while a student has not yet answered the exercise. */
-  revealed: boolean;
-  questions: Question[];
-  mySubmissions: Submission[];
-}
-
-export interface ExampleSettings {
-  title?: string;
-  intro?: string;
-  stepNotes?: Record<string, string>;
-  tryRanges?: TryRanges;
-  chartStepId?: string | null;
-  exercise?: ExerciseSettings | null;
-}
+export type {
+  ClassDetail,
+  ClassSummary,
+  ExampleDetail,
+  ExampleSettings,
+  ExampleStep,
+  ExampleSummary,
+  ExerciseSettings,
+  Question,
+  RevealRule,
+  Submission,
+  TryRanges,
+} from '@loftwright/contract';
 
 const classesKey = ['classes'] as const;
 
@@ -160,8 +64,7 @@ function useClassMutation<Variables, Result>(
 
 export const useCreateClass = () =>
   useClassMutation(
-    async (body: { title: string; joinCodeValidDays?: number }) =>
-      (await apiClient.post<ClassDetail>('/classes', body)).data,
+    async (body: CreateClassBody) => (await apiClient.post<ClassDetail>('/classes', body)).data,
   );
 
 export const useJoinClass = () =>
@@ -185,7 +88,7 @@ export const useRemoveStudent = (id: string) =>
 
 export const usePublishExample = (classId: string) =>
   useClassMutation(
-    async (body: ExampleSettings & { calculationId: string; versionNumber: number }) =>
+    async (body: PublishExampleBody) =>
       (await apiClient.post<ExampleDetail>(`/classes/${classId}/examples`, body)).data,
   );
 
@@ -225,40 +128,22 @@ export const useSubmitAnswers = (exampleId: string) =>
   );
 
 /** What a teacher may publish: their own calculations, and others' approved versions. */
-export interface PublishableCalculation {
-  id: string;
-  title: string;
-  kind: string;
-  owner: { id: string; displayName: string } | null;
-  latestVersion: number;
-  status: string;
-}
-
 export const usePublishableCalculations = () =>
   useQuery({
     queryKey: ['calculations', 'publishable'],
     queryFn: async () =>
       (
-        await apiClient.get<{ items: PublishableCalculation[] }>('/calculations', {
+        await apiClient.get<{ items: CalculationListItem[] }>('/calculations', {
           params: { pageSize: 100, sort: '-updatedAt' },
         })
       ).data.items,
   });
 
-export interface VersionChoice {
-  number: number;
-  status: string;
-  note: string;
-}
-
+/** The versions a teacher may choose from. */
 export const useVersionChoices = (calculationId: string | undefined) =>
   useQuery({
     queryKey: ['calculations', calculationId, 'versions-for-publishing'],
     queryFn: async () =>
-      (
-        await apiClient.get<{ versions: VersionChoice[]; owner: { id: string } | null }>(
-          `/calculations/${calculationId}`,
-        )
-      ).data,
+      (await apiClient.get<CalculationDetail>(`/calculations/${calculationId}`)).data,
     enabled: calculationId !== undefined,
   });

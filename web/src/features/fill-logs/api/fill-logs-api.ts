@@ -1,52 +1,16 @@
-import type {
-  CalculationResult,
-  FillAmbient,
-  FillReading,
-  LiftInstrument,
-} from '@loftwright/buoyancy';
+import type { AddReadingsBody, FillLog, FillLogBody } from '@loftwright/contract';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
 
+export type { FillLog, FillLogBody } from '@loftwright/contract';
+
+/** The sources of gas a fill log names, in the form's words. */
 export const GAS_SOURCES = [
   { value: 'electrolysis', label: 'Electrolysis (own hydrogen)' },
   { value: 'cylinder', label: 'Cylinders' },
   { value: 'delivered', label: 'Delivered gas' },
   { value: 'other', label: 'Other' },
-] as const;
-
-/** GET /api/fill-logs/:id (api/src/fill-logs/fill-log-views.ts). */
-export interface FillLog {
-  id: string;
-  calculationId: string;
-  versionNumber: number;
-  filledAt: string;
-  place: string;
-  envelopeLabel: string;
-  gasSource: string;
-  ambient: FillAmbient;
-  readings: FillReading[];
-  instrument: LiftInstrument | null;
-  note: string;
-  outputs: CalculationResult['outputs'];
-  steps: CalculationResult['steps'];
-  warnings: CalculationResult['warnings'];
-  points: { timeS: number; measuredKg: number; predictedKg: number | null }[];
-  engineVersion: string;
-  createdBy: { id: string; displayName: string } | null;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface FillLogDraft {
-  filledAt: string;
-  place: string;
-  envelopeLabel: string;
-  gasSource: string;
-  ambient: FillAmbient;
-  readings: FillReading[];
-  instrument: LiftInstrument;
-  note: string;
-}
+] as const satisfies readonly { value: FillLogBody['gasSource']; label: string }[];
 
 const listKey = (calculationId: string) => ['fill-logs', calculationId];
 
@@ -60,7 +24,7 @@ export const useFillLogs = (calculationId: string) =>
 export function useCreateFillLog(calculationId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({ versionNumber, draft }: { versionNumber: number; draft: FillLogDraft }) =>
+    mutationFn: async ({ versionNumber, draft }: { versionNumber: number; draft: FillLogBody }) =>
       (
         await apiClient.post<FillLog>(
           `/calculations/${calculationId}/versions/${versionNumber}/fill-logs`,
@@ -74,15 +38,8 @@ export function useCreateFillLog(calculationId: string) {
 export function useAddReadings(calculationId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({
-      id,
-      mode,
-      readings,
-    }: {
-      id: string;
-      mode: 'append' | 'replace';
-      readings: FillReading[];
-    }) => (await apiClient.post<FillLog>(`/fill-logs/${id}/readings`, { mode, readings })).data,
+    mutationFn: async ({ id, mode, readings }: AddReadingsBody & { id: string }) =>
+      (await apiClient.post<FillLog>(`/fill-logs/${id}/readings`, { mode, readings })).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: listKey(calculationId) }),
   });
 }

@@ -1,17 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { VersionDetail } from '@loftwright/contract';
 import { apiClient } from '@/lib/api-client';
 
 /**
- * GET /api/calculations/:id/versions/:n (versionDetail in api/src/calculations/calculation-views.ts):
- * the part a fill log needs, the inputs the version was computed from (its air among them).
+ * GET /api/calculations/:id/versions/:n: a fill log needs the inputs the version was computed
+ * from (its air among them).
  */
-export interface LoggedVersion {
-  number: number;
-  inputs: Record<string, unknown>;
-}
-
 export const getCalculationVersion = async (calculationId: string, versionNumber: number) =>
-  (await apiClient.get<LoggedVersion>(`/calculations/${calculationId}/versions/${versionNumber}`))
+  (await apiClient.get<VersionDetail>(`/calculations/${calculationId}/versions/${versionNumber}`))
     .data;
 
 /** A saved version never changes, so once read it stays fresh. */

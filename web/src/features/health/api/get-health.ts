@@ -1,15 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { HealthReport } from '@loftwright/contract';
 import { apiClient } from '@/lib/api-client';
 
-/** What GET /api/health answers (api/src/health/health.service.ts). */
-export interface HealthReport {
-  status: 'ok' | 'error';
-  version: string;
-  engineVersion: string;
-  database: 'ok' | 'error';
-  databaseCreatedAt?: string;
-  pendingMigrations?: boolean;
-}
+export type { HealthReport } from '@loftwright/contract';
 
 export async function getHealth(): Promise<HealthReport> {
   // A 503 still carries the report, so read it instead of treating it as a failure.

@@ -1,67 +1,9 @@
-import { type CalculationResult, KINDS } from '@loftwright/buoyancy';
+import { KINDS } from '@loftwright/buoyancy';
+import type { CalculationListItem, Plan, SavePlanBody } from '@loftwright/contract';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
 
-/** What a planner enters (api/src/plans/dto/plan.dto.ts). */
-export interface PlanDraft {
-  title: string;
-  eventDate?: string;
-  lines: {
-    label?: string;
-    count: number;
-    calculationId?: string;
-    diameterM?: number;
-    volumeM3?: number;
-  }[];
-  fill: { temperatureK: number; pressurePa: number };
-  electrolyser?: {
-    currentA: number;
-    cellsInSeries: number;
-    faradaicEfficiency?: number;
-    voltage: { kind: 'cell'; cellVoltageV: number };
-    supplyEfficiency?: number;
-  };
-  cylinder?: {
-    gasId: string;
-    waterVolumeM3: number;
-    fillPressurePa: number;
-    residualPressurePa?: number;
-    temperatureK: number;
-  };
-  prices?: {
-    currency: string;
-    electricityPerKWh?: number;
-    cylinderEach?: number;
-    bulkGasPerM3?: number;
-  };
-  pricesDate?: string;
-}
-
-export interface PlanLineResult {
-  label: string;
-  volumeM3: number;
-  count: number;
-  totalM3: number;
-  calculationId: string | null;
-  versionNumber: number | null;
-}
-
-export interface Plan {
-  id: string;
-  title: string;
-  eventDate: string;
-  inputs: PlanDraft;
-  result: {
-    lines: PlanLineResult[];
-    totalM3: number;
-    outputs: CalculationResult['outputs'];
-    steps: CalculationResult['steps'];
-    warnings: CalculationResult['warnings'];
-  };
-  engineVersion: string;
-  createdAt: string;
-  updatedAt: string;
-}
+export type { CalculationListItem, Plan, PlanLineResult, SavePlanBody } from '@loftwright/contract';
 
 export const usePlans = () =>
   useQuery({
@@ -78,7 +20,7 @@ export const usePlan = (id: string) =>
 export function useSavePlan(id?: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (draft: PlanDraft) =>
+    mutationFn: async (draft: SavePlanBody) =>
       (id
         ? await apiClient.put<Plan>(`/plans/${id}`, draft)
         : await apiClient.post<Plan>('/plans', draft)
@@ -98,19 +40,12 @@ export function useRemovePlan() {
 }
 
 /** A starting point: one envelope, air at 15 °C and 1013.25 hPa, delivered-gas price to fill in. */
-export const NEW_PLAN: PlanDraft = {
+export const NEW_PLAN: SavePlanBody = {
   title: 'New gas plan',
   lines: [{ volumeM3: 1, count: 1 }],
   fill: { temperatureK: 288.15, pressurePa: 101325 },
   prices: { currency: 'EUR' },
 };
-
-export interface CalculationOption {
-  id: string;
-  title: string;
-  kind: string;
-  latestVersion: number;
-}
 
 /** Kinds whose results include an envelope volume a plan can fill, as the engine says. */
 const KINDS_WITH_VOLUME = new Set(
@@ -123,7 +58,7 @@ export const useCalculationOptions = () =>
     queryKey: ['plans', 'calculation-options'],
     queryFn: async () =>
       (
-        await apiClient.get<{ items: CalculationOption[] }>('/calculations', {
+        await apiClient.get<{ items: CalculationListItem[] }>('/calculations', {
           params: { pageSize: 100, sort: 'title' },
         })
       ).data.items.filter((item) => KINDS_WITH_VOLUME.has(item.kind)),

@@ -1,22 +1,20 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type {
+  AddReviewCommentBody,
+  ApproveVersionBody,
+  MarkAddressedBody,
+  ReviewComment,
+  ReviewQueueItem,
+  SendBackVersionBody,
+} from '@loftwright/contract';
 import { apiClient } from '@/lib/api-client';
 
-/** GET /api/reviews/queue items (api/src/reviews/reviews.service.ts). */
-export interface QueueItem {
-  calculationId: string;
-  title: string;
-  kind: string;
-  number: number;
-  author: { id: string; displayName: string } | null;
-  reviewer: { id: string; displayName: string } | null;
-  submittedAt: string | null;
-  fingerprint: string;
-}
+export type { ReviewComment, ReviewQueueItem } from '@loftwright/contract';
 
 export const useReviewQueue = () =>
   useQuery({
     queryKey: ['reviews', 'queue'],
-    queryFn: async () => (await apiClient.get<QueueItem[]>('/reviews/queue')).data,
+    queryFn: async () => (await apiClient.get<ReviewQueueItem[]>('/reviews/queue')).data,
   });
 
 export function useDecide(calculationId: string) {
@@ -36,8 +34,11 @@ export function useDecide(calculationId: string) {
           `/calculations/${calculationId}/versions/${number}/${decision}`,
           decision === 'approve'
             ? // The archived sheet gives the approval in the approver's zone as well as UTC.
-              { comment, timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone }
-            : { comment },
+              ({
+                comment,
+                timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone,
+              } satisfies ApproveVersionBody)
+            : ({ comment } satisfies SendBackVersionBody),
         )
       ).data,
     onSuccess: () => {
@@ -45,21 +46,6 @@ export function useDecide(calculationId: string) {
       void queryClient.invalidateQueries({ queryKey: ['reviews'] });
     },
   });
-}
-
-/** A review comment (api/src/reviews/review-comments.service.ts, ReviewCommentView). */
-export interface ReviewComment {
-  id: string;
-  versionNumber: number;
-  author: { id: string; displayName: string } | null;
-  anchor: { kind: 'input' | 'result'; path: string; label: string } | null;
-  body: string;
-  createdAt: string;
-  addressed: {
-    versionNumber: number;
-    by: { id: string; displayName: string } | null;
-    at: string;
-  } | null;
 }
 
 const commentsKey = (calculationId: string) => ['reviews', 'comments', calculationId];
@@ -74,19 +60,11 @@ export const useReviewComments = (calculationId: string) =>
 export function useAddReviewComment(calculationId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({
-      number,
-      body,
-      anchor,
-    }: {
-      number: number;
-      body: string;
-      anchor?: { kind: 'input' | 'result'; path: string };
-    }) =>
+    mutationFn: async ({ number, body, anchor }: AddReviewCommentBody & { number: number }) =>
       (
         await apiClient.post<ReviewComment>(
           `/calculations/${calculationId}/versions/${number}/comments`,
-          anchor ? { body, anchor } : { body },
+          (anchor ? { body, anchor } : { body }) satisfies AddReviewCommentBody,
         )
       ).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: commentsKey(calculationId) }),
@@ -103,8 +81,11 @@ export function useMarkAddressed(calculationId: string) {
       commentId: string;
       versionNumber: number;
     }) =>
-      (await apiClient.post<ReviewComment>(`/comments/${commentId}/addressed`, { versionNumber }))
-        .data,
+      (
+        await apiClient.post<ReviewComment>(`/comments/${commentId}/addressed`, {
+          versionNumber,
+        } satisfies MarkAddressedBody)
+      ).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: commentsKey(calculationId) }),
   });
 }

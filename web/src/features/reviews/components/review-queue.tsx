@@ -1,7 +1,7 @@
 import { Empty, Table, Typography } from 'antd';
 import { KINDS } from '@loftwright/buoyancy';
 import { Link } from 'react-router-dom';
-import { type QueueItem, useReviewQueue } from '../api/reviews-api';
+import { type ReviewQueueItem, useReviewQueue } from '../api/reviews-api';
 
 const KIND_TITLES = new Map(KINDS.map((kind) => [kind.id, kind.title]));
 
@@ -10,7 +10,7 @@ export function ReviewQueue({ calculationHref }: { calculationHref: (id: string)
   const queue = useReviewQueue();
   if (queue.error) return <Typography.Text type="danger">{queue.error.message}</Typography.Text>;
   return (
-    <Table<QueueItem>
+    <Table<ReviewQueueItem>
       rowKey={(item) => `${item.calculationId}-${item.number}`}
       loading={queue.isPending}
       dataSource={queue.data ?? []}
@@ -37,12 +37,13 @@ export function ReviewQueue({ calculationHref }: { calculationHref: (id: string)
         {
           title: 'Author',
           dataIndex: 'author',
-          render: (author: QueueItem['author']) => author?.displayName ?? '',
+          render: (author: ReviewQueueItem['author']) => author?.displayName ?? '',
         },
         {
           title: 'Asked of',
           dataIndex: 'reviewer',
-          render: (reviewer: QueueItem['reviewer']) => reviewer?.displayName ?? 'any reviewer',
+          render: (reviewer: ReviewQueueItem['reviewer']) =>
+            reviewer?.displayName ?? 'any reviewer',
         },
         {
           title: 'Submitted',

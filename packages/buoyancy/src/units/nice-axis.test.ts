@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { niceAxis, tickDecimals } from './nice-axis';
+import { niceAxis, tickDecimals } from './nice-axis.js';
 
 describe('niceAxis', () => {
   it('covers the data with round ends and evenly spaced ticks', () => {
