@@ -31,7 +31,9 @@ export type {
 } from './atmosphere/standard-atmosphere.js';
 export * from './constants.js';
 export {
+  describeKind,
   evaluate,
+  evaluateKind,
   isKindId,
   KIND_IDS,
   kindCapabilities,
@@ -39,6 +41,11 @@ export {
   normaliseInputs,
 } from './kinds/registry.js';
 export type { EvaluateOptions, KindDescription, KindId } from './kinds/registry.js';
+// What a new kind is made of (DEVELOPERS.md, "Add a calculation kind").
+export { defineKind } from './kinds/kind.js';
+export type { CalculationKind } from './kinds/kind.js';
+export { Derivation } from './derivation.js';
+export { quantity } from './schema/quantity-schema.js';
 export type { KindCapabilities, KindChart } from './kinds/kind.js';
 export { CHECK_THIS, plausibilityNotes } from './schema/plausibility.js';
 export { USUAL } from './schema/usual-ranges.js';

@@ -59,21 +59,28 @@ function jsonSchemaOf(kind: CalculationKind): Record<string, unknown> {
   return schema;
 }
 
+/**
+ * A kind as other programs see it. Everything the web and the API show of a kind (its form, units,
+ * ranges, capabilities) comes from this, so a new kind needs no code outside the engine.
+ */
+export function describeKind(kind: CalculationKind): KindDescription {
+  return {
+    id: kind.id,
+    title: kind.title,
+    description: kind.description,
+    get inputSchema() {
+      // A fresh copy each time: callers may not change the one evaluate reads.
+      return JSON.parse(JSON.stringify(jsonSchemaOf(kind))) as Record<string, unknown>;
+    },
+    example: kind.example,
+    capabilities: kind.capabilities ?? NO_CAPABILITIES,
+  };
+}
+
 /** Every calculation kind the engine offers. */
-export const KINDS: readonly KindDescription[] = KIND_LIST.map((kind) => ({
-  id: kind.id,
-  title: kind.title,
-  description: kind.description,
-  get inputSchema() {
-    // A fresh copy each time: callers may not change the one evaluate reads.
-    return JSON.parse(JSON.stringify(jsonSchemaOf(kind as unknown as CalculationKind))) as Record<
-      string,
-      unknown
-    >;
-  },
-  example: kind.example,
-  capabilities: kind.capabilities ?? NO_CAPABILITIES,
-}));
+export const KINDS: readonly KindDescription[] = KIND_LIST.map((kind) =>
+  describeKind(kind as unknown as CalculationKind),
+);
 
 export const KIND_IDS = KIND_LIST.map((kind) => kind.id) as readonly KindId[];
 
@@ -104,6 +111,15 @@ export function evaluate(
   if (!kind) {
     throw new InputError('kind', kindId, `must be one of: ${[...byId.keys()].join(', ')}`);
   }
+  return evaluateKind(kind, inputs, options);
+}
+
+/** Evaluates inputs with a kind definition itself, as `evaluate` does with a registered one. */
+export function evaluateKind(
+  kind: CalculationKind,
+  inputs: unknown,
+  options: EvaluateOptions = {},
+): CalculationResult {
   const parsed = parseInputs(kind.schema, inputs);
   const result = kind.compute(parsed);
   const notes = plausibilityNotes(jsonSchemaOf(kind), parsed, options.display);
