@@ -1,7 +1,8 @@
 import type { InputSection, LiftSweep, NumberFormat, UnitSystem } from '@loftwright/buoyancy';
 import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
-import { fontRuns, type SheetFont, sheetFonts } from './sheet-fonts';
+import { sheetFonts } from './sheet-fonts';
+import { GREY, MARGIN, SheetWriter } from './sheet-writer';
 import { drawSweepCharts, SWEEP_CHART_HEIGHT } from './sweep-chart-pdf';
 
 /** What the printed sheet shows (docs: ../shared/design.md, "Printed sign-off sheet"). */
@@ -36,10 +37,6 @@ export interface SignOffContent {
   /** The reader's units and number format for the charts; SI and 1,234.5 when not given. */
   reading?: { unitSystem: UnitSystem; numberFormat: NumberFormat };
 }
-
-const MARGIN = 50;
-const INK = '#000000';
-const GREY = '#444444';
 
 const number = (value: number) =>
   Math.abs(value) >= 1e6 || (Math.abs(value) < 1e-3 && value !== 0)
@@ -113,68 +110,38 @@ export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer>
     doc.on('error', reject);
   });
 
-  const sans = [fonts.sans, fonts.greek, fonts.fallbackSans];
-  const bold = [fonts.sansBold, fonts.greek, fonts.fallbackSans];
-  const mono = [fonts.mono, fonts.fallbackMono];
-  const width = doc.page.width - 2 * MARGIN;
+  const sheet = new SheetWriter(doc, fonts);
+  writeTitleBlock(sheet, content, qrPng);
+  writeInputs(sheet, content);
+  writeResults(sheet, content);
+  writeWarnings(sheet, content);
+  writeCharts(sheet, content);
+  writeDerivation(sheet, content);
+  writeReview(sheet, content);
+  writePageFooters(sheet, content);
+  doc.end();
+  return done;
+}
 
-  /** Writes a line (or paragraph) of text, switching fonts where a glyph is missing. */
-  const write = (
-    text: string,
-    face: readonly SheetFont[],
-    size: number,
-    options: PDFKit.Mixins.TextOptions & { color?: string } = {},
-  ) => {
-    const runs = fontRuns(text === '' ? ' ' : text, face);
-    doc.fillColor(options.color ?? INK).fontSize(size);
-    runs.forEach((run, index) => {
-      doc.font(run.font.name).text(run.text, {
-        width: options.width ?? width,
-        ...options,
-        continued: index < runs.length - 1,
-      });
-    });
-  };
-  const heading = (text: string) => {
-    doc.moveDown(0.8);
-    write(text, bold, 13);
-    doc.moveDown(0.3);
-  };
-  /** Two columns: a label and its value, kept together on one page. */
-  const row = (label: string, value: string, valueFace = mono) => {
-    const labelWidth = width * 0.5;
-    doc.font(fonts.sans.name).fontSize(9);
-    const height = Math.max(
-      doc.heightOfString(label, { width: labelWidth - 8 }),
-      doc.heightOfString(value, { width: width - labelWidth }),
-    );
-    if (doc.y + height > doc.page.height - MARGIN) doc.addPage();
-    const y = doc.y;
-    write(label, sans, 9, { width: labelWidth - 8, color: GREY });
-    const afterLabel = doc.y;
-    doc.y = y;
-    doc.x = MARGIN + labelWidth;
-    write(value, valueFace, 9, { width: width - labelWidth });
-    doc.x = MARGIN;
-    doc.y = Math.max(afterLabel, doc.y) + 2;
-  };
-
-  write('Loftwright · sign-off sheet', sans, 10, { color: GREY });
+/** Title, version and approval lines, the fingerprint beside the verify QR code, and its address. */
+function writeTitleBlock(sheet: SheetWriter, content: SignOffContent, qrPng: Buffer): void {
+  const { doc, sans, bold, mono, width } = sheet;
+  sheet.write('Loftwright · sign-off sheet', sans, 10, { color: GREY });
   doc.moveDown(0.3);
-  write(content.title, bold, 18);
+  sheet.write(content.title, bold, 18);
   doc.moveDown(0.2);
-  write(
+  sheet.write(
     `${content.kindTitle} · version ${content.versionNumber} · ${content.status} · engine ${content.engineVersion}`,
     sans,
     10,
   );
-  write(
+  sheet.write(
     `Saved ${utcText(content.savedAt)} by ${content.author}${content.note ? ` — ${content.note}` : ''}`,
     sans,
     10,
   );
   if (content.review) {
-    write(
+    sheet.write(
       `Approved ${approvalMomentText(content.review.decidedAt, content.review.timeZone)} by ${content.review.reviewer}`,
       bold,
       10,
@@ -187,72 +154,80 @@ export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer>
   const blockTop = doc.y;
   doc.image(qrPng, MARGIN + width - qrSize, blockTop, { width: qrSize, height: qrSize });
   const textWidth = width - qrSize - 12;
-  write('Content fingerprint (SHA-256)', sans, 9, { color: GREY, width: textWidth });
-  write(groupedFingerprint(content.fingerprint), mono, 10, { width: textWidth });
+  sheet.write('Content fingerprint (SHA-256)', sans, 9, { color: GREY, width: textWidth });
+  sheet.write(groupedFingerprint(content.fingerprint), mono, 10, { width: textWidth });
   doc.moveDown(0.3);
-  write('Scan the code or open this address to check the sheet:', sans, 9, {
+  sheet.write('Scan the code or open this address to check the sheet:', sans, 9, {
     color: GREY,
     width: textWidth,
   });
   doc.x = MARGIN;
   doc.y = Math.max(doc.y, blockTop + qrSize + 2);
-  write(content.verifyUrl, mono, 8);
+  sheet.write(content.verifyUrl, mono, 8);
+}
 
-  heading('Inputs');
+function writeInputs(sheet: SheetWriter, content: SignOffContent): void {
+  sheet.heading('Inputs');
   for (const section of content.inputSections) {
-    doc.moveDown(0.2);
-    if (section.title) write(section.title, bold, 10);
-    for (const line of section.lines) row(line.label, line.text, sans);
+    sheet.doc.moveDown(0.2);
+    if (section.title) sheet.write(section.title, sheet.bold, 10);
+    for (const line of section.lines) sheet.row(line.label, line.text, sheet.sans);
   }
+}
 
-  heading('Results');
+function writeResults(sheet: SheetWriter, content: SignOffContent): void {
+  sheet.heading('Results');
   for (const output of Object.values(content.outputs)) {
-    row(
+    sheet.row(
       output.label,
       `${number(output.value)} ${output.unit}${output.context ? `  (${output.context})` : ''}`,
     );
   }
+}
 
-  if (content.warnings.length > 0) {
-    heading('Cautions and warnings');
-    for (const warning of content.warnings) {
-      write(
-        `${warning.severity === 'caution' ? 'Caution' : warning.severity === 'warning' ? 'Check this' : 'Note'}: ${warning.message}`,
-        sans,
-        9,
-      );
-      doc.moveDown(0.3);
-    }
+const WARNING_WORDS: Record<string, string> = { caution: 'Caution', warning: 'Check this' };
+
+function writeWarnings(sheet: SheetWriter, content: SignOffContent): void {
+  if (content.warnings.length === 0) return;
+  sheet.heading('Cautions and warnings');
+  for (const warning of content.warnings) {
+    sheet.write(`${WARNING_WORDS[warning.severity] ?? 'Note'}: ${warning.message}`, sheet.sans, 9);
+    sheet.doc.moveDown(0.3);
   }
+}
 
+function writeCharts(sheet: SheetWriter, content: SignOffContent): void {
   const charts = content.charts ?? [];
-  if (charts.length > 0) {
-    // The heading and its note stay with the first chart.
-    if (doc.y + 70 + SWEEP_CHART_HEIGHT > doc.page.height - MARGIN) doc.addPage();
-    heading('Charts');
-    write(
-      'Net and free lift as one input changes, every other input as above; the dot is this version.',
-      sans,
-      9,
-      { color: GREY },
-    );
-    doc.moveDown(0.6);
-    drawSweepCharts(
-      doc,
-      charts,
-      { left: MARGIN, width, bottom: doc.page.height - MARGIN },
-      content.reading ?? { unitSystem: 'si', numberFormat: 'point-comma' },
-      { sans, bold },
-    );
-  }
+  if (charts.length === 0) return;
+  const { doc, sans, bold, width } = sheet;
+  // The heading and its note stay with the first chart.
+  sheet.keepRoom(70 + SWEEP_CHART_HEIGHT);
+  sheet.heading('Charts');
+  sheet.write(
+    'Net and free lift as one input changes, every other input as above; the dot is this version.',
+    sans,
+    9,
+    { color: GREY },
+  );
+  doc.moveDown(0.6);
+  drawSweepCharts(
+    doc,
+    charts,
+    { left: MARGIN, width, bottom: doc.page.height - MARGIN },
+    content.reading ?? { unitSystem: 'si', numberFormat: 'point-comma' },
+    { sans, bold },
+  );
+}
 
-  heading('Derivation');
+function writeDerivation(sheet: SheetWriter, content: SignOffContent): void {
+  const { doc, sans, bold, mono } = sheet;
+  sheet.heading('Derivation');
   content.steps.forEach((step, index) => {
-    if (doc.y > doc.page.height - MARGIN - 60) doc.addPage();
-    write(`${index + 1}. ${step.label}`, bold, 9.5);
-    write(step.formula, mono, 9);
+    sheet.keepRoom(60);
+    sheet.write(`${index + 1}. ${step.label}`, bold, 9.5);
+    sheet.write(step.formula, mono, 9);
     if (step.values.length > 0) {
-      write(
+      sheet.write(
         step.values
           .map((value) => `${value.symbol} = ${number(value.value)} ${value.unit}`)
           .join(', '),
@@ -261,20 +236,31 @@ export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer>
         { color: GREY },
       );
     }
-    write(`→ ${step.result.symbol} = ${number(step.result.value)} ${step.result.unit}`, mono, 9);
-    write(step.source, sans, 8, { color: GREY });
+    sheet.write(
+      `→ ${step.result.symbol} = ${number(step.result.value)} ${step.result.unit}`,
+      mono,
+      9,
+    );
+    sheet.write(step.source, sans, 8, { color: GREY });
     doc.moveDown(0.4);
   });
+}
 
-  heading('Review');
-  if (content.review) {
-    row('Approved by', content.review.reviewer, sans);
-    row('Approved at', approvalMomentText(content.review.decidedAt, content.review.timeZone), sans);
-    row('Comment', content.review.comment || '(none)', sans);
-  } else {
-    write('Not approved: this sheet records the version only.', sans, 10);
+function writeReview(sheet: SheetWriter, content: SignOffContent): void {
+  sheet.heading('Review');
+  if (!content.review) {
+    sheet.write('Not approved: this sheet records the version only.', sheet.sans, 10);
+    return;
   }
+  const { review } = content;
+  sheet.row('Approved by', review.reviewer, sheet.sans);
+  sheet.row('Approved at', approvalMomentText(review.decidedAt, review.timeZone), sheet.sans);
+  sheet.row('Comment', review.comment || '(none)', sheet.sans);
+}
 
+/** Title, version and page on every page, and the whole fingerprint, so any page checks alone. */
+function writePageFooters(sheet: SheetWriter, content: SignOffContent): void {
+  const { doc, fonts, width } = sheet;
   const range = doc.bufferedPageRange();
   for (let page = range.start; page < range.start + range.count; page += 1) {
     doc.switchToPage(page);
@@ -290,7 +276,6 @@ export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer>
         bottom,
         { width, align: 'center', lineBreak: false },
       );
-    // The whole fingerprint on every page, so any one page can be checked on its own.
     doc
       .font(fonts.mono.name)
       .fontSize(7)
@@ -300,6 +285,4 @@ export async function renderSignOffPdf(content: SignOffContent): Promise<Buffer>
         lineBreak: false,
       });
   }
-  doc.end();
-  return done;
 }
