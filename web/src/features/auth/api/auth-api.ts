@@ -12,7 +12,13 @@ import type {
 import { apiClient } from '@/lib/api-client';
 import { setToken, useToken } from '@/lib/session';
 
-export type { Account, Preferences, RegisterOutcome, Role } from '@loftwright/contract';
+export type {
+  Account,
+  Preferences,
+  RegisterBody,
+  RegisterOutcome,
+  Role,
+} from '@loftwright/contract';
 
 export const getMe = async (): Promise<Account> => (await apiClient.get<Account>('/auth/me')).data;
 

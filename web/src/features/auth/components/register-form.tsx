@@ -1,7 +1,7 @@
 import { Button, Form, Input } from 'antd';
 import { FormError } from '@/components/errors/form-error';
 import { guessNumberFormat } from '@/lib/guess-number-format';
-import { type RegisterOutcome, useRegister } from '../api/auth-api';
+import { type RegisterBody, type RegisterOutcome, useRegister } from '../api/auth-api';
 
 export function RegisterForm({
   onRegistered,
@@ -16,7 +16,7 @@ export function RegisterForm({
     <Form
       layout="vertical"
       requiredMark={false}
-      onFinish={(values: { email: string; password: string; displayName: string }) =>
+      onFinish={(values: Pick<RegisterBody, 'email' | 'password' | 'displayName'>) =>
         register.mutate(
           // How numbers are written is guessed from the browser; the user menu changes it later.
           { ...values, numberFormat: guessNumberFormat(), ...(joinCode ? { joinCode } : {}) },
