@@ -80,5 +80,5 @@ describe('durability: acknowledged saves survive SIGKILL', () => {
     for (const [number, fingerprint] of acknowledged)
       expect(stored.get(number), `version ${number}`).toBe(fingerprint);
     expect(detail.latestVersion).toBe(26);
-  });
+  }, 180_000); // two server starts and a kill on a busy 2-core machine take longer than 20 s
 });

@@ -9,7 +9,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import type { ReadStream } from 'node:fs';
 import { Repository } from 'typeorm';
-import { AuditService } from '../audit/audit.service';
+import { type AuditRecord, AuditService } from '../audit/audit.service';
 import type { AuthUser } from '../auth/auth-user';
 import { canAddFiles } from '../calculations/calculation-access';
 import { CalculationsService } from '../calculations/calculations.service';
@@ -137,9 +137,9 @@ export class AttachmentsService {
   ): Promise<AttachmentView> {
     const { sha256 } = staged;
     const id = randomUUID();
-    await this.writeLock.run(async () => {
+    await this.writeLock.transaction(async (manager) => {
       await this.store.commit(staged);
-      await insertRow(this.attachments, {
+      await insertRow(manager.getRepository(Attachment), {
         id,
         calculationId,
         fillLogId: meta.fillLogId,
@@ -150,13 +150,16 @@ export class AttachmentsService {
         fileName: meta.fileName,
         uploadedBy: user?.id ?? null,
       });
-    });
-    await this.audit.record({
-      actorId: user?.id ?? null,
-      action: 'attachment.add',
-      targetType: 'calculation',
-      targetId: calculationId,
-      detail: { attachmentId: id, fileName: meta.fileName, mediaType: meta.mediaType, sha256 },
+      await this.audit.record(
+        {
+          actorId: user?.id ?? null,
+          action: 'attachment.add',
+          targetType: 'calculation',
+          targetId: calculationId,
+          detail: { attachmentId: id, fileName: meta.fileName, mediaType: meta.mediaType, sha256 },
+        },
+        manager,
+      );
     });
     const found = await this.attachments.findOneByOrFail({ id });
     const viewer = user && 'roles' in user ? (user as AuthUser) : null;
@@ -205,8 +208,7 @@ export class AttachmentsService {
             : 'Only the uploader or an admin removes a file.',
       });
     }
-    await this.removeRecord(attachment);
-    await this.audit.record({
+    await this.removeRecord(attachment, {
       actorId: user.id,
       action: 'attachment.remove',
       targetType: 'calculation',
@@ -226,12 +228,18 @@ export class AttachmentsService {
    * write lock, so an upload of the same content (which commits its bytes and inserts its record
    * under the same lock) comes wholly before or wholly after.
    */
-  private async removeRecord(row: Attachment): Promise<void> {
-    await this.writeLock.run(async () => {
-      await this.attachments.delete({ id: row.id });
-      if ((await this.attachments.countBy({ sha256: row.sha256 })) === 0) {
-        await this.store.remove(row.sha256);
-      }
-    });
+  private async removeRecord(row: Attachment, record?: AuditRecord): Promise<void> {
+    await this.writeLock.transaction(
+      async (manager) => {
+        const attachments = manager.getRepository(Attachment);
+        await attachments.delete({ id: row.id });
+        if (record) await this.audit.record(record, manager);
+        return (await attachments.countBy({ sha256: row.sha256 })) === 0;
+      },
+      // The bytes go once the deletion is committed, and before any other write's turn.
+      async (lastUse) => {
+        if (lastUse) await this.store.remove(row.sha256);
+      },
+    );
   }
 }

@@ -105,20 +105,23 @@ export class AuditService {
     };
   }
 
-  /** Writes one audit row; inside a transaction when `manager` is given, so both commit together. */
-  async record(record: AuditRecord, manager?: EntityManager): Promise<void> {
-    const row = {
+  /**
+   * Writes one audit row in the transaction of the change it records (`WriteLock.transaction`),
+   * so the two commit together.
+   */
+  async record(record: AuditRecord, manager: EntityManager): Promise<void> {
+    await insertRow(manager.getRepository(AuditEntry), {
       actorId: record.actorId,
       action: record.action,
       targetType: record.targetType,
       targetId: record.targetId ?? null,
       detail: record.detail ?? null,
-    };
-    if (manager) {
-      await insertRow(manager.getRepository(AuditEntry), row);
-    } else {
-      await this.writeLock.run(() => insertRow(this.entries, row));
-    }
+    });
+  }
+
+  /** Records an event that changes nothing else (a sign-in, a refused attempt) on its own. */
+  recordEvent(record: AuditRecord): Promise<void> {
+    return this.writeLock.transaction((manager) => this.record(record, manager));
   }
 
   async list(

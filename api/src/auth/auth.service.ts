@@ -73,14 +73,14 @@ export class AuthService {
     const first = await this.usersService.createFirstAccount({
       ...account,
       roles: ['admin', 'designer'],
+      recordRegistration: true,
     });
     if (first) {
-      await this.recordRegistration(first);
       return { status: 'signed-in', ...(await this.signIn(first)) };
     }
     const email = dto.email.trim().toLowerCase();
     const owner = await this.usersService.findByEmail(email);
-    await this.audit.record({
+    await this.audit.recordEvent({
       actorId: null,
       action: 'auth.register-request',
       targetType: 'user',
@@ -141,10 +141,10 @@ export class AuthService {
       numberFormat: pending.numberFormat ?? undefined,
       roles: (first) =>
         first ? ['admin', 'designer'] : pending.joinCode ? ['student'] : ['designer'],
+      recordRegistration: true,
     });
     // Every waiting registration of the address is spent: the address now has its account.
     await this.writeLock.run(() => this.pending.delete({ email: pending.email }));
-    await this.recordRegistration(user);
     if (pending.joinCode && user.roles.includes('student')) {
       await this.classrooms.join(
         { id: user.id, email: user.email, displayName: user.displayName, roles: user.roles },
@@ -152,15 +152,6 @@ export class AuthService {
       );
     }
     return this.signIn(user);
-  }
-
-  private recordRegistration(user: User): Promise<void> {
-    return this.audit.record({
-      actorId: user.id,
-      action: 'auth.register',
-      targetType: 'user',
-      targetId: user.id,
-    });
   }
 
   /** A link into the web app, on PUBLIC_URL when set. */
@@ -172,7 +163,7 @@ export class AuthService {
     const user = await this.usersService.findByEmail(dto.email);
     const { matches, needsRehash } = await this.hasher.check(dto.password, user?.passwordHash);
     if (!user || !matches) {
-      await this.audit.record({
+      await this.audit.recordEvent({
         actorId: null,
         action: 'auth.sign-in-failed',
         targetType: 'user',
@@ -181,7 +172,7 @@ export class AuthService {
       // One answer for an unknown address and a wrong password.
       throw new UnauthorizedException({ message: 'The e-mail or password is not right.' });
     }
-    await this.audit.record({
+    await this.audit.recordEvent({
       actorId: user.id,
       action: 'auth.sign-in',
       targetType: 'user',
@@ -193,8 +184,7 @@ export class AuthService {
   }
 
   async logout(userId: string): Promise<void> {
-    await this.usersService.bumpTokenVersion(userId);
-    await this.audit.record({
+    await this.usersService.bumpTokenVersion(userId, {
       actorId: userId,
       action: 'auth.sign-out',
       targetType: 'user',
@@ -204,7 +194,7 @@ export class AuthService {
 
   async requestPasswordReset(email: string): Promise<void> {
     const user = await this.usersService.findByEmail(email);
-    await this.audit.record({
+    await this.audit.recordEvent({
       actorId: user?.id ?? null,
       action: 'auth.password-reset-request',
       targetType: 'user',
@@ -250,8 +240,7 @@ export class AuthService {
         field: 'token',
       });
     }
-    await this.usersService.setPassword(user, password);
-    await this.audit.record({
+    await this.usersService.setPassword(user, password, {
       actorId: user.id,
       action: 'auth.password-reset',
       targetType: 'user',

@@ -174,8 +174,8 @@ export class ClassroomsService {
       throw new ForbiddenException({ message: 'Running a class needs the teacher role.' });
     }
     const id = randomUUID();
-    await this.writeLock.run(async () => {
-      await insertRow(this.classrooms, {
+    await this.writeLock.transaction(async (manager) => {
+      await insertRow(manager.getRepository(Classroom), {
         id,
         teacherId: user.id,
         title: dto.title.trim(),
@@ -185,12 +185,10 @@ export class ClassroomsService {
         ),
         closedAt: null,
       });
-    });
-    await this.audit.record({
-      actorId: user.id,
-      action: 'classroom.create',
-      targetType: 'classroom',
-      targetId: id,
+      await this.audit.record(
+        { actorId: user.id, action: 'classroom.create', targetType: 'classroom', targetId: id },
+        manager,
+      );
     });
     return this.detail(user, id);
   }
@@ -207,20 +205,18 @@ export class ClassroomsService {
     if (classroom.closedAt) {
       throw new ConflictException({ message: 'The class is closed.', field: 'id' });
     }
-    await this.writeLock.run(async () =>
-      this.classrooms.update(
+    await this.writeLock.transaction(async (manager) => {
+      await manager.getRepository(Classroom).update(
         { id },
         {
           joinCode: await this.unusedCode(),
           joinCodeExpiresAt: new Date(Date.now() + validDays * DAY_MS),
         },
-      ),
-    );
-    await this.audit.record({
-      actorId: user.id,
-      action: 'classroom.renew-code',
-      targetType: 'classroom',
-      targetId: id,
+      );
+      await this.audit.record(
+        { actorId: user.id, action: 'classroom.renew-code', targetType: 'classroom', targetId: id },
+        manager,
+      );
     });
     return this.detail(user, id);
   }
@@ -265,19 +261,23 @@ export class ClassroomsService {
     const classroom = await this.findJoinable(rawCode);
     const already = await this.isMember(classroom.id, user.id);
     if (!already) {
-      await this.writeLock.run(() =>
-        this.members
+      await this.writeLock.transaction(async (manager) => {
+        await manager
+          .getRepository(ClassroomMember)
           .createQueryBuilder()
           .insert()
           .values({ classroomId: classroom.id, studentId: user.id })
           .orIgnore()
-          .execute(),
-      );
-      await this.audit.record({
-        actorId: user.id,
-        action: 'classroom.join',
-        targetType: 'classroom',
-        targetId: classroom.id,
+          .execute();
+        await this.audit.record(
+          {
+            actorId: user.id,
+            action: 'classroom.join',
+            targetType: 'classroom',
+            targetId: classroom.id,
+          },
+          manager,
+        );
       });
     }
     return this.detail(user, classroom.id);
@@ -285,33 +285,38 @@ export class ClassroomsService {
 
   async removeStudent(user: AuthUser, id: string, studentId: string): Promise<void> {
     await this.findTaught(user, id);
-    const result = await this.writeLock.run(() =>
-      this.members.delete({ classroomId: id, studentId }),
-    );
-    if (!result.affected) {
-      throw new NotFoundException({
-        message: 'This student is not in the class.',
-        field: 'userId',
-      });
-    }
-    await this.audit.record({
-      actorId: user.id,
-      action: 'classroom.remove-student',
-      targetType: 'classroom',
-      targetId: id,
-      detail: { studentId },
+    await this.writeLock.transaction(async (manager) => {
+      const result = await manager
+        .getRepository(ClassroomMember)
+        .delete({ classroomId: id, studentId });
+      if (!result.affected) {
+        throw new NotFoundException({
+          message: 'This student is not in the class.',
+          field: 'userId',
+        });
+      }
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'classroom.remove-student',
+          targetType: 'classroom',
+          targetId: id,
+          detail: { studentId },
+        },
+        manager,
+      );
     });
   }
 
   async close(user: AuthUser, id: string): Promise<ClassDetail> {
     const classroom = await this.findTaught(user, id);
     if (!classroom.closedAt) {
-      await this.writeLock.run(() => this.classrooms.update({ id }, { closedAt: new Date() }));
-      await this.audit.record({
-        actorId: user.id,
-        action: 'classroom.close',
-        targetType: 'classroom',
-        targetId: id,
+      await this.writeLock.transaction(async (manager) => {
+        await manager.getRepository(Classroom).update({ id }, { closedAt: new Date() });
+        await this.audit.record(
+          { actorId: user.id, action: 'classroom.close', targetType: 'classroom', targetId: id },
+          manager,
+        );
       });
     }
     return this.detail(user, id);

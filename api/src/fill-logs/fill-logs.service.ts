@@ -84,8 +84,8 @@ export class FillLogsService {
     this.requireEditor(user, calculation);
     const reduced = await this.reduce(calculation, versionNumber, dto);
     const id = randomUUID();
-    await this.writeLock.run(() =>
-      insertRow(this.logs, {
+    await this.writeLock.transaction(async (manager) => {
+      await insertRow(manager.getRepository(FillLog), {
         id,
         calculationId,
         versionNumber,
@@ -99,14 +99,17 @@ export class FillLogsService {
         instrument: dto.instrument ? { ...dto.instrument } : null,
         note: dto.note ?? '',
         ...reduced,
-      }),
-    );
-    await this.audit.record({
-      actorId: user.id,
-      action: 'fill-log.create',
-      targetType: 'calculation',
-      targetId: calculationId,
-      detail: { fillLogId: id, versionNumber, readings: dto.readings.length },
+      });
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'fill-log.create',
+          targetType: 'calculation',
+          targetId: calculationId,
+          detail: { fillLogId: id, versionNumber, readings: dto.readings.length },
+        },
+        manager,
+      );
     });
     return this.get(user, id);
   }
@@ -150,13 +153,18 @@ export class FillLogsService {
       note: dto.note ?? log.note,
     };
     const reduced = await this.reduce(calculation, log.versionNumber, next);
-    await this.writeLock.run(() => this.logs.update({ id }, { ...next, ...reduced } as never));
-    await this.audit.record({
-      actorId: user.id,
-      action: 'fill-log.update',
-      targetType: 'calculation',
-      targetId: log.calculationId,
-      detail: { fillLogId: id, fields: Object.keys(dto) },
+    await this.writeLock.transaction(async (manager) => {
+      await manager.getRepository(FillLog).update({ id }, { ...next, ...reduced } as never);
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'fill-log.update',
+          targetType: 'calculation',
+          targetId: log.calculationId,
+          detail: { fillLogId: id, fields: Object.keys(dto) },
+        },
+        manager,
+      );
     });
     return this.get(user, id);
   }
@@ -174,13 +182,18 @@ export class FillLogsService {
       readings,
       instrument: log.instrument,
     });
-    await this.writeLock.run(() => this.logs.update({ id }, { readings, ...reduced } as never));
-    await this.audit.record({
-      actorId: user.id,
-      action: 'fill-log.import-readings',
-      targetType: 'calculation',
-      targetId: log.calculationId,
-      detail: { fillLogId: id, mode: dto.mode, readings: dto.readings.length },
+    await this.writeLock.transaction(async (manager) => {
+      await manager.getRepository(FillLog).update({ id }, { readings, ...reduced } as never);
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'fill-log.import-readings',
+          targetType: 'calculation',
+          targetId: log.calculationId,
+          detail: { fillLogId: id, mode: dto.mode, readings: dto.readings.length },
+        },
+        manager,
+      );
     });
     return this.get(user, id);
   }
@@ -189,13 +202,18 @@ export class FillLogsService {
     const { log, calculation } = await this.findReadable(user, id);
     this.requireEditor(user, calculation);
     await this.attachments.removeForFillLog(id);
-    await this.writeLock.run(() => this.logs.delete({ id }));
-    await this.audit.record({
-      actorId: user.id,
-      action: 'fill-log.remove',
-      targetType: 'calculation',
-      targetId: log.calculationId,
-      detail: { fillLogId: id },
+    await this.writeLock.transaction(async (manager) => {
+      await manager.getRepository(FillLog).delete({ id });
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'fill-log.remove',
+          targetType: 'calculation',
+          targetId: log.calculationId,
+          detail: { fillLogId: id },
+        },
+        manager,
+      );
     });
   }
 }

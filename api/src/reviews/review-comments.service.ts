@@ -91,17 +91,22 @@ export class ReviewCommentsService {
       addressedBy: null,
       addressedAt: null,
     });
-    await this.writeLock.run(() => this.comments.insert(comment));
-    await this.audit.record({
-      actorId: user.id,
-      action: 'comment.add',
-      targetType: 'calculation',
-      targetId: calculationId,
-      detail: {
-        commentId: comment.id,
-        number,
-        anchor: anchor ? `${anchor.kind}:${anchor.path}` : null,
-      },
+    await this.writeLock.transaction(async (manager) => {
+      await manager.getRepository(ReviewComment).insert(comment);
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'comment.add',
+          targetType: 'calculation',
+          targetId: calculationId,
+          detail: {
+            commentId: comment.id,
+            number,
+            anchor: anchor ? `${anchor.kind}:${anchor.path}` : null,
+          },
+        },
+        manager,
+      );
     });
     const stored = await this.comments.findOneByOrFail({ id: comment.id });
     return (await this.views(calculation.kind, [stored], version.outputs))[0] as ReviewCommentView;
@@ -138,18 +143,23 @@ export class ReviewCommentsService {
         field: 'versionNumber',
       });
     }
-    await this.writeLock.run(() =>
-      this.comments.update(
-        { id: commentId },
-        { addressedInVersion: versionNumber, addressedBy: user.id, addressedAt: new Date() },
-      ),
-    );
-    await this.audit.record({
-      actorId: user.id,
-      action: 'comment.addressed',
-      targetType: 'calculation',
-      targetId: calculation.id,
-      detail: { commentId, number: versionNumber },
+    await this.writeLock.transaction(async (manager) => {
+      await manager
+        .getRepository(ReviewComment)
+        .update(
+          { id: commentId },
+          { addressedInVersion: versionNumber, addressedBy: user.id, addressedAt: new Date() },
+        );
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'comment.addressed',
+          targetType: 'calculation',
+          targetId: calculation.id,
+          detail: { commentId, number: versionNumber },
+        },
+        manager,
+      );
     });
     const stored = await this.comments.findOneByOrFail({ id: commentId });
     const latest = await this.calculations.findVersion(calculation.id, calculation.latestVersion);

@@ -2,7 +2,7 @@ import { ConflictException, Injectable, NotFoundException } from '@nestjs/common
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
 import { In, Repository } from 'typeorm';
-import { AuditService } from '../audit/audit.service';
+import { type AuditRecord, AuditService } from '../audit/audit.service';
 import { fieldIssuesException } from '../common/errors/field-issues';
 import { WriteLock } from '../persistence/write-lock';
 import { PasswordHasher } from './password-hasher.service';
@@ -29,6 +29,8 @@ export interface NewAccount {
   roles: Role[] | ((isFirstAccount: boolean) => Role[]);
   /** As the browser guessed it at registration; the default when not known. */
   numberFormat?: NumberFormat;
+  /** Records `auth.register` with the account, in its transaction (not for seeded accounts). */
+  recordRegistration?: boolean;
 }
 
 @Injectable()
@@ -98,14 +100,22 @@ export class UsersService {
       currency: DEFAULT_CURRENCY,
       tokenVersion: 0,
     });
-    return this.writeLock.run(async () => {
-      const isFirstAccount = (await this.users.count()) === 0;
+    return this.writeLock.transaction(async (manager) => {
+      const users = manager.getRepository(User);
+      const isFirstAccount = (await users.count()) === 0;
       if (onlyIfFirst && !isFirstAccount) return null;
       // Checked again under the lock: two registrations of one address at once get one account.
-      if (await this.findByEmail(email)) throw taken();
+      if (await users.findOneBy({ email })) throw taken();
       const roles = typeof input.roles === 'function' ? input.roles(isFirstAccount) : input.roles;
       user.roles = [...new Set(roles)];
-      return this.users.save(user);
+      const saved = await users.save(user);
+      if (input.recordRegistration) {
+        await this.audit.record(
+          { actorId: saved.id, action: 'auth.register', targetType: 'user', targetId: saved.id },
+          manager,
+        );
+      }
+      return saved;
     });
   }
 
@@ -137,22 +147,31 @@ export class UsersService {
     user.roles = unique;
     // Tokens carry roles: make the user sign in again so the change takes effect everywhere.
     user.tokenVersion += 1;
-    const saved = await this.writeLock.run(() => this.users.save(user));
-    await this.audit.record({
-      actorId,
-      action: 'user.roles-change',
-      targetType: 'user',
-      targetId: id,
-      detail: { before, after: unique },
+    return this.writeLock.transaction(async (manager) => {
+      const saved = await manager.getRepository(User).save(user);
+      await this.audit.record(
+        {
+          actorId,
+          action: 'user.roles-change',
+          targetType: 'user',
+          targetId: id,
+          detail: { before, after: unique },
+        },
+        manager,
+      );
+      return saved;
     });
-    return saved;
   }
 
-  async setPassword(user: User, password: string): Promise<void> {
+  /** A new password (every session ends), recorded as `record` in the same transaction. */
+  async setPassword(user: User, password: string, record: AuditRecord): Promise<void> {
     const passwordHash = await this.hasher.hash(password);
-    await this.writeLock.run(() =>
-      this.users.update({ id: user.id }, { passwordHash, tokenVersion: user.tokenVersion + 1 }),
-    );
+    await this.writeLock.transaction(async (manager) => {
+      await manager
+        .getRepository(User)
+        .update({ id: user.id }, { passwordHash, tokenVersion: user.tokenVersion + 1 });
+      await this.audit.record(record, manager);
+    });
   }
 
   /**
@@ -164,8 +183,12 @@ export class UsersService {
     await this.writeLock.run(() => this.users.update({ id }, { passwordHash }));
   }
 
-  async bumpTokenVersion(id: string): Promise<void> {
-    await this.writeLock.run(() => this.users.increment({ id }, 'tokenVersion', 1));
+  /** Ends every session of the account, recorded as `record` in the same transaction. */
+  async bumpTokenVersion(id: string, record: AuditRecord): Promise<void> {
+    await this.writeLock.transaction(async (manager) => {
+      await manager.getRepository(User).increment({ id }, 'tokenVersion', 1);
+      await this.audit.record(record, manager);
+    });
   }
 
   /** Changes the preferences sent and leaves the others; sending none is a 400 naming them. */

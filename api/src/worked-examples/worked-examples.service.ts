@@ -157,8 +157,8 @@ export class WorkedExamplesService {
     const issues = settingsIssues(content, dto);
     if (issues.length > 0) throw fieldIssuesException(issues);
     const id = randomUUID();
-    await this.writeLock.run(() =>
-      insertRow(this.examples, {
+    await this.writeLock.transaction(async (manager) => {
+      await insertRow(manager.getRepository(WorkedExample), {
         id,
         classroomId: classroom.id,
         teacherId: user.id,
@@ -180,18 +180,21 @@ export class WorkedExamplesService {
         exercise: exerciseSettings(dto.exercise),
         // To the millisecond, so examples published within one second keep their order.
         publishedAt: new Date(),
-      }),
-    );
-    await this.audit.record({
-      actorId: user.id,
-      action: 'example.publish',
-      targetType: 'worked_example',
-      targetId: id,
-      detail: {
-        classroomId: classroom.id,
-        calculationId: calculation.id,
-        versionNumber: version.number,
-      },
+      });
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'example.publish',
+          targetType: 'worked_example',
+          targetId: id,
+          detail: {
+            classroomId: classroom.id,
+            calculationId: calculation.id,
+            versionNumber: version.number,
+          },
+        },
+        manager,
+      );
     });
     return this.get(user, id);
   }
@@ -288,13 +291,18 @@ export class WorkedExamplesService {
       changes.exercise = exerciseSettings(dto.exercise);
     }
     if (Object.keys(changes).length > 0) {
-      await this.writeLock.run(() => this.examples.update({ id }, changes as never));
-      await this.audit.record({
-        actorId: user.id,
-        action: 'example.update',
-        targetType: 'worked_example',
-        targetId: id,
-        detail: { changed: Object.keys(changes) },
+      await this.writeLock.transaction(async (manager) => {
+        await manager.getRepository(WorkedExample).update({ id }, changes as never);
+        await this.audit.record(
+          {
+            actorId: user.id,
+            action: 'example.update',
+            targetType: 'worked_example',
+            targetId: id,
+            detail: { changed: Object.keys(changes) },
+          },
+          manager,
+        );
       });
     }
     return this.get(user, id);
@@ -302,12 +310,17 @@ export class WorkedExamplesService {
 
   async remove(user: AuthUser, id: string): Promise<void> {
     await this.findTaught(user, id);
-    await this.writeLock.run(() => this.examples.delete({ id }));
-    await this.audit.record({
-      actorId: user.id,
-      action: 'example.remove',
-      targetType: 'worked_example',
-      targetId: id,
+    await this.writeLock.transaction(async (manager) => {
+      await manager.getRepository(WorkedExample).delete({ id });
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'example.remove',
+          targetType: 'worked_example',
+          targetId: id,
+        },
+        manager,
+      );
     });
   }
 
@@ -396,9 +409,10 @@ export class WorkedExamplesService {
     );
     const { tolerancePercent } = example.exercise;
     const submissionId = randomUUID();
-    await this.writeLock.run(async () => {
-      const attempt = (await this.submissions.countBy({ exampleId: id, studentId: user.id })) + 1;
-      await insertRow(this.submissions, {
+    await this.writeLock.transaction(async (manager) => {
+      const submissions = manager.getRepository(ExerciseSubmission);
+      const attempt = (await submissions.countBy({ exampleId: id, studentId: user.id })) + 1;
+      await insertRow(submissions, {
         id: submissionId,
         exampleId: id,
         studentId: user.id,
@@ -411,13 +425,16 @@ export class WorkedExamplesService {
         // Set here, to the millisecond, so attempts within one second keep their order.
         submittedAt: new Date(),
       });
-    });
-    await this.audit.record({
-      actorId: user.id,
-      action: 'example.submit',
-      targetType: 'worked_example',
-      targetId: id,
-      detail: { correct: check.correctCount, of: check.answers.length },
+      await this.audit.record(
+        {
+          actorId: user.id,
+          action: 'example.submit',
+          targetType: 'worked_example',
+          targetId: id,
+          detail: { correct: check.correctCount, of: check.answers.length },
+        },
+        manager,
+      );
     });
     const saved = await this.submissions.findOneByOrFail({ id: submissionId });
     const attempts = await this.submissions.findBy({ exampleId: id, studentId: user.id });

@@ -58,7 +58,8 @@ export async function startServerProcess(
   child.stdout?.on('data', (chunk: Buffer) => (printed += chunk.toString()));
   child.stderr?.on('data', (chunk: Buffer) => (printed += chunk.toString()));
   const baseUrl = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 30_000;
+  // A cold start on a busy 2-core machine can take well over the usual second or two.
+  const deadline = Date.now() + 90_000;
   while (Date.now() < deadline) {
     if (child.exitCode !== null)
       throw new Error(`server exited with ${child.exitCode}:\n${printed}`);
