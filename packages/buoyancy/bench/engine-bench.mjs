@@ -1,7 +1,15 @@
 // Speed of the engine as shipped (dist), against goals stated as ratios and medians. Prints a
 // table; it is a measurement, not a test, and always exits 0 unless the engine throws.
 import { Bench } from 'tinybench';
-import { evaluate, fastLift, liftSweeps, sweepSphereDiameter } from '../dist/index.js';
+import {
+  driftTrack,
+  evaluate,
+  fastLift,
+  flightPath,
+  liftSweeps,
+  sweepSphereDiameter,
+  windProfile,
+} from '../dist/index.js';
 
 const fastInput = {
   volumeM3: 0.0731,
@@ -98,6 +106,32 @@ function sweepsThroughEvaluate(inputs) {
   ];
 }
 
+// A typical flight (the flight-profile example with a parachute, 1 s steps to burst near 26 km
+// and down) under a 40-level wind profile from the ground to 30 km, veering and strengthening
+// to a jet near 11 km. The path is integrated once; the drift runs against two profiles in turn.
+const driftPath = flightPath({
+  envelope: { kind: 'extensible', launchDiameterM: 1.6, burstDiameterM: 6 },
+  envelopeMassKg: 0.6,
+  payloadMassKg: 0.9,
+  gas: { gasId: 'helium' },
+  launch: { altitudeM: 120 },
+  parachute: { areaM2: 0.8 },
+});
+const driftWinds = [0, 7].map((turnDeg) =>
+  windProfile({
+    layers: Array.from({ length: 40 }, (_, index) => {
+      const heightM = index * 770;
+      return {
+        heightM,
+        directionDeg: (240 + turnDeg + index * 2) % 360,
+        speedMS: 5 + 35 * Math.exp(-(((heightM - 11000) / 4000) ** 2)),
+        temperatureK: 288 - Math.min(heightM, 11000) * 0.0065,
+      };
+    }),
+  }),
+);
+const driftPoints = driftPath.ascent.length + driftPath.descent.length;
+
 // Two inputs alternated, so neither side can be folded into a constant.
 const fastInputs = [fastInput, { ...fastInput, volumeM3: 0.0732 }];
 const volumes = [0.0731, 0.0732];
@@ -132,6 +166,15 @@ bench
   .add('flight profile to burst at 1 s steps (with steps and series)', () => {
     sink += evaluate('flight-profile', flightInputs).outputs.ascentTime.value;
   })
+  .add('drift of a typical flight through a 40-level wind profile', () => {
+    turn ^= 1;
+    sink += driftTrack({
+      launch: { latitudeDeg: 52.2, longitudeDeg: 0.12, altitudeM: 120 },
+      ascent: driftPath.ascent,
+      descent: driftPath.descent,
+      wind: driftWinds[turn],
+    }).groundDistanceM;
+  })
   .add('lift check through evaluate (validation and derivation)', () => {
     sink += evaluate('lift-check', {
       envelope: { shape: 'sphere', diameterM: 0.52 },
@@ -159,6 +202,8 @@ const full = median('lift check through evaluate (validation and derivation)');
 const slowSweeps = median('lift-check chart sweeps through evaluate (3 × 61 points)');
 const fastSweeps = median('lift-check chart sweeps on the fast path (liftSweeps)');
 
+const drift = median('drift of a typical flight through a 40-level wind profile');
+
 const rows = [
   [
     'lift check without steps / inlined formula',
@@ -175,6 +220,12 @@ const rows = [
     true,
   ],
   ['flight profile to burst at 1 s steps, median', ms(flight), '< 10 ms', flight < 10],
+  [
+    `drift of a typical flight (${driftPoints} path points, 40 levels), median`,
+    ms(drift),
+    '< 2.5 ms (200 runs in 500 ms)',
+    drift < 2.5,
+  ],
   [
     'lift check through evaluate / without steps',
     `${(full / fast).toFixed(1)} x`,

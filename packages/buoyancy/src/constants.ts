@@ -37,3 +37,10 @@ export const NORMAL_PRESSURE_PA = 101325;
 
 /** Kelvin at 0 °C, exact by the definition of the Celsius scale. */
 export const ZERO_CELSIUS_K = 273.15;
+
+/**
+ * WGS 84 ellipsoid, NIMA TR8350.2 (3rd ed., 2000), Table 3.1: semi-major axis [m] and inverse
+ * flattening (defining parameters).
+ */
+export const WGS84_SEMI_MAJOR_AXIS_M = 6378137;
+export const WGS84_INVERSE_FLATTENING = 298.257223563;

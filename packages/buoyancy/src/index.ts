@@ -182,3 +182,66 @@ export {
   withNumberAtPath,
 } from './teach/input-paths.js';
 export type { InputRangeLimit } from './teach/input-paths.js';
+export {
+  prepareWindProfile,
+  windAboveProfileNote,
+  windAt,
+  windBelowProfileNote,
+  windComponentsMS,
+  windDirectionAndSpeed,
+  windProfile,
+  windProfileAirAt,
+} from './wind/wind-profile.js';
+export type { AirSample, ProfilePosition, WindProfile, WindSample } from './wind/wind-profile.js';
+export {
+  WIND_DEW_POINT_RANGE_K,
+  WIND_HEIGHT_RANGE_M,
+  WIND_LAYER_COUNT_RANGE,
+  WIND_PRESSURE_RANGE_PA,
+  WIND_SPEED_RANGE_MS,
+  WIND_TEMPERATURE_RANGE_K,
+  windLayerSchema,
+  windProfileSchema,
+} from './wind/wind-profile-schema.js';
+export type {
+  HeightSource,
+  WindLayerInput,
+  WindLayerValues,
+  WindProfileInput,
+  WindProfileValues,
+} from './wind/wind-profile-schema.js';
+export { readWindProfile } from './wind/read-wind-profile.js';
+export type {
+  BadWindLine,
+  WindColumn,
+  WindColumnMapping,
+  WindProfileReading,
+} from './wind/read-wind-profile.js';
+export {
+  WIND_HEIGHT_UNITS,
+  WIND_PRESSURE_UNITS,
+  WIND_SPEED_UNITS,
+  WIND_TEMPERATURE_UNITS,
+} from './wind/wind-units.js';
+export type {
+  WindHeightUnit,
+  WindPressureUnit,
+  WindSpeedUnit,
+  WindTemperatureUnit,
+} from './wind/wind-units.js';
+export {
+  hypsometricHeightM,
+  layerMeanTemperatureK,
+  virtualTemperatureK,
+} from './wind/hypsometric.js';
+export { flightPath } from './flight/flight-path.js';
+export type { FlightPath, FlightPathPoint } from './flight/flight-path.js';
+export {
+  DRIFT_MAX_STEP_RANGE_S,
+  driftTrack,
+  LAUNCH_ALTITUDE_RANGE_M,
+  LAUNCH_LATITUDE_RANGE_DEG,
+} from './flight/drift.js';
+export type { DriftInput, DriftPoint, DriftResult, LaunchSite } from './flight/drift.js';
+export { TRACK_LATITUDE_LIMIT_DEG, wgs84Inverse, wgs84RadiiOfCurvature } from './flight/geodesy.js';
+export type { GeodesicInverse } from './flight/geodesy.js';

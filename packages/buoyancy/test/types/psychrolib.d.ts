@@ -9,6 +9,7 @@ declare module 'psychrolib' {
       relativeHumidity: number,
       pressurePa: number,
     ): number;
+    GetHumRatioFromTDewPoint(dewPointC: number, pressurePa: number): number;
     GetMoistAirDensity(temperatureC: number, humidityRatio: number, pressurePa: number): number;
   }
   const psychrolib: Psychrolib;
