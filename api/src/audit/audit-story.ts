@@ -1,11 +1,8 @@
+import type { AuditChange } from '@loftwright/contract';
 import type { AuditEntry } from './audit-entry.entity';
 
 /** A field that changed, as a person reads it: "Title: Old → New". */
-export interface AuditChange {
-  label: string;
-  from: string | null;
-  to: string | null;
-}
+export type { AuditChange } from '@loftwright/contract';
 
 /** Names of the people and things an entry mentions, looked up once for a page of entries. */
 export interface AuditNames {

@@ -1,25 +1,15 @@
+import type { AuditRow } from '@loftwright/contract';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { DataSource, type EntityManager, In, Repository } from 'typeorm';
 import { insertRow } from '../persistence/insert-row';
 import { WriteLock } from '../persistence/write-lock';
 import { AuditEntry } from './audit-entry.entity';
-import { type AuditChange, type AuditNames, auditStory } from './audit-story';
+import { type AuditNames, auditStory } from './audit-story';
 import type { ListAuditDto } from './dto/list-audit.dto';
 
 /** An audit entry as people read it: who by name, what in words, changes as old → new. */
-export interface AuditView {
-  id: number;
-  createdAt: string;
-  action: string;
-  actor: { id: string; displayName: string } | null;
-  summary: string;
-  changes: AuditChange[];
-  targetType: string;
-  targetId: string | null;
-  /** The recorded detail, for programs; the web shows `summary` and `changes`. */
-  detail: Record<string, unknown> | null;
-}
+export type AuditView = AuditRow;
 
 /** Tables whose rows an entry may name, and the column that names them. */
 const TITLED_TABLES = ['calculation', 'classroom', 'gas_plan', 'worked_example'] as const;

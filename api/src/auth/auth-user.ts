@@ -8,5 +8,5 @@ export interface AuthUser {
   readonly roles: readonly Role[];
 }
 
-export const hasRole = (user: AuthUser, ...roles: Role[]): boolean =>
+export const hasRole = (user: Pick<AuthUser, 'roles'>, ...roles: readonly Role[]): boolean =>
   roles.some((role) => user.roles.includes(role));

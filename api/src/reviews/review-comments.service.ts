@@ -1,3 +1,4 @@
+import type { ReviewComment as ReviewCommentShape } from '@loftwright/contract';
 import {
   BadRequestException,
   ConflictException,
@@ -19,19 +20,7 @@ import type { AddReviewCommentDto } from './dto/review-comment.dto';
 import { ReviewComment } from './review-comment.entity';
 
 /** A comment as the calculation page shows it: who, when, on what (by label), open or addressed. */
-export interface ReviewCommentView {
-  id: string;
-  versionNumber: number;
-  author: { id: string; displayName: string } | null;
-  anchor: { kind: 'input' | 'result'; path: string; label: string } | null;
-  body: string;
-  createdAt: string;
-  addressed: {
-    versionNumber: number;
-    by: { id: string; displayName: string } | null;
-    at: string;
-  } | null;
-}
+export type ReviewCommentView = ReviewCommentShape;
 
 @Injectable()
 export class ReviewCommentsService {

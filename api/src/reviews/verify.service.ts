@@ -1,4 +1,4 @@
-import type { Verification } from '@loftwright/contract';
+import type { OutputComparison, Verification } from '@loftwright/contract';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { ENGINE_VERSION, evaluate, type OutputQuantity, sameResult } from '@loftwright/buoyancy';
@@ -10,16 +10,7 @@ import { Calculation } from '../calculations/calculation.entity';
 import { User } from '../users/user.entity';
 import { Review } from './review.entity';
 
-export interface OutputComparison {
-  name: string;
-  /** The result's label, as the sheet prints it. */
-  label: string;
-  unit: string;
-  approved: number | null;
-  recomputed: number | null;
-  /** (recomputed − approved) / |approved|, where both exist and approved is not zero. */
-  relativeChange: number | null;
-}
+export type { OutputComparison } from '@loftwright/contract';
 
 @Injectable()
 export class VerifyService {

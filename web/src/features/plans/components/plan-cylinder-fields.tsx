@@ -1,8 +1,8 @@
 import { Form, Select, Space, Switch, Typography } from 'antd';
 import type { UnitSystem } from '@loftwright/buoyancy';
-import { QuantityInput } from '@/components/quantity/quantity-input';
 import type { SavePlanBody } from '../api/plans-api';
 import type { PlanDraftEditor } from '../hooks/use-plan-draft';
+import { PlanQuantityField } from './plan-quantity-field';
 
 const DEFAULT_CYLINDER: NonNullable<SavePlanBody['cylinder']> = {
   gasId: 'helium',
@@ -19,7 +19,7 @@ export function PlanCylinderFields({
   editor: PlanDraftEditor;
   unitSystem: UnitSystem;
 }) {
-  const { draft, set, readAs } = editor;
+  const { draft, set } = editor;
   return (
     <>
       <Space align="center" style={{ margin: '8px 0' }}>
@@ -49,38 +49,30 @@ export function PlanCylinderFields({
               }
             />
           </Form.Item>
-          <Form.Item label="Water volume of one cylinder">
-            <QuantityInput
-              label="Cylinder water volume"
-              dimension="volume"
-              value={draft.cylinder.waterVolumeM3}
-              onChange={(waterVolumeM3) =>
-                readAs(
-                  'waterVolumeM3',
-                  waterVolumeM3,
-                  (waterVolumeM3) =>
-                    draft.cylinder && set({ cylinder: { ...draft.cylinder, waterVolumeM3 } }),
-                )
-              }
-              unitSystem={unitSystem}
-            />
-          </Form.Item>
-          <Form.Item label="Fill pressure (gauge)">
-            <QuantityInput
-              label="Cylinder fill pressure"
-              dimension="pressureDifference"
-              value={draft.cylinder.fillPressurePa}
-              onChange={(fillPressurePa) =>
-                readAs(
-                  'fillPressurePa',
-                  fillPressurePa,
-                  (fillPressurePa) =>
-                    draft.cylinder && set({ cylinder: { ...draft.cylinder, fillPressurePa } }),
-                )
-              }
-              unitSystem={unitSystem}
-            />
-          </Form.Item>
+          <PlanQuantityField
+            editor={editor}
+            field="waterVolumeM3"
+            caption="Water volume of one cylinder"
+            label="Cylinder water volume"
+            dimension="volume"
+            value={draft.cylinder.waterVolumeM3}
+            apply={(waterVolumeM3) =>
+              draft.cylinder && set({ cylinder: { ...draft.cylinder, waterVolumeM3 } })
+            }
+            unitSystem={unitSystem}
+          />
+          <PlanQuantityField
+            editor={editor}
+            field="fillPressurePa"
+            caption="Fill pressure (gauge)"
+            label="Cylinder fill pressure"
+            dimension="pressureDifference"
+            value={draft.cylinder.fillPressurePa}
+            apply={(fillPressurePa) =>
+              draft.cylinder && set({ cylinder: { ...draft.cylinder, fillPressurePa } })
+            }
+            unitSystem={unitSystem}
+          />
         </Space>
       ) : null}
     </>

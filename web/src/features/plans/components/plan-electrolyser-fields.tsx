@@ -1,9 +1,9 @@
 import { Form, Space, Switch, Typography } from 'antd';
 import type { UnitSystem } from '@loftwright/buoyancy';
 import { CountInput } from '@/components/quantity/count-input';
-import { QuantityInput } from '@/components/quantity/quantity-input';
 import type { SavePlanBody } from '../api/plans-api';
 import type { PlanDraftEditor } from '../hooks/use-plan-draft';
+import { PlanQuantityField } from './plan-quantity-field';
 
 const DEFAULT_ELECTROLYSER: NonNullable<SavePlanBody['electrolyser']> = {
   currentA: 30,
@@ -25,7 +25,7 @@ export function PlanElectrolyserFields({
   editor: PlanDraftEditor;
   unitSystem: UnitSystem;
 }) {
-  const { draft, set, readAs } = editor;
+  const { draft, set } = editor;
   return (
     <>
       <Space align="center" style={{ marginBottom: 8 }}>
@@ -41,23 +41,18 @@ export function PlanElectrolyserFields({
       </Space>
       {draft.electrolyser ? (
         <Space wrap align="start">
-          <Form.Item label="Current">
-            <QuantityInput
-              label="Electrolyser current"
-              dimension="current"
-              value={draft.electrolyser.currentA}
-              onChange={(currentA) =>
-                readAs(
-                  'currentA',
-                  currentA,
-                  (currentA) =>
-                    draft.electrolyser &&
-                    set({ electrolyser: { ...draft.electrolyser, currentA } }),
-                )
-              }
-              unitSystem={unitSystem}
-            />
-          </Form.Item>
+          <PlanQuantityField
+            editor={editor}
+            field="currentA"
+            caption="Current"
+            label="Electrolyser current"
+            dimension="current"
+            value={draft.electrolyser.currentA}
+            apply={(currentA) =>
+              draft.electrolyser && set({ electrolyser: { ...draft.electrolyser, currentA } })
+            }
+            unitSystem={unitSystem}
+          />
           <Form.Item label="Cells in series">
             <CountInput
               label="Cells in series"
@@ -71,28 +66,24 @@ export function PlanElectrolyserFields({
               }
             />
           </Form.Item>
-          <Form.Item label="Voltage per cell">
-            <QuantityInput
-              label="Voltage per cell"
-              dimension="voltage"
-              value={cellVoltageOf(draft.electrolyser.voltage)}
-              onChange={(cellVoltageV) =>
-                readAs(
-                  'cellVoltageV',
-                  cellVoltageV,
-                  (cellVoltageV) =>
-                    draft.electrolyser &&
-                    set({
-                      electrolyser: {
-                        ...draft.electrolyser,
-                        voltage: { kind: 'cell', cellVoltageV },
-                      },
-                    }),
-                )
-              }
-              unitSystem={unitSystem}
-            />
-          </Form.Item>
+          <PlanQuantityField
+            editor={editor}
+            field="cellVoltageV"
+            caption="Voltage per cell"
+            label="Voltage per cell"
+            dimension="voltage"
+            value={cellVoltageOf(draft.electrolyser.voltage)}
+            apply={(cellVoltageV) =>
+              draft.electrolyser &&
+              set({
+                electrolyser: {
+                  ...draft.electrolyser,
+                  voltage: { kind: 'cell', cellVoltageV },
+                },
+              })
+            }
+            unitSystem={unitSystem}
+          />
         </Space>
       ) : null}
     </>

@@ -1,7 +1,7 @@
-import { Form, Space, Typography } from 'antd';
+import { Space, Typography } from 'antd';
 import type { UnitSystem } from '@loftwright/buoyancy';
-import { QuantityInput } from '@/components/quantity/quantity-input';
 import type { PlanDraftEditor } from '../hooks/use-plan-draft';
+import { PlanQuantityField } from './plan-quantity-field';
 
 /** The gas's temperature and pressure at filling. */
 export function PlanFillSection({
@@ -11,37 +11,31 @@ export function PlanFillSection({
   editor: PlanDraftEditor;
   unitSystem: UnitSystem;
 }) {
-  const { draft, set, readAs } = editor;
+  const { draft, set } = editor;
   return (
     <>
       <Typography.Title level={5}>Gas at filling</Typography.Title>
       <Space wrap align="start">
-        <Form.Item label="Gas temperature">
-          <QuantityInput
-            label="Gas temperature at filling"
-            dimension="temperature"
-            value={draft.fill.temperatureK}
-            onChange={(temperatureK) =>
-              readAs('temperatureK', temperatureK, (temperatureK) =>
-                set({ fill: { ...draft.fill, temperatureK } }),
-              )
-            }
-            unitSystem={unitSystem}
-          />
-        </Form.Item>
-        <Form.Item label="Gas pressure (absolute)">
-          <QuantityInput
-            label="Gas pressure at filling"
-            dimension="pressure"
-            value={draft.fill.pressurePa}
-            onChange={(pressurePa) =>
-              readAs('pressurePa', pressurePa, (pressurePa) =>
-                set({ fill: { ...draft.fill, pressurePa } }),
-              )
-            }
-            unitSystem={unitSystem}
-          />
-        </Form.Item>
+        <PlanQuantityField
+          editor={editor}
+          field="temperatureK"
+          caption="Gas temperature"
+          label="Gas temperature at filling"
+          dimension="temperature"
+          value={draft.fill.temperatureK}
+          apply={(temperatureK) => set({ fill: { ...draft.fill, temperatureK } })}
+          unitSystem={unitSystem}
+        />
+        <PlanQuantityField
+          editor={editor}
+          field="pressurePa"
+          caption="Gas pressure (absolute)"
+          label="Gas pressure at filling"
+          dimension="pressure"
+          value={draft.fill.pressurePa}
+          apply={(pressurePa) => set({ fill: { ...draft.fill, pressurePa } })}
+          unitSystem={unitSystem}
+        />
       </Space>
     </>
   );

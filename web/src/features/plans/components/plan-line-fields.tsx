@@ -1,9 +1,9 @@
 import { Form, Input, Select, Space } from 'antd';
 import type { UnitSystem } from '@loftwright/buoyancy';
 import { CountInput } from '@/components/quantity/count-input';
-import { QuantityInput } from '@/components/quantity/quantity-input';
 import type { CalculationListItem, SavePlanBody } from '../api/plans-api';
 import type { PlanDraftEditor } from '../hooks/use-plan-draft';
+import { PlanQuantityField } from './plan-quantity-field';
 
 const ENTERED = 'entered';
 const SPHERE = 'sphere';
@@ -35,7 +35,7 @@ export function PlanLineFields({
   optionsLoading: boolean;
   unitSystem: UnitSystem;
 }) {
-  const { setLine, readAs } = editor;
+  const { setLine } = editor;
   const envelope = `Envelope ${index + 1}`;
   return (
     <Space wrap align="start" role="group" aria-label={envelope}>
@@ -60,34 +60,28 @@ export function PlanLineFields({
         />
       </Form.Item>
       {line.diameterM !== undefined ? (
-        <Form.Item label="Diameter">
-          <QuantityInput
-            label={`${envelope} diameter`}
-            dimension="length"
-            value={line.diameterM}
-            onChange={(diameterM) =>
-              readAs(`lines.${index}.diameterM`, diameterM, (value) =>
-                setLine(index, { diameterM: value }),
-              )
-            }
-            unitSystem={unitSystem}
-          />
-        </Form.Item>
+        <PlanQuantityField
+          editor={editor}
+          field={`lines.${index}.diameterM`}
+          caption="Diameter"
+          label={`${envelope} diameter`}
+          dimension="length"
+          value={line.diameterM}
+          apply={(value) => setLine(index, { diameterM: value })}
+          unitSystem={unitSystem}
+        />
       ) : null}
       {line.calculationId || line.diameterM !== undefined ? null : (
-        <Form.Item label="Gas per envelope">
-          <QuantityInput
-            label={`${envelope} gas per envelope`}
-            dimension="volume"
-            value={line.volumeM3}
-            onChange={(volumeM3) =>
-              readAs(`lines.${index}.volumeM3`, volumeM3, (value) =>
-                setLine(index, { volumeM3: value }),
-              )
-            }
-            unitSystem={unitSystem}
-          />
-        </Form.Item>
+        <PlanQuantityField
+          editor={editor}
+          field={`lines.${index}.volumeM3`}
+          caption="Gas per envelope"
+          label={`${envelope} gas per envelope`}
+          dimension="volume"
+          value={line.volumeM3}
+          apply={(value) => setLine(index, { volumeM3: value })}
+          unitSystem={unitSystem}
+        />
       )}
       <Form.Item label="How many">
         <CountInput
