@@ -9,8 +9,11 @@ import { ClassroomsModule } from './classrooms/classrooms.module';
 import { EnvironmentVariables, validateEnvironment } from './config/env.validation';
 import { PersistenceModule } from './persistence/persistence.module';
 import { buildDataSourceOptions } from './database/database.options';
+import { EnvelopesModule } from './envelopes/envelopes.module';
 import { EvaluateModule } from './evaluate/evaluate.module';
+import { FillCardModule } from './fill-card/fill-card.module';
 import { FillLogsModule } from './fill-logs/fill-logs.module';
+import { FlightExportsModule } from './flight-exports/flight-exports.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { PlansModule } from './plans/plans.module';
@@ -36,10 +39,13 @@ import { WorkedExamplesModule } from './worked-examples/worked-examples.module';
     ReviewsModule,
     AttachmentsModule,
     FillLogsModule,
+    FillCardModule,
+    EnvelopesModule,
     PlansModule,
     ClassroomsModule,
     WorkedExamplesModule,
     EvaluateModule,
+    FlightExportsModule,
     HealthModule,
     SeedModule,
   ],

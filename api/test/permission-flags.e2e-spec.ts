@@ -98,6 +98,8 @@ describe('permissions sent with each resource', () => {
       joinClasses: false,
       seeClasses: false,
       administer: false,
+      seeEnvelopes: true,
+      manageEnvelopes: true,
     });
     expect(await me(reviewer)).toMatchObject({ createCalculations: false, review: true });
     expect(await me(admin)).toMatchObject({

@@ -35,6 +35,18 @@ export class Calculation {
   @Column('boolean', { name: 'ever_submitted', default: false })
   everSubmitted: boolean;
 
+  /** The calculation this one was continued from (the design chain), if any. */
+  @Column('varchar', { name: 'source_calculation_id', length: 36, nullable: true })
+  sourceCalculationId: string | null;
+
+  /** The source version the inputs were last taken from. */
+  @Column('integer', { name: 'source_version_number', nullable: true })
+  sourceVersionNumber: number | null;
+
+  /** Input paths that still hold the kind's example value, to be filled by the person. */
+  @Column('simple-json', { name: 'source_needs', nullable: true })
+  sourceNeeds: string[] | null;
+
   @Column('datetime', { name: 'archived_at', nullable: true })
   archivedAt: Date | null;
 

@@ -27,9 +27,11 @@ import { sendTable } from '../common/export/table-export';
 import { intParam } from '../common/pipes/int-param.pipe';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
 import type { CalculationFile } from './calculation-file';
+import { CalculationChainService } from './calculation-chain.service';
 import { CalculationTransferService } from './calculation-transfer.service';
 import { CalculationsService } from './calculations.service';
 import { ImportCalculationDto } from './dto/import-calculation.dto';
+import { ContinueCalculationDto } from './dto/continue-calculation.dto';
 import { CreateCalculationDto } from './dto/create-calculation.dto';
 import { ExportCalculationsDto, ListCalculationsDto } from './dto/list-calculations.dto';
 import { SaveVersionDto } from './dto/save-version.dto';
@@ -42,6 +44,7 @@ export class CalculationsController {
   constructor(
     private readonly calculationsService: CalculationsService,
     private readonly transfer: CalculationTransferService,
+    private readonly chain: CalculationChainService,
   ) {}
 
   /** A Loftwright calculation file (docs/file-format.md) becomes a new calculation of the caller's. */
@@ -160,6 +163,17 @@ export class CalculationsController {
     @Param('n', intParam('n')) n: number,
   ): Promise<VersionDetail> {
     return this.calculationsService.version(user, id, n);
+  }
+
+  /** A new calculation of the next kind in the design chain, made from this version (201). */
+  @Post(':id/versions/:n/continue')
+  continueFrom(
+    @CurrentUser() user: AuthUser,
+    @Param('id', uuidParam('id')) id: string,
+    @Param('n', intParam('n')) n: number,
+    @Body() body: ContinueCalculationDto,
+  ): Promise<CalculationDetail> {
+    return this.chain.continueFrom(user, id, n, body);
   }
 
   @Get(':id/versions/:a/diff/:b')

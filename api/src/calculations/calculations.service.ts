@@ -22,6 +22,7 @@ import { AUTHOR_ROLES, TEAM_ROLES } from '../users/roles';
 import { UsersService } from '../users/users.service';
 import { calculationPermissions, canArchive, canEdit, canRead } from './calculation-access';
 import { CalculationVersion } from './calculation-version.entity';
+import { readLinks, sourceChangesOnSave } from './calculation-links';
 import { calculationSummary, versionDetail, versionSummary } from './calculation-views';
 import { Calculation } from './calculation.entity';
 import type { CreateCalculationDto } from './dto/create-calculation.dto';
@@ -183,6 +184,7 @@ export class CalculationsService {
       versions: versions.map((version) => versionSummary(version, names)),
       latest: latest ? versionDetail(latest, names) : null,
       permissions: calculationPermissions(user, calculation, latest),
+      ...(await readLinks(this.calculations, user, calculation)),
     };
   }
 
@@ -216,6 +218,13 @@ export class CalculationsService {
       });
     }
     const content = computeVersionContent(calculation.kind, dto.inputs);
+    const linkChanges = await sourceChangesOnSave(this.calculations, user, calculation, {
+      sourceVersion: dto.sourceVersion,
+      previousInputs: (
+        await this.versions.findOneBy({ calculationId: id, number: dto.baseVersion })
+      )?.inputs,
+      savedInputs: content.inputs,
+    });
     const number = dto.baseVersion + 1;
     const version = {
       id: randomUUID(),
@@ -236,7 +245,7 @@ export class CalculationsService {
           .getRepository(Calculation)
           .update(
             { id, latestVersion: dto.baseVersion },
-            { latestVersion: number, latestStatus: 'draft' },
+            { latestVersion: number, latestStatus: 'draft', ...linkChanges },
           );
         if (moved.affected !== 1) return false;
         await insertRow(manager.getRepository(CalculationVersion), version);
@@ -246,7 +255,10 @@ export class CalculationsService {
             action: 'calculation.save',
             targetType: 'calculation',
             targetId: id,
-            detail: { version: number },
+            detail: {
+              version: number,
+              ...(dto.sourceVersion === undefined ? {} : { sourceVersion: dto.sourceVersion }),
+            },
           },
           manager,
         );

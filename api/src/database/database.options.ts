@@ -30,6 +30,9 @@ import { FillLogInstrument1764741600000 } from './migrations/1764741600000-fill-
 import { ReviewCalculationTitle1764745200000 } from './migrations/1764745200000-review-calculation-title';
 import { PendingRegistration1764748800000 } from './migrations/1764748800000-pending-registration';
 import { ReviewComments1764752400000 } from './migrations/1764752400000-review-comments';
+import { CalculationLinks1764759600000 } from './migrations/1764759600000-calculation-links';
+import { EnvelopeLibrary1764756000000 } from './migrations/1764756000000-envelope-library';
+import { Envelope } from '../envelopes/envelope.entity';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -51,6 +54,7 @@ export const ENTITIES = [
   ClassroomMember,
   WorkedExample,
   ExerciseSubmission,
+  Envelope,
 ];
 export const MIGRATIONS = [
   InitSchema1764633600000,
@@ -65,6 +69,8 @@ export const MIGRATIONS = [
   ReviewCalculationTitle1764745200000,
   PendingRegistration1764748800000,
   ReviewComments1764752400000,
+  EnvelopeLibrary1764756000000,
+  CalculationLinks1764759600000,
 ];
 
 /**

@@ -12,6 +12,7 @@ export function fillLogView(log: FillLog, author: UserRef | null): FillLogView {
     filledAt: log.filledAt,
     place: log.place,
     envelopeLabel: log.envelopeLabel,
+    envelopeId: log.envelopeId ?? null,
     gasSource: log.gasSource,
     ambient: log.ambient,
     readings: log.readings,

@@ -31,6 +31,10 @@ export class FillLog {
   @Column('varchar', { name: 'envelope_label', default: '' })
   envelopeLabel: string;
 
+  /** The library envelope that was filled; null when the log names none. */
+  @Column('varchar', { name: 'envelope_id', length: 36, nullable: true })
+  envelopeId: string | null;
+
   @Column('varchar', { name: 'gas_source' })
   gasSource: GasSource;
 

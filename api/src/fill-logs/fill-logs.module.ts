@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { AttachmentsModule } from '../attachments/attachments.module';
 import { CalculationsModule } from '../calculations/calculations.module';
+import { EnvelopesModule } from '../envelopes/envelopes.module';
 import { UsersModule } from '../users/users.module';
 import { FillLog } from './fill-log.entity';
 import { FillLogsController } from './fill-logs.controller';
@@ -13,6 +14,7 @@ import { FillLogsService } from './fill-logs.service';
     CalculationsModule,
     AttachmentsModule,
     UsersModule,
+    EnvelopesModule,
   ],
   controllers: [FillLogsController],
   providers: [FillLogsService],

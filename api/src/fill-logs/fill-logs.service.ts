@@ -16,6 +16,7 @@ import { type AuthUser, hasRole } from '../auth/auth-user';
 import { canEdit } from '../calculations/calculation-access';
 import type { Calculation } from '../calculations/calculation.entity';
 import { CalculationsService } from '../calculations/calculations.service';
+import { EnvelopesService } from '../envelopes/envelopes.service';
 import { insertRow } from '../persistence/insert-row';
 import { WriteLock } from '../persistence/write-lock';
 import { UsersService } from '../users/users.service';
@@ -32,6 +33,7 @@ export class FillLogsService {
     private readonly attachments: AttachmentsService,
     private readonly audit: AuditService,
     private readonly writeLock: WriteLock,
+    private readonly envelopes: EnvelopesService,
   ) {}
 
   private async views(rows: FillLog[]): Promise<FillLogView[]> {
@@ -82,6 +84,7 @@ export class FillLogsService {
   ): Promise<FillLogView> {
     const calculation = await this.calculations.findReadable(user, calculationId);
     this.requireEditor(user, calculation);
+    if (dto.envelopeId) await this.envelopes.requireExists(dto.envelopeId);
     const reduced = await this.reduce(calculation, versionNumber, dto);
     const id = randomUUID();
     await this.writeLock.transaction(async (manager) => {
@@ -93,6 +96,7 @@ export class FillLogsService {
         filledAt: dto.filledAt,
         place: dto.place ?? '',
         envelopeLabel: dto.envelopeLabel ?? '',
+        envelopeId: dto.envelopeId ?? null,
         gasSource: dto.gasSource,
         ambient: { ...dto.ambient },
         readings: dto.readings,
@@ -142,10 +146,13 @@ export class FillLogsService {
   async update(user: AuthUser, id: string, dto: UpdateFillLogDto): Promise<FillLogView> {
     const { log, calculation } = await this.findReadable(user, id);
     this.requireEditor(user, calculation);
+    if (dto.envelopeId) await this.envelopes.requireExists(dto.envelopeId);
     const next = {
       filledAt: dto.filledAt ?? log.filledAt,
       place: dto.place ?? log.place,
       envelopeLabel: dto.envelopeLabel ?? log.envelopeLabel,
+      // undefined keeps the link; null removes it.
+      envelopeId: dto.envelopeId === undefined ? log.envelopeId : dto.envelopeId,
       gasSource: dto.gasSource ?? log.gasSource,
       ambient: dto.ambient ? { ...dto.ambient } : log.ambient,
       readings: dto.readings ?? log.readings,

@@ -70,7 +70,7 @@ export class PlansService {
             : undefined;
           if (!volume || volume.unit !== 'm³') {
             throw new UnprocessableEntityException({
-              message: `lines.${index}: "${calculation.title}" gives no envelope volume (a lift check, sizing or geometry does).`,
+              message: `lines.${index}: "${calculation.title}" gives no envelope volume (a lift check, sizing, geometry or flight profile does).`,
               field: `lines.${index}.calculationId`,
             });
           }

@@ -1,6 +1,6 @@
 import type { AccountPermissions } from '@loftwright/contract';
 import { hasRole } from '../auth/auth-user';
-import { AUTHOR_ROLES, type Role } from './roles';
+import { AUTHOR_ROLES, ENVELOPE_MANAGER_ROLES, type Role, TEAM_ROLES } from './roles';
 
 /**
  * What roles allow across the product. The services enforce the same rules on every request;
@@ -16,5 +16,7 @@ export function accountPermissions(roles: readonly Role[]): AccountPermissions {
     joinClasses: holds('student'),
     seeClasses: holds('teacher', 'student', 'admin'),
     administer: holds('admin'),
+    seeEnvelopes: holds(...TEAM_ROLES),
+    manageEnvelopes: holds(...ENVELOPE_MANAGER_ROLES),
   };
 }

@@ -6,6 +6,7 @@ import {
   evaluate,
   fastLift,
   flightPath,
+  landingArea,
   liftSweeps,
   sweepSphereDiameter,
   windProfile,
@@ -132,6 +133,34 @@ const driftWinds = [0, 7].map((turnDeg) =>
 );
 const driftPoints = driftPath.ascent.length + driftPath.descent.length;
 
+// The landing area of the same flight under the first of those profiles (its temperatures make the
+// air too): 200 runs with the default spreads, seed 1. Each sample takes a few hundred
+// milliseconds, so it has a bench of its own with few samples.
+const landingInput = {
+  envelope: { kind: 'extensible', launchDiameterM: 1.6, burstDiameterM: 6 },
+  envelopeMassKg: 0.6,
+  payloadMassKg: 0.9,
+  gas: { gasId: 'helium' },
+  launch: { altitudeM: 120, latitudeDeg: 52.2, longitudeDeg: 0.12 },
+  parachute: { areaM2: 0.8 },
+  wind: {
+    layers: Array.from({ length: 40 }, (_, index) => {
+      const heightM = index * 770;
+      return {
+        heightM,
+        directionDeg: (240 + index * 2) % 360,
+        speedMS: 5 + 35 * Math.exp(-(((heightM - 11000) / 4000) ** 2)),
+        temperatureK: 288 - Math.min(heightM, 11000) * 0.0065,
+      };
+    }),
+  },
+  landingArea: { runs: 200, seed: 1 },
+};
+const landingBench = new Bench({ time: 2000, iterations: 9, warmupTime: 0, warmupIterations: 1 });
+landingBench.add('landing area: 200 runs, 40-level profile', () => {
+  sink += landingArea(landingInput).regions[1].areaM2;
+});
+
 // Two inputs alternated, so neither side can be folded into a constant.
 const fastInputs = [fastInput, { ...fastInput, volumeM3: 0.0732 }];
 const volumes = [0.0731, 0.0732];
@@ -186,9 +215,10 @@ bench
   });
 
 await bench.run();
+await landingBench.run();
 
 const median = (name) => {
-  const task = bench.tasks.find((candidate) => candidate.name === name);
+  const task = [...bench.tasks, ...landingBench.tasks].find((candidate) => candidate.name === name);
   const latency = task?.result?.latency;
   if (!latency) throw new Error(`no result for ${name}`);
   return latency.p50;
@@ -203,6 +233,7 @@ const slowSweeps = median('lift-check chart sweeps through evaluate (3 × 61 poi
 const fastSweeps = median('lift-check chart sweeps on the fast path (liftSweeps)');
 
 const drift = median('drift of a typical flight through a 40-level wind profile');
+const landing = median('landing area: 200 runs, 40-level profile');
 
 const rows = [
   [
@@ -226,6 +257,7 @@ const rows = [
     '< 2.5 ms (200 runs in 500 ms)',
     drift < 2.5,
   ],
+  ['landing area, 200 runs through 40 levels, median', ms(landing), '< 500 ms', landing < 500],
   [
     'lift check through evaluate / without steps',
     `${(full / fast).toFixed(1)} x`,
@@ -236,7 +268,7 @@ const rows = [
 console.log(
   `\n@loftwright/buoyancy benchmark (Node ${process.version}, medians of tinybench samples)`,
 );
-console.table(bench.table());
+console.table([...bench.table(), ...landingBench.table()]);
 for (const [what, measured, goal, met] of rows) {
   console.log(`${met ? 'meets ' : 'MISSES'}  ${what}: ${measured} (goal ${goal})`);
 }

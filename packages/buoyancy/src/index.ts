@@ -47,6 +47,14 @@ export type { CalculationKind } from './kinds/kind.js';
 export { Derivation } from './derivation.js';
 export { quantity } from './schema/quantity-schema.js';
 export type { KindCapabilities, KindChart } from './kinds/kind.js';
+export {
+  applyLibraryEnvelope,
+  LIBRARY_ENVELOPE_MAPPINGS,
+  libraryEnvelopeMapping,
+} from './library/apply-library-envelope.js';
+export type { LibraryEnvelopeMapping } from './library/apply-library-envelope.js';
+export { LIBRARY_ENVELOPE_KINDS, LIBRARY_ENVELOPE_RANGES } from './library/library-envelope.js';
+export type { LibraryEnvelope, LibraryEnvelopeKind } from './library/library-envelope.js';
 export { CHECK_THIS, plausibilityNotes } from './schema/plausibility.js';
 export { USUAL } from './schema/usual-ranges.js';
 export type { LiftCheckInput } from './kinds/lift-check.kind.js';
@@ -245,3 +253,54 @@ export {
 export type { DriftInput, DriftPoint, DriftResult, LaunchSite } from './flight/drift.js';
 export { TRACK_LATITUDE_LIMIT_DEG, wgs84Inverse, wgs84RadiiOfCurvature } from './flight/geodesy.js';
 export type { GeodesicInverse } from './flight/geodesy.js';
+export { flightDrift, LANDING_REGION_PROBABILITIES, landingArea } from './landing/landing-area.js';
+export type { LandingAreaOptions } from './landing/landing-area.js';
+export {
+  DEFAULT_LANDING_SPREADS,
+  LANDING_RUNS_RANGE,
+  MAX_LANDING_SPREAD,
+} from './landing/landing-spreads.js';
+export type {
+  GroundPoint,
+  LandingArea,
+  LandingRegion,
+  LandingRun,
+  LandingSpreads,
+} from './landing/landing-area-types.js';
+export {
+  continuations,
+  continueInputs,
+  needsLeft,
+  takeContinuedFields,
+  type ContinuationDraft,
+  type ContinuationTarget,
+  type SourceOutputs,
+  type TakenFields,
+} from './chain/index.js';
+export {
+  checkFillCardOptions,
+  FILL_CARD_NORMAL_CONDITIONS,
+  FILL_CARD_RANGES,
+  fillCard,
+  fillCardStopText,
+  NECK_LIFT_SOURCE,
+} from './fill-card/index.js';
+export type {
+  FillCard,
+  FillCardCaution,
+  FillCardCylinderOptions,
+  FillCardCylinders,
+  FillCardOptions,
+} from './fill-card/index.js';
+export { flightGeoJson, flightGeoJsonText } from './exports/flight-geojson.js';
+export type {
+  GeoJsonFeature,
+  GeoJsonFeatureCollection,
+  GeoJsonGeometry,
+  GeoJsonPosition,
+} from './exports/flight-geojson.js';
+export { flightKml } from './exports/flight-kml.js';
+export { flightGpx } from './exports/flight-gpx.js';
+export type { FlightGeography } from './exports/flight-geography.js';
+export { flightProfileTable, PROFILE_HEADERS } from './exports/profile-table.js';
+export type { ProfileCell, ProfileColumn, ProfileTable } from './exports/profile-table.js';

@@ -14,4 +14,7 @@
 // 0.10.0: cylinder gas from published real-gas models (hydrogen: Lemmon, Huber & Leachman 2008;
 // helium: NIST IR 8474), with the residual gas's own compressibility; a note on ammonia's real-gas
 // density at one atmosphere.
-export const ENGINE_VERSION = '0.10.0';
+// 0.11.0: a flight profile gives its envelope volume at launch (launchVolume), for gas plans.
+// 0.12.0: a flight profile with winds: the air from the profile's temperatures, the drift to
+// burst and landing, the envelope remnant under the parachute; landing areas.
+export const ENGINE_VERSION = '0.12.0';

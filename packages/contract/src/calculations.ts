@@ -54,11 +54,48 @@ export interface VersionDetail extends VersionSummary {
   series: CalculationResult['series'] | null;
 }
 
+/**
+ * The calculation this one was continued from (sizing → flight → rules check). When the reader may
+ * not see the source, `calculationId`, `title` and `newestVersionNumber` are null: the link is
+ * shown as "from a calculation you cannot open", never who or what it is.
+ */
+export interface CalculationSource {
+  calculationId: string | null;
+  title: string | null;
+  kind: string;
+  /** The source version the inputs were last taken from. */
+  versionNumber: number;
+  /** The source's newest version; above `versionNumber` means a newer one can be taken. */
+  newestVersionNumber: number | null;
+  /** Input paths still holding the kind's example value, to be filled by the person. */
+  needs: string[];
+}
+
+/** A calculation continued from this one; those the reader may not see are left out. */
+export interface CalculationContinuation {
+  id: string;
+  title: string;
+  kind: string;
+}
+
 /** GET /api/calculations/:id */
 export interface CalculationDetail extends CalculationSummary {
   versions: VersionSummary[];
   latest: VersionDetail | null;
   permissions: CalculationPermissions;
+  source: CalculationSource | null;
+  continuations: CalculationContinuation[];
+  /**
+   * The kinds the reader may continue this calculation into ("Continue as …"): the engine's
+   * `continuations(kind)`, empty for a reader who may not create calculations.
+   */
+  continueAs: { toKind: string; title: string }[];
+}
+
+/** POST /api/calculations/:id/versions/:number/continue: answers 201 with the new calculation. */
+export interface ContinueCalculationBody {
+  /** The kind to continue into; the engine's `continuations(kind)` lists the ones offered. */
+  toKind: string;
 }
 
 /** A row of GET /api/calculations: the summary and whether the reader may archive it. */
@@ -102,6 +139,8 @@ export interface SaveVersionBody {
   baseVersion: number;
   inputs: unknown;
   note?: string;
+  /** A continued calculation: the source version its inputs were re-taken from ("Take version N"). */
+  sourceVersion?: number;
 }
 
 /** GET /api/calculations/:id/versions/:a/diff/:b */

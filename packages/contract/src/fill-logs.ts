@@ -25,6 +25,8 @@ export interface FillLog {
   filledAt: string;
   place: string;
   envelopeLabel: string;
+  /** The library envelope that was filled, if the log names one. */
+  envelopeId: string | null;
   gasSource: GasSource;
   ambient: FillAmbient;
   readings: FillReading[];
@@ -45,6 +47,8 @@ export interface FillLogBody {
   filledAt: string;
   place?: string;
   envelopeLabel?: string;
+  /** A library envelope (GET /api/envelopes); null on PATCH unlinks it. */
+  envelopeId?: string | null;
   gasSource: GasSource;
   ambient: FillAmbient;
   readings: FillReading[];

@@ -11,3 +11,6 @@ export * from './fill-logs.js';
 export type * from './attachments.js';
 export type * from './admin.js';
 export type * from './evaluate.js';
+export type * from './envelopes.js';
+export * from './flight-exports.js';
+export type * from './fill-cards.js';

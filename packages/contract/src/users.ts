@@ -34,6 +34,10 @@ export interface AccountPermissions {
   seeClasses: boolean;
   /** Manage people's roles, read the audit trail and the outbox. */
   administer: boolean;
+  /** Read the team's envelope library and choose from it in calculations and fill logs. */
+  seeEnvelopes: boolean;
+  /** Add, change and remove envelopes of the library. */
+  manageEnvelopes: boolean;
 }
 
 /** An account as the API shows it (GET /api/auth/me, the admin list): never a password hash. */

@@ -1,6 +1,7 @@
 import { Layout, Typography } from 'antd';
 import {
   AuditOutlined,
+  DatabaseOutlined,
   ExperimentOutlined,
   FireOutlined,
   LoginOutlined,
@@ -35,6 +36,9 @@ export function AppLayout() {
           { href: paths.calculations.href(), icon: <TableOutlined />, label: 'Calculations' },
           ...(user?.permissions.planGas
             ? [{ href: paths.plans.href(), icon: <FireOutlined />, label: 'Gas plans' }]
+            : []),
+          ...(user?.permissions.seeEnvelopes
+            ? [{ href: paths.envelopes.href(), icon: <DatabaseOutlined />, label: 'Envelopes' }]
             : []),
           ...(user?.permissions.seeClasses
             ? [{ href: paths.classes.href(), icon: <TeamOutlined />, label: 'Classes' }]

@@ -75,6 +75,13 @@ export const routes: RouteObject[] = [
               })),
           },
           {
+            path: paths.fillCard.path,
+            lazy: () =>
+              import('./routes/calculations/fill-card').then((m) => ({
+                Component: m.FillCardRoute,
+              })),
+          },
+          {
             path: paths.admin.path,
             lazy: () => import('./routes/admin').then((m) => ({ Component: m.AdminRoute })),
           },
@@ -85,6 +92,14 @@ export const routes: RouteObject[] = [
           {
             path: paths.plan.path,
             lazy: () => import('./routes/plans').then((m) => ({ Component: m.PlanRoute })),
+          },
+          {
+            path: paths.envelopes.path,
+            lazy: () => import('./routes/envelopes').then((m) => ({ Component: m.EnvelopesRoute })),
+          },
+          {
+            path: paths.envelope.path,
+            lazy: () => import('./routes/envelopes').then((m) => ({ Component: m.EnvelopeRoute })),
           },
           {
             path: paths.classes.path,

@@ -18,6 +18,8 @@ export const paths = {
   reviews: { path: '/reviews', href: () => '/reviews' },
   plans: { path: '/plans', href: () => '/plans' },
   plan: { path: '/plans/:id', href: (id: string) => `/plans/${id}` },
+  envelopes: { path: '/envelopes', href: () => '/envelopes' },
+  envelope: { path: '/envelopes/:id', href: (id: string) => `/envelopes/${id}` },
   admin: { path: '/admin', href: () => '/admin' },
   classes: { path: '/classes', href: () => '/classes' },
   classroom: { path: '/classes/:id', href: (id: string) => `/classes/${id}` },
@@ -30,6 +32,10 @@ export const paths = {
   sheet: {
     path: '/calculations/:id/versions/:n/sheet',
     href: (id: string, n: number) => `/calculations/${id}/versions/${n}/sheet`,
+  },
+  fillCard: {
+    path: '/calculations/:id/versions/:n/fill-card',
+    href: (id: string, n: number) => `/calculations/${id}/versions/${n}/fill-card`,
   },
   verify: {
     path: '/verify/:fingerprint?',

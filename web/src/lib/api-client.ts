@@ -55,9 +55,22 @@ apiClient.interceptors.request.use((config) => {
   return config;
 });
 
+/** A download's error answer arrives as a Blob; its JSON body holds the message to show. */
+async function readBlobBody(error: unknown): Promise<void> {
+  const response = error instanceof AxiosError ? error.response : undefined;
+  if (!response || !(response.data instanceof Blob)) return;
+  try {
+    response.data = JSON.parse(await response.data.text()) as unknown;
+  } catch {
+    // Not JSON (a proxy's page): the status line says enough.
+    response.data = undefined;
+  }
+}
+
 apiClient.interceptors.response.use(
   (response) => response,
-  (error: unknown) => {
+  async (error: unknown) => {
+    await readBlobBody(error);
     const apiError = toApiError(error);
     // An expired or revoked token: drop it, and the app shows the sign-in page.
     if (apiError.status === 401 && getToken()) setToken(null);

@@ -18,4 +18,14 @@ export class SaveVersionDto implements SaveVersionBody {
   @IsString()
   @MaxLength(2000)
   note?: string;
+
+  @ApiPropertyOptional({
+    description: 'a continued calculation: the source version its inputs were re-taken from',
+    example: 2,
+  })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  @Max(1_000_000)
+  sourceVersion?: number;
 }

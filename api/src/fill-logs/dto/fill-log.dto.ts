@@ -2,6 +2,7 @@ import type { AddReadingsBody, FillLogBody } from '@loftwright/contract';
 import { GAS_SOURCES, type GasSource } from '@loftwright/contract';
 import { ApiProperty, ApiPropertyOptional, PartialType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
+import { Nullable } from '../../common/pipes/request-shape';
 import {
   ArrayMaxSize,
   ArrayMinSize,
@@ -12,6 +13,7 @@ import {
   IsObject,
   IsOptional,
   IsString,
+  IsUUID,
   MaxLength,
   ValidateNested,
 } from 'class-validator';
@@ -65,6 +67,12 @@ export class CreateFillLogDto implements Omit<FillLogBody, 'ambient' | 'readings
   @IsString()
   @MaxLength(200)
   envelopeLabel?: string;
+
+  @ApiPropertyOptional({ description: 'a library envelope (GET /api/envelopes); null unlinks' })
+  @IsOptional()
+  @Nullable()
+  @IsUUID('4', { message: 'Envelope must be an envelope of the library (its id)' })
+  envelopeId?: string | null;
 
   @ApiProperty({ enum: GAS_SOURCES })
   @IsIn(GAS_SOURCES, { message: `gasSource must be one of: ${GAS_SOURCES.join(', ')}` })

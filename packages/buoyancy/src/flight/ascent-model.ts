@@ -1,8 +1,6 @@
-import {
-  STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M,
-  standardAtmosphereUnchecked,
-} from '../atmosphere/standard-atmosphere.js';
+import { STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M } from '../atmosphere/standard-atmosphere.js';
 import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
+import type { AirModel } from './air-model.js';
 
 export type EnvelopeBehaviour =
   /** Stretches freely, gas at ambient pressure, until it bursts at the given diameter. */
@@ -11,7 +9,8 @@ export type EnvelopeBehaviour =
   | { readonly kind: 'fixed'; readonly volumeM3: number; readonly frontalAreaM2: number };
 
 export interface AscentModel {
-  readonly temperatureOffsetK: number;
+  /** The air on the way: the 1976 standard with the day's offset, or a profile's. */
+  readonly air: AirModel;
   /** Amount of lifting gas, constant in flight (no leak, no venting) [mol]. */
   readonly gasMol: number;
   readonly gasMolarMassKgPerMol: number;
@@ -31,14 +30,14 @@ export interface AscentState {
 }
 
 /**
- * State of a rising balloon at a geometric altitude in the 1976 standard atmosphere. The gas is
+ * State of a rising balloon at a geometric altitude in the model's air. The gas is
  * at the air's temperature; an extensible envelope is at the air's pressure (zero pressure
  * difference), so its volume is V = n·R·T / p; a fixed envelope keeps its volume. The balloon
  * rises at the terminal velocity where drag balances free lift: ½·ρ·w²·C_d·A = L_free·g.
  */
 export function ascentState(model: AscentModel, altitudeM: number): AscentState {
   // Callers stay within the model's altitudes (checked at the kind's boundary).
-  const air = standardAtmosphereUnchecked(altitudeM, model.temperatureOffsetK);
+  const air = model.air(altitudeM);
   let volumeM3: number;
   let frontalAreaM2: number;
   let diameterM: number;
@@ -69,12 +68,10 @@ export function descentRateMS(
   parachuteAreaM2: number,
   dragCoefficient: number,
   altitudeM: number,
-  temperatureOffsetK: number,
+  air: AirModel,
 ): number {
-  const air = standardAtmosphereUnchecked(altitudeM, temperatureOffsetK);
-  return Math.sqrt(
-    (2 * massKg * air.gravityMS2) / (air.densityKgM3 * dragCoefficient * parachuteAreaM2),
-  );
+  const { gravityMS2, densityKgM3 } = air(altitudeM);
+  return Math.sqrt((2 * massKg * gravityMS2) / (densityKgM3 * dragCoefficient * parachuteAreaM2));
 }
 
 export interface ProfilePoint {
@@ -166,7 +163,7 @@ export function integrateDescent(
   dragCoefficient: number,
   startAltitudeM: number,
   groundAltitudeM: number,
-  temperatureOffsetK: number,
+  air: AirModel,
   timeStepS: number,
 ): {
   readonly points: readonly { timeS: number; altitudeM: number; rateMS: number }[];
@@ -178,7 +175,7 @@ export function integrateDescent(
       parachuteAreaM2,
       dragCoefficient,
       Math.min(Math.max(z, groundAltitudeM), STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M.max),
-      temperatureOffsetK,
+      air,
     );
   const points = [{ timeS: 0, altitudeM: startAltitudeM, rateMS: -rate(startAltitudeM) }];
   let t = 0;

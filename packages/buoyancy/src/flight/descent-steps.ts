@@ -1,6 +1,7 @@
 import { type Derivation, v } from '../derivation.js';
 import type { FlightProfileValues } from '../kinds/flight-profile.kind.js';
 import type { AmbientState } from '../steps/ambient-steps.js';
+import type { AirModel } from './air-model.js';
 import { type AscentResult, descentRateMS, integrateDescent } from './ascent-model.js';
 import { thinRows } from './series-thinning.js';
 
@@ -15,7 +16,8 @@ export function deriveDescent(
   inputs: FlightProfileValues,
   ascent: AscentResult,
   launchAir: AmbientState,
-): void {
+  air: AirModel,
+): DescentResult | undefined {
   if (!inputs.parachute) {
     d.warn({
       code: 'no-parachute',
@@ -24,28 +26,20 @@ export function deriveDescent(
         'No parachute given: the payload falls freely after burst. Fly a recovery system as the rules where you launch require.',
       field: 'parachute',
     });
-    return;
+    return undefined;
   }
   const parachute = inputs.parachute;
-  const offsetK = inputs.launch.temperatureOffsetK;
-  const descentMassKg = d.step({
-    id: 'descent-mass',
-    label: 'Mass under the parachute (payload and envelope remnant)',
-    formula: 'm_d = m_payload + m_env',
-    values: [v('m_payload', inputs.payloadMassKg, 'kg'), v('m_env', inputs.envelopeMassKg, 'kg')],
-    result: v('m_d', inputs.payloadMassKg + inputs.envelopeMassKg, 'kg'),
-    source: 'the burst envelope usually stays on the line',
-  });
+  const descentMassKg = deriveDescentMassKg(d, inputs, parachute);
   const descent = integrateDescent(
     descentMassKg,
     parachute.areaM2,
     parachute.dragCoefficient,
     ascent.endAltitudeM,
     inputs.launch.altitudeM,
-    offsetK,
+    air,
     inputs.timeStepS,
   );
-  deriveLandingRateMS(d, inputs, parachute, descentMassKg, launchAir);
+  deriveLandingRateMS(d, inputs, parachute, descentMassKg, launchAir, air);
   deriveFlightTimes(d, inputs, ascent, descent.durationS);
   d.addSeries('descent', {
     label: 'Descent',
@@ -60,6 +54,39 @@ export function deriveDescent(
       pt.rateMS,
     ]),
   });
+  return descent;
+}
+
+type DescentResult = ReturnType<typeof integrateDescent>;
+
+/**
+ * Mass hanging under the canopy: the payload and what is left of the envelope, all of it unless
+ * the inputs give the remnant.
+ */
+function deriveDescentMassKg(
+  d: Derivation,
+  inputs: FlightProfileValues,
+  parachute: Parachute,
+): number {
+  const remnantKg = parachute.envelopeRemnantMassKg;
+  if (remnantKg === undefined) {
+    return d.step({
+      id: 'descent-mass',
+      label: 'Mass under the parachute (payload and envelope remnant)',
+      formula: 'm_d = m_payload + m_env',
+      values: [v('m_payload', inputs.payloadMassKg, 'kg'), v('m_env', inputs.envelopeMassKg, 'kg')],
+      result: v('m_d', inputs.payloadMassKg + inputs.envelopeMassKg, 'kg'),
+      source: 'the burst envelope usually stays on the line',
+    });
+  }
+  return d.step({
+    id: 'descent-mass',
+    label: 'Mass under the parachute (payload and the envelope remnant given)',
+    formula: 'm_d = m_payload + m_remnant',
+    values: [v('m_payload', inputs.payloadMassKg, 'kg'), v('m_remnant', remnantKg, 'kg')],
+    result: v('m_d', inputs.payloadMassKg + remnantKg, 'kg'),
+    source: 'input, as entered: the part of the envelope still on the line after burst',
+  });
 }
 
 /** Terminal rate of fall under the canopy at the launch site's altitude [m/s]. */
@@ -69,6 +96,7 @@ function deriveLandingRateMS(
   parachute: Parachute,
   descentMassKg: number,
   launchAir: AmbientState,
+  air: AirModel,
 ): number {
   return d.step({
     id: 'landing-descent-rate',
@@ -87,7 +115,7 @@ function deriveLandingRateMS(
         parachute.areaM2,
         parachute.dragCoefficient,
         inputs.launch.altitudeM,
-        inputs.launch.temperatureOffsetK,
+        air,
       ),
       'm/s',
     ),

@@ -8,6 +8,7 @@ import { deriveGas } from '../steps/gas-steps.js';
 import { deriveGeometry } from '../steps/geometry-steps.js';
 import { deriveLift } from '../steps/lift-steps.js';
 import { type AscentModel, ascentState } from './ascent-model.js';
+import { deriveProfileLaunchAir, type FlightAir } from './flight-air.js';
 
 /** The balloon as launched: the air, its envelope, the gas it holds, and how it will rise. */
 export interface Launch {
@@ -17,21 +18,29 @@ export interface Launch {
   readonly model: AscentModel;
   /** Rate of climb at launch [m/s]; 0 when free lift is not positive. */
   readonly ascentRateMS: number;
+  /** Whether the air comes from the wind profile rather than the 1976 standard. */
+  readonly airFromProfile: boolean;
 }
 
 /**
- * The launch in the 1976 standard atmosphere: air and gas at the site, the envelope as filled,
+ * The launch in the flight's air (the 1976 standard, or the wind profile's): air and gas at the site, the envelope as filled,
  * the amount of gas (constant in flight), the lift, and the ascent rate at launch; publishes free
  * lift and launch rate, with the free-balloon caution.
  */
-export function deriveLaunch(d: Derivation, inputs: FlightProfileValues): Launch {
-  const offsetK = inputs.launch.temperatureOffsetK;
-  const air = deriveAmbient(d, {
-    mode: 'standard',
-    altitudeM: inputs.launch.altitudeM,
-    temperatureOffsetK: offsetK,
-    humidity: { kind: 'dry' },
-  });
+export function deriveLaunch(
+  d: Derivation,
+  inputs: FlightProfileValues,
+  flightAir: FlightAir,
+): Launch {
+  const air =
+    flightAir.fromProfile && flightAir.wind
+      ? deriveProfileLaunchAir(d, flightAir.wind, inputs.launch.altitudeM)
+      : deriveAmbient(d, {
+          mode: 'standard',
+          altitudeM: inputs.launch.altitudeM,
+          temperatureOffsetK: inputs.launch.temperatureOffsetK,
+          humidity: { kind: 'dry' },
+        });
   const gas = deriveGas(
     d,
     {
@@ -58,7 +67,7 @@ export function deriveLaunch(d: Derivation, inputs: FlightProfileValues): Launch
     inputs.payloadMassKg,
   );
   const model: AscentModel = {
-    temperatureOffsetK: offsetK,
+    air: flightAir.model,
     gasMol,
     gasMolarMassKgPerMol: gas.molarMassKgPerMol,
     carriedMassKg: inputs.envelopeMassKg + inputs.payloadMassKg,
@@ -82,7 +91,7 @@ export function deriveLaunch(d: Derivation, inputs: FlightProfileValues): Launch
     message:
       'A free balloon is an aircraft in most countries: check the payload against the rules (Balloon rules check) and notify the aviation authority as it requires before launch.',
   });
-  return { air, geometry, gasMol, model, ascentRateMS };
+  return { air, geometry, gasMol, model, ascentRateMS, airFromProfile: flightAir.fromProfile };
 }
 
 /** Amount of gas in the envelope at launch, n = p·V / (R·T), constant in flight [mol]. */

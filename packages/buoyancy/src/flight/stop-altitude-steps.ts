@@ -1,7 +1,4 @@
-import {
-  STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M,
-  standardAtmosphere,
-} from '../atmosphere/standard-atmosphere.js';
+import { STANDARD_ATMOSPHERE_ALTITUDE_RANGE_M } from '../atmosphere/standard-atmosphere.js';
 import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
 import { type Derivation, v } from '../derivation.js';
 import { InputError } from '../errors.js';
@@ -72,8 +69,9 @@ function deriveBurstAltitudeM(
     formula: 'n·R·T(z) / p(z) = V_b',
     values: [v('n', launch.gasMol, 'mol'), v('V_b', burstVolumeM3, 'm³')],
     result: v('z_b', burstAltitudeM, 'm'),
-    source:
-      'ideal gas at ambient temperature and pressure in the U.S. Standard Atmosphere 1976 (zero pressure difference across the envelope)',
+    source: launch.airFromProfile
+      ? 'ideal gas at ambient temperature and pressure of the wind profile’s air (zero pressure difference across the envelope)'
+      : 'ideal gas at ambient temperature and pressure in the U.S. Standard Atmosphere 1976 (zero pressure difference across the envelope)',
   });
   d.output('burstAltitude', 'Burst altitude', 'burst-altitude');
   return burstAltitudeM;
@@ -82,7 +80,6 @@ function deriveBurstAltitudeM(
 /** Altitude of neutral buoyancy of a fixed-volume envelope, and its superpressure there. */
 function deriveFloatAltitudeM(d: Derivation, inputs: FlightProfileValues, launch: Launch): number {
   const { model, gasMol, geometry } = launch;
-  const offsetK = model.temperatureOffsetK;
   const totalMassKg = model.carriedMassKg + gasMol * model.gasMolarMassKgPerMol;
   const floatDensity = d.step({
     id: 'float-density',
@@ -97,8 +94,7 @@ function deriveFloatAltitudeM(d: Derivation, inputs: FlightProfileValues, launch
     result: v('ρ_f', totalMassKg / geometry.volumeM3, 'kg/m³'),
     source: "Archimedes' principle at neutral buoyancy",
   });
-  const densityAt = (altitudeM: number) =>
-    standardAtmosphere(altitudeM, { temperatureOffsetK: offsetK }).densityKgM3 - floatDensity;
+  const densityAt = (altitudeM: number) => model.air(altitudeM).densityKgM3 - floatDensity;
   const floatAltitudeM =
     densityAt(CEILING_M) > 0
       ? Number.POSITIVE_INFINITY
@@ -111,14 +107,16 @@ function deriveFloatAltitudeM(d: Derivation, inputs: FlightProfileValues, launch
     });
     return floatAltitudeM;
   }
-  const floatAir = standardAtmosphere(floatAltitudeM, { temperatureOffsetK: offsetK });
+  const floatAir = model.air(floatAltitudeM);
   d.step({
     id: 'float-altitude',
     label: 'Float altitude (neutral buoyancy)',
     formula: 'ρ_air(z_f) = ρ_f',
     values: [v('ρ_f', floatDensity, 'kg/m³')],
     result: v('z_f', floatAltitudeM, 'm'),
-    source: 'U.S. Standard Atmosphere, 1976, density profile',
+    source: launch.airFromProfile
+      ? 'density of the wind profile’s air (1976 standard above and below it)'
+      : 'U.S. Standard Atmosphere, 1976, density profile',
   });
   d.step({
     id: 'float-superpressure',

@@ -8,7 +8,13 @@ export const envelopeGeometrySchema = z.object({ envelope: envelopeSchema }).str
 
 export const envelopeGeometryKind = defineKind({
   id: 'envelope-geometry',
-  capabilities: { charts: [], volumeOutput: 'volume', predictsFillLift: false, meterImport: false },
+  capabilities: {
+    charts: [],
+    volumeOutput: 'volume',
+    predictsFillLift: false,
+    meterImport: false,
+    landingArea: false,
+  },
   title: 'Envelope geometry',
   description:
     'Volume, surface area and frontal area of a sphere (from diameter, radius or circumference), spheroid, capsule, two-disc cushion or a custom volume.',

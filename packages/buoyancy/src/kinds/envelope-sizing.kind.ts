@@ -151,6 +151,8 @@ export const envelopeSizingKind = defineKind({
     volumeOutput: 'volume',
     predictsFillLift: false,
     meterImport: false,
+    landingArea: false,
+    fillCard: true,
   },
   title: 'Envelope sizing',
   description:

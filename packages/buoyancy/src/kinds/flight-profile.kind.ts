@@ -3,6 +3,9 @@ import { TEMPERATURE_OFFSET_RANGE_K } from '../atmosphere/standard-atmosphere.js
 import { Derivation } from '../derivation.js';
 import { deriveAscent } from '../flight/ascent-steps.js';
 import { deriveDescent } from '../flight/descent-steps.js';
+import { deriveDrift } from '../flight/drift-steps.js';
+import { chooseFlightAir, noteAirAboveProfile } from '../flight/flight-air.js';
+import { pathOf } from '../flight/flight-path.js';
 import { deriveLaunch } from '../flight/launch-steps.js';
 import { deriveStopAltitudeM } from '../flight/stop-altitude-steps.js';
 import { GAS_IDS, type GasId } from '../gas/gas-catalogue.js';
@@ -15,7 +18,15 @@ import {
   DEFAULT_BALLOON_DRAG_COEFFICIENT,
   DEFAULT_PARACHUTE_DRAG_COEFFICIENT,
 } from '../flight/drag-defaults.js';
+import {
+  launchLatitudeSchema,
+  launchLongitudeSchema,
+  launchTimeSchema,
+  requireBothCoordinates,
+} from '../flight/launch-site-schema.js';
+import { landingAreaSettingsSchema } from '../landing/landing-spreads.js';
 import { usually } from '../schema/usual-range.js';
+import { windProfileSchema } from '../wind/wind-profile-schema.js';
 import { USUAL } from '../schema/usual-ranges.js';
 
 export const flightProfileSchema = z
@@ -61,8 +72,12 @@ export const flightProfileSchema = z
           TEMPERATURE_OFFSET_RANGE_K.max,
           'day warmer (+) or colder (−) than the 1976 standard',
         ).default(0),
+        latitudeDeg: launchLatitudeSchema,
+        longitudeDeg: launchLongitudeSchema,
+        time: launchTimeSchema,
       })
-      .strict(),
+      .strict()
+      .superRefine(requireBothCoordinates),
     dragCoefficient: quantity(
       'coefficient',
       0.05,
@@ -78,13 +93,36 @@ export const flightProfileSchema = z
           3,
           'drag coefficient on the canopy area',
         ).default(DEFAULT_PARACHUTE_DRAG_COEFFICIENT),
+        envelopeRemnantMassKg: quantity(
+          'mass',
+          0,
+          1000,
+          'part of the envelope still on the line after burst (default: all of it)',
+        ).optional(),
       })
       .strict()
       .optional(),
+    wind: windProfileSchema
+      .meta({
+        description:
+          'Winds aloft by level (and temperatures, if known): the drift, landing point and landing area',
+      })
+      .optional(),
+    landingArea: landingAreaSettingsSchema.optional(),
     timeStepS: quantity('time', 0.05, 30, 'integration time step').default(1),
     maxTimeS: quantity('time', 60, 172800, 'longest flight time computed').default(43200),
   })
-  .strict();
+  .strict()
+  .superRefine((inputs, context) => {
+    const remnantKg = inputs.parachute?.envelopeRemnantMassKg;
+    if (remnantKg !== undefined && remnantKg > inputs.envelopeMassKg) {
+      context.addIssue({
+        code: 'custom',
+        path: ['parachute', 'envelopeRemnantMassKg'],
+        message: `must not be more than the envelope mass (${inputs.envelopeMassKg} kg)`,
+      });
+    }
+  });
 
 export type FlightProfileInput = z.input<typeof flightProfileSchema>;
 /** The inputs as the kind reads them, defaults filled in. */
@@ -92,9 +130,18 @@ export type FlightProfileValues = z.output<typeof flightProfileSchema>;
 
 export const flightProfileKind = defineKind({
   id: 'flight-profile',
+  capabilities: {
+    charts: ['drift-track'],
+    // The gas the envelope holds at launch: what a gas plan fills (the design chain).
+    volumeOutput: 'launchVolume',
+    predictsFillLift: false,
+    meterImport: false,
+    landingArea: true,
+    fillCard: true,
+  },
   title: 'Flight profile',
   description:
-    'Ascent of a free balloon in the 1976 standard atmosphere: for a stretching (latex-like) envelope the burst altitude and time, ascent rate and diameter on the way, and the descent under a parachute; for a fixed-volume envelope the float altitude and the superpressure there.',
+    'Ascent of a free balloon in the 1976 standard atmosphere (or the air of a wind profile with temperatures): for a stretching (latex-like) envelope the burst altitude and time, ascent rate and diameter on the way, and the descent under a parachute; for a fixed-volume envelope the float altitude and the superpressure there. With winds aloft, the drift to burst and landing, and a landing area from repeated flights with varied inputs.',
   schema: flightProfileSchema,
   example: {
     envelope: { kind: 'extensible', launchDiameterM: 1.6, burstDiameterM: 6 },
@@ -106,7 +153,14 @@ export const flightProfileKind = defineKind({
   },
   compute(inputs) {
     const d = new Derivation();
-    const launch = deriveLaunch(d, inputs);
+    const air = chooseFlightAir(d, inputs);
+    const launch = deriveLaunch(d, inputs, air);
+    d.output(
+      'launchVolume',
+      'Envelope volume at launch (gas at launch conditions)',
+      'volume',
+      launch.air.context,
+    );
     if (launch.ascentRateMS <= 0) {
       d.warn({
         code: 'no-ascent',
@@ -118,7 +172,10 @@ export const flightProfileKind = defineKind({
     }
     const stopAltitudeM = deriveStopAltitudeM(d, inputs, launch);
     const ascent = deriveAscent(d, inputs, launch.model, stopAltitudeM);
-    if (ascent.end === 'burst') deriveDescent(d, inputs, ascent, launch.air);
+    const descent =
+      ascent.end === 'burst' ? deriveDescent(d, inputs, ascent, launch.air, air.model) : undefined;
+    noteAirAboveProfile(d, air, ascent.endAltitudeM);
+    if (air.wind) deriveDrift(d, inputs, pathOf(ascent, descent), air.wind);
     return d.result();
   },
 });

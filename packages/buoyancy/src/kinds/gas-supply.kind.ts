@@ -96,7 +96,12 @@ export type GasSupplyValues = z.output<typeof gasSupplySchema>;
 
 export const gasSupplyKind = defineKind({
   id: 'gas-supply',
-  capabilities: { charts: ['supply-cost'], predictsFillLift: false, meterImport: true },
+  capabilities: {
+    charts: ['supply-cost'],
+    predictsFillLift: false,
+    meterImport: true,
+    landingArea: false,
+  },
   title: 'Gas supply and cost',
   description:
     'Hydrogen from water electrolysis by Faraday’s law (rate, time to fill, energy, efficiency against the higher heating value), metered energy per litre, gas delivered by cylinders, and the cost of each source per fill.',

@@ -2,7 +2,7 @@ import type * as z from 'zod';
 import type { CalculationResult } from '../derivation.js';
 
 /** Charts the web draws for a kind beyond a flight's series (which any kind with `series` gets). */
-export type KindChart = 'lift-sweeps' | 'sizing-sweep' | 'supply-cost';
+export type KindChart = 'lift-sweeps' | 'sizing-sweep' | 'supply-cost' | 'drift-track';
 
 /**
  * What a kind offers besides its results, so the web and the API read it here rather than
@@ -17,12 +17,23 @@ export interface KindCapabilities {
   readonly predictsFillLift: boolean;
   /** Its metered energy can be read from an energy-meter log (CSV). */
   readonly meterImport: boolean;
+  /** A landing area can be drawn for it (repeated flights with varied inputs; needs its wind). */
+  readonly landingArea: boolean;
+  /**
+   * An envelope from the team's library can fill its inputs (`applyLibraryEnvelope`). Set by the
+   * registry from the library's own mapping (library/apply-library-envelope.ts), so the flag and
+   * the fields it fills cannot disagree; absent means no.
+   */
+  readonly libraryEnvelope?: boolean;
+  /** A fill card for the crew can be printed from it (fill-card/fill-card.ts); absent means no. */
+  readonly fillCard?: boolean;
 }
 
 export const NO_CAPABILITIES: KindCapabilities = {
   charts: [],
   predictsFillLift: false,
   meterImport: false,
+  landingArea: false,
 };
 
 /** One kind of calculation: its inputs (schema with ranges and units), an example, and its rule. */

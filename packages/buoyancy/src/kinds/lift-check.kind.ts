@@ -66,6 +66,7 @@ export const liftCheckKind = defineKind({
     volumeOutput: 'volume',
     predictsFillLift: true,
     meterImport: false,
+    landingArea: false,
   },
   title: 'Lift check',
   description:

@@ -59,6 +59,7 @@ describe('kind capabilities', () => {
     expect(withVolume.map((kind) => kind.id).sort()).toEqual([
       'envelope-geometry',
       'envelope-sizing',
+      'flight-profile',
       'lift-check',
     ]);
     for (const kind of withVolume) {
@@ -69,6 +70,7 @@ describe('kind capabilities', () => {
       charts: [],
       predictsFillLift: false,
       meterImport: false,
+      landingArea: false,
     });
   });
 });

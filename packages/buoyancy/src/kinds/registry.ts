@@ -13,6 +13,7 @@ import { gasSupplyKind } from './gas-supply.kind.js';
 import { type CalculationKind, type KindCapabilities, NO_CAPABILITIES } from './kind.js';
 import { liftCheckKind } from './lift-check.kind.js';
 import { liftingGasKind } from './lifting-gas.kind.js';
+import { libraryEnvelopeMapping } from '../library/apply-library-envelope.js';
 import { liftMeasurementKind } from './lift-measurement.kind.js';
 
 const KIND_LIST = [
@@ -73,8 +74,14 @@ export function describeKind(kind: CalculationKind): KindDescription {
       return JSON.parse(JSON.stringify(jsonSchemaOf(kind))) as Record<string, unknown>;
     },
     example: kind.example,
-    capabilities: kind.capabilities ?? NO_CAPABILITIES,
+    capabilities: capabilitiesOf(kind),
   };
+}
+
+/** A kind's own capabilities, with whether a library envelope can fill its inputs. */
+function capabilitiesOf(kind: CalculationKind): KindCapabilities {
+  const declared = kind.capabilities ?? NO_CAPABILITIES;
+  return libraryEnvelopeMapping(kind.id) ? { ...declared, libraryEnvelope: true } : declared;
 }
 
 /** Every calculation kind the engine offers. */
@@ -135,5 +142,6 @@ export function normaliseInputs(kindId: string, inputs: unknown): unknown {
 
 /** What a kind offers besides its results; nothing for an id the engine does not know. */
 export function kindCapabilities(id: string): KindCapabilities {
-  return byId.get(id)?.capabilities ?? NO_CAPABILITIES;
+  const kind = byId.get(id);
+  return kind ? capabilitiesOf(kind) : NO_CAPABILITIES;
 }

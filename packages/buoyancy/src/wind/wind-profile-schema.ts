@@ -193,7 +193,8 @@ export const windProfileSchema = z
       })
       .max(WIND_LAYER_COUNT_RANGE.max, {
         message: `takes at most ${WIND_LAYER_COUNT_RANGE.max} levels`,
-      }),
+      })
+      .meta({ description: 'levels, lowest first', itemLabel: 'level' }),
   })
   .strict()
   .superRefine((profile, context) => {

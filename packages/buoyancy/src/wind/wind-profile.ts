@@ -356,9 +356,28 @@ export interface AirSample {
  */
 export function windProfileAirAt(profile: WindProfile, altitudeM: number): AirSample {
   checkAltitude(altitudeM);
+  return airAtLocated(profile, altitudeM, locateLevel(profile.heightsM, altitudeM, 0));
+}
+
+/**
+ * `windProfileAirAt` for a flight integration, which calls it tens of thousands of times at
+ * nearby heights: remembers the last level found, so each call walks a step or two instead of
+ * searching, and skips the range check (integrators keep within −5 000 to 86 000 m). Gives the
+ * same numbers as `windProfileAirAt`.
+ * @internal
+ */
+export function windProfileAirSampler(profile: WindProfile): (altitudeM: number) => AirSample {
+  let hint = 0;
+  return (altitudeM) => {
+    hint = locateLevel(profile.heightsM, altitudeM, hint);
+    return airAtLocated(profile, altitudeM, hint);
+  };
+}
+
+/** The air at a height whose level index `locateLevel` has found. */
+function airAtLocated(profile: WindProfile, altitudeM: number, index: number): AirSample {
   const { heightsM, temperaturesK, pressuresPa } = profile;
   const last = heightsM.length - 1;
-  const index = locateLevel(heightsM, altitudeM, 0);
   let temperatureK: number;
   let pressurePa: number;
   if (index < 0 || index === last) {

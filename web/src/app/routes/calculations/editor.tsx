@@ -18,6 +18,7 @@ import { useReviewComments } from '@/features/reviews/api/reviews-api';
 import { ReviewCommentsPanel } from '@/features/reviews/components/review-comments-panel';
 import { ReviewDecision } from '@/features/reviews/components/review-decision';
 import { ReviewNotes } from '@/features/sign-off/components/review-notes';
+import { EnvelopePicker } from '@/features/envelopes/components/envelope-picker';
 
 // Below the editor and needed later than it: loaded after the form and results are on screen.
 const FillLogsPanel = lazy(() =>
@@ -53,6 +54,14 @@ export function CalculationEditorRoute() {
   const mayReview = Boolean(latest && calculation.data?.permissions.review);
   const mayWrite = Boolean(calculation.data?.permissions.upload);
   const mayRemove = (file: Attachment) => file.permissions.remove;
+  // The library's envelopes fill inputs where the kind takes one and the reader has the library.
+  const kind = calculation.data?.kind ?? '';
+  const envelopePicker =
+    user?.permissions.seeEnvelopes && kindCapabilities(kind).libraryEnvelope
+      ? (value: unknown, onChange: (value: unknown) => void) => (
+          <EnvelopePicker kindId={kind} value={value} onChange={onChange} />
+        )
+      : undefined;
   return (
     <>
       {mayReview && latest ? (
@@ -87,7 +96,12 @@ export function CalculationEditorRoute() {
         </section>
       ) : null}
       <FieldRemarksContext.Provider value={remarks}>
-        <CalculationEditor key={id} id={id} unitSystem={user?.unitSystem ?? 'si'} />
+        <CalculationEditor
+          key={id}
+          id={id}
+          unitSystem={user?.unitSystem ?? 'si'}
+          picker={envelopePicker}
+        />
       </FieldRemarksContext.Provider>
       {calculation.data && user ? (
         <Suspense fallback={null}>

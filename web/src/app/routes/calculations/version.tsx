@@ -1,5 +1,8 @@
+import { kindCapabilities } from '@loftwright/buoyancy';
 import { Alert, Card, Space, Spin, Typography } from 'antd';
+import { FLIGHT_EXPORT_FILES, type FlightExportFile } from '@loftwright/contract';
 import { Link, useParams } from 'react-router-dom';
+import { FileDownloads } from '@/components/export/file-downloads';
 import { paths } from '@/config/paths';
 import { useCalculation } from '@/features/calculations/api/calculations-api';
 import { StatusTag } from '@/features/calculations/components/status-tag';
@@ -56,7 +59,38 @@ export function VersionRoute() {
         <Link to={paths.sheet.href(id, version.number)}>
           Sign-off sheet of version {version.number}
         </Link>
+        {kindCapabilities(calculation.data.kind).fillCard ? (
+          <Link to={paths.fillCard.href(id, version.number)}>
+            Fill card of version {version.number}
+          </Link>
+        ) : null}
       </Space>
+      {kindCapabilities(calculation.data.kind).landingArea ? (
+        <section aria-labelledby="flight-downloads" style={{ marginTop: 16 }}>
+          <Typography.Title level={2} id="flight-downloads">
+            Track and profile for map programs
+          </Typography.Title>
+          <Typography.Paragraph type="secondary">
+            Computed on the server from this version: the ground track with launch, burst, landing
+            and the 50 % and 95 % landing areas, and the vertical profile as a table.
+          </Typography.Paragraph>
+          <FileDownloads
+            label={`Downloads of version ${version.number}`}
+            files={FLIGHT_EXPORT_FILES.map((file) => ({
+              path: `/calculations/${id}/versions/${version.number}/exports/${file}`,
+              label: FLIGHT_EXPORT_LABELS[file],
+              fallbackName: file,
+            }))}
+          />
+        </section>
+      ) : null}
     </Card>
   );
 }
+
+const FLIGHT_EXPORT_LABELS: Record<FlightExportFile, string> = {
+  'track.geojson': 'Track as GeoJSON',
+  'track.kml': 'Track as KML',
+  'track.gpx': 'Track as GPX',
+  'profile.csv': 'Profile as CSV',
+};

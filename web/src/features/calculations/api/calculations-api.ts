@@ -8,6 +8,7 @@ import {
 import type {
   CalculationDetail,
   CalculationListQuery,
+  ContinueCalculationBody,
   CalculationPage,
   CreateCalculationBody,
   SaveVersionBody,
@@ -19,7 +20,9 @@ import { apiClient } from '@/lib/api-client';
 import { dispositionFileName, saveBlob } from '@/lib/save-blob';
 
 export type {
+  CalculationContinuation,
   CalculationDetail,
+  CalculationSource,
   CalculationListItem,
   CalculationListQuery,
   CalculationPage,
@@ -154,3 +157,22 @@ export const useVersionDiff = (id: string, a: number | undefined, b: number | un
       (await apiClient.get<VersionDiff>(`/calculations/${id}/versions/${a}/diff/${b}`)).data,
     enabled: a !== undefined && b !== undefined && a !== b,
   });
+
+/** GET /api/calculations/:id/versions/:n: one saved version (a source's, for "Take version N"). */
+export const getVersion = async (id: string, n: number) =>
+  (await apiClient.get<VersionDetail>(`/calculations/${id}/versions/${n}`)).data;
+
+/** POST .../versions/:n/continue: a new calculation of the next kind made from this version. */
+export function useContinueCalculation(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ version, toKind }: { version: number } & ContinueCalculationBody) =>
+      (
+        await apiClient.post<CalculationDetail>(
+          `/calculations/${id}/versions/${version}/continue`,
+          { toKind } satisfies ContinueCalculationBody,
+        )
+      ).data,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations'] }),
+  });
+}

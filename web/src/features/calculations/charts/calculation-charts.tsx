@@ -1,6 +1,7 @@
 import {
   type CalculationResult,
   kindCapabilities,
+  type LandingArea,
   liftSweeps,
   type UnitSystem,
 } from '@loftwright/buoyancy';
@@ -8,20 +9,27 @@ import { useMemo } from 'react';
 import { FlightChart } from './flight-chart';
 import { SupplyCostChart } from '@/components/charts/supply-cost-chart';
 import { SweepChart } from './sweep-chart';
+import { TrackChart } from './track-chart';
 
 type Inputs = Record<string, unknown>;
 
-/** The pictures that fit a kind's result: lift sweeps, the flight profile, supply costs. */
+/**
+ * The pictures that fit a kind's result: lift sweeps, the flight profile and its drift track
+ * (with the landing area once estimated), supply costs.
+ */
 export function CalculationCharts({
   kind,
   inputs,
   result,
   unitSystem,
+  landingArea,
 }: {
   kind: string;
   inputs: Inputs;
   result: CalculationResult;
   unitSystem: UnitSystem;
+  /** The landing area estimated for these inputs, drawn on the drift track. */
+  landingArea?: LandingArea;
 }) {
   // Which charts a kind has is the engine's to say (kindCapabilities), not a switch on its id.
   const offered = kindCapabilities(kind).charts;
@@ -34,6 +42,15 @@ export function CalculationCharts({
     ...sweeps.map((sweep) => <SweepChart key={sweep.id} sweep={sweep} unitSystem={unitSystem} />),
     result.series ? (
       <FlightChart key="flight" series={result.series} outputs={result.outputs} />
+    ) : null,
+    offered.includes('drift-track') && result.series?.track ? (
+      <TrackChart
+        key="track"
+        series={result.series.track}
+        outputs={result.outputs}
+        unitSystem={unitSystem}
+        landingArea={landingArea}
+      />
     ) : null,
     offered.includes('supply-cost') ? (
       <SupplyCostChart key="cost" result={result} inputs={inputs} />

@@ -189,6 +189,9 @@ const detail: CalculationDetail = {
     upload: true,
     export: true,
   },
+  source: null,
+  continuations: [],
+  continueAs: [],
 };
 
 describe('the balloon rules check in the editor', () => {

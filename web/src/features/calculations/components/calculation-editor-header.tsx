@@ -1,4 +1,5 @@
 import { Alert, Space, Typography } from 'antd';
+import type { ReactNode } from 'react';
 import { localMoment } from '@/lib/local-moment';
 import type { CalculationDetail } from '../api/calculations-api';
 import { StatusTag } from './status-tag';
@@ -10,10 +11,13 @@ import { StatusTag } from './status-tag';
 export function CalculationEditorHeader({
   detail,
   serverDiffers,
+  actions,
 }: {
   detail: CalculationDetail;
   /** Whether the saved version's numbers differ from what this browser computes for them. */
   serverDiffers: boolean;
+  /** Buttons beside the title ("Continue as …"). */
+  actions?: ReactNode;
 }) {
   return (
     <>
@@ -23,6 +27,7 @@ export function CalculationEditorHeader({
         </Typography.Title>
         <Typography.Text className="lw-mono">v{detail.latestVersion}</Typography.Text>
         <StatusTag status={detail.status} />
+        {actions}
       </Space>
       {detail.status === 'approved' ? (
         <Alert

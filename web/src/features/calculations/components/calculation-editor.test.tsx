@@ -51,6 +51,9 @@ const detail: CalculationDetail = {
     upload: true,
     export: true,
   },
+  source: null,
+  continuations: [],
+  continueAs: [],
 };
 
 const renderEditor = () =>

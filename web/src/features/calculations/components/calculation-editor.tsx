@@ -8,11 +8,14 @@ import { useCalculationDraft } from '../hooks/use-calculation-draft';
 import { useInputSchema } from '../hooks/use-input-schema';
 import { useLiveEvaluation } from '../hooks/use-live-evaluation';
 import { useSaveWithConflict } from '../hooks/use-save-with-conflict';
+import { useSourceVersion } from '../hooks/use-source-version';
 import { useUnsavedChangesGuard } from '../hooks/use-unsaved-changes-guard';
 import { CalculationEditorHeader } from './calculation-editor-header';
-import { CalculationInputsSection } from './calculation-inputs-section';
+import { CalculationInputsSection, type InputsPicker } from './calculation-inputs-section';
 import { CalculationResultsColumn } from './calculation-results-column';
 import { ConflictDialog } from './conflict-dialog';
+import { ContinueButtons } from './continue-buttons';
+import { LinkedPanel } from './linked-panel';
 import { LeaveWithoutSavingDialog } from './leave-without-saving-dialog';
 import { SaveVersionControls } from './save-version-controls';
 
@@ -40,7 +43,16 @@ function withMeteredEnergy(inputs: unknown, energyJ: number) {
 }
 
 /** Loads a calculation and shows its editor (inputs, live results, derivation). */
-export function CalculationEditor({ id, unitSystem }: { id: string; unitSystem: UnitSystem }) {
+export function CalculationEditor({
+  id,
+  unitSystem,
+  picker,
+}: {
+  id: string;
+  unitSystem: UnitSystem;
+  /** Composed in by the route: fills inputs from elsewhere (CalculationInputsSection). */
+  picker?: InputsPicker;
+}) {
   const calculation = useCalculation(id);
   if (calculation.isPending) return <Spin description="Loading the calculation…" />;
   if (calculation.error) {
@@ -67,6 +79,7 @@ export function CalculationEditor({ id, unitSystem }: { id: string; unitSystem: 
       detail={calculation.data}
       refetch={() => void calculation.refetch()}
       unitSystem={unitSystem}
+      picker={picker}
     />
   );
 }
@@ -76,10 +89,12 @@ export function EditorBody({
   detail,
   refetch,
   unitSystem,
+  picker,
 }: {
   detail: CalculationDetail;
   refetch: () => void;
   unitSystem: UnitSystem;
+  picker?: InputsPicker;
 }) {
   const { message } = App.useApp();
   const { id, kind, latest } = detail;
@@ -88,6 +103,8 @@ export function EditorBody({
   const schema = useInputSchema(kind);
   const live = useLiveEvaluation(kind, draft.inputs, schema, unitSystem);
   const guard = useUnsavedChangesGuard(draft.dirty);
+  // A continued calculation: a newer source version taken into the form, recorded on save.
+  const link = useSourceVersion({ detail, inputs: draft.inputs, setInputs: draft.setInputs });
   const save = useSaveWithConflict({
     id,
     schema,
@@ -95,8 +112,10 @@ export function EditorBody({
     onSaved: (version) => {
       draft.takeSaved(version.inputs);
       draft.setNote('');
+      link.clear();
     },
   });
+  const sourceVersion = link.taken?.number;
   const editable = detail.permissions.edit;
   const heldBack =
     unreadable.length > 0 ? `Results wait for: ${describeUnreadable(unreadable)}` : undefined;
@@ -106,7 +125,12 @@ export function EditorBody({
 
   return (
     <>
-      <CalculationEditorHeader detail={detail} serverDiffers={serverDiffers} />
+      <CalculationEditorHeader
+        detail={detail}
+        serverDiffers={serverDiffers}
+        actions={<ContinueButtons detail={detail} dirty={draft.dirty} />}
+      />
+      <LinkedPanel detail={detail} schema={schema} link={link} />
       <Row gutter={[16, 16]}>
         <Col xs={24} lg={8}>
           <CalculationInputsSection
@@ -119,6 +143,7 @@ export function EditorBody({
             editable={editable}
             dirty={draft.dirty}
             unreadableRegistry={unreadableRegistry}
+            picker={picker}
             onMeteredEnergy={
               editable && kindCapabilities(kind).meterImport
                 ? (energyJ) => {
@@ -135,9 +160,15 @@ export function EditorBody({
               latestVersion={detail.latestVersion}
               note={draft.note}
               onNoteChange={draft.setNote}
-              canSave={draft.dirty && live.result !== undefined && unreadable.length === 0}
+              canSave={
+                (draft.dirty || sourceVersion !== undefined) &&
+                live.result !== undefined &&
+                unreadable.length === 0
+              }
               saving={save.saving}
-              onSave={() => save.saveVersion(detail.latestVersion, draft.inputs, draft.note)}
+              onSave={() =>
+                save.saveVersion(detail.latestVersion, draft.inputs, draft.note, sourceVersion)
+              }
               canSubmit={detail.permissions.submit && !draft.dirty}
             />
           </CalculationInputsSection>
@@ -169,7 +200,7 @@ export function EditorBody({
           save.closeConflict();
           refetch();
         }}
-        onKeepMine={() => save.keepMine(draft.note)}
+        onKeepMine={() => save.keepMine(draft.note, sourceVersion)}
       />
       <LeaveWithoutSavingDialog open={guard.asking} onLeave={guard.leave} onStay={guard.stay} />
     </>

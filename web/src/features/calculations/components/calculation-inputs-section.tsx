@@ -2,8 +2,12 @@ import { Alert, Button, Form, Typography } from 'antd';
 import type { UnitSystem } from '@loftwright/buoyancy';
 import { type ContextType, type ReactNode, useState } from 'react';
 import { UnreadableFieldsContext } from '@/components/reading/unreadable-fields';
+import { takesWindProfile, WindImportButton } from '../wind/wind-import-button';
 import { MeterImport } from './meter-import';
 import { SchemaField } from './schema-form';
+
+/** Something composed in by the route that fills inputs for the person (a library envelope). */
+export type InputsPicker = (value: unknown, onChange: (value: unknown) => void) => ReactNode;
 
 const checkBeforeSaving = (count: number) =>
   `Check before saving: ${count === 1 ? 'one value lies' : `${count} values lie`} outside what is usually met.`;
@@ -24,6 +28,7 @@ export function CalculationInputsSection({
   dirty,
   unreadableRegistry,
   onMeteredEnergy,
+  picker,
   children,
 }: {
   schema: Record<string, unknown>;
@@ -37,6 +42,8 @@ export function CalculationInputsSection({
   unreadableRegistry: ContextType<typeof UnreadableFieldsContext>;
   /** Takes an energy from a meter log; absent when the kind takes none or the reader may not edit. */
   onMeteredEnergy?: (energyJ: number) => void;
+  /** Fills inputs from elsewhere; shown only to those who may edit, values stay in the form. */
+  picker?: InputsPicker;
   children: ReactNode;
 }) {
   const [meterOpen, setMeterOpen] = useState(false);
@@ -44,6 +51,7 @@ export function CalculationInputsSection({
   return (
     <section aria-label="Inputs">
       <Typography.Title level={4}>Inputs</Typography.Title>
+      {editable && picker ? picker(value, onChange) : null}
       <Form layout="vertical" component="div" requiredMark={false}>
         <UnreadableFieldsContext.Provider value={unreadableRegistry}>
           <SchemaField
@@ -59,6 +67,9 @@ export function CalculationInputsSection({
           />
         </UnreadableFieldsContext.Provider>
       </Form>
+      {editable && takesWindProfile(schema) ? (
+        <WindImportButton value={value} onChange={onChange} unitSystem={unitSystem} />
+      ) : null}
       {onMeteredEnergy ? (
         <Button style={{ marginBottom: 12 }} onClick={() => setMeterOpen(true)}>
           Energy from a meter log (CSV)

@@ -3,6 +3,8 @@ import type { CalculationResult, UnitSystem } from '@loftwright/buoyancy';
 import { lazy, Suspense } from 'react';
 import { PanelBoundary } from '@/components/errors/panel-boundary';
 import { ResultsPanel } from '@/components/results/results-panel';
+import { LandingAreaSection } from '../landing/landing-area-section';
+import { useKindLandingArea } from '../landing/use-landing-area';
 
 // The charting library is most of the editor's weight: the inputs and results come first, the
 // pictures a moment later.
@@ -30,6 +32,8 @@ export function CalculationResultsColumn({
   /** Why no results are shown though they may be computed: fields that do not read. */
   heldBack: string | undefined;
 }) {
+  // Estimated when asked, in a worker; drawn on the drift track once it is for these inputs.
+  const landing = useKindLandingArea(kind, evaluatedInputs, unitSystem);
   return (
     <>
       <ResultsPanel
@@ -46,9 +50,13 @@ export function CalculationResultsColumn({
               inputs={evaluatedInputs as Record<string, unknown>}
               result={result}
               unitSystem={unitSystem}
+              landingArea={landing.area}
             />
           </Suspense>
         </PanelBoundary>
+      ) : null}
+      {landing.offered && result ? (
+        <LandingAreaSection landing={landing} inputs={evaluatedInputs} />
       ) : null}
     </>
   );

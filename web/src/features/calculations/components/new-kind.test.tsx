@@ -115,6 +115,7 @@ describe('a calculation kind added to the engine alone', () => {
       charts: [],
       predictsFillLift: false,
       meterImport: false,
+      landingArea: false,
     });
   });
 });

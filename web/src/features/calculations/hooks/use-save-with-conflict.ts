@@ -27,9 +27,15 @@ export function useSaveWithConflict({
   const save = useSaveVersion(id);
   const [conflict, setConflict] = useState<SaveConflict | null>(null);
 
-  const saveVersion = (baseVersion: number, inputs: unknown, note: string) =>
+  /** `sourceVersion`: a continued calculation's source version taken into these inputs. */
+  const saveVersion = (
+    baseVersion: number,
+    inputs: unknown,
+    note: string,
+    sourceVersion?: number,
+  ) =>
     save.mutate(
-      { baseVersion, inputs, note },
+      { baseVersion, inputs, note, ...(sourceVersion === undefined ? {} : { sourceVersion }) },
       {
         onSuccess: (version) => {
           onSaved(version);
@@ -61,8 +67,8 @@ export function useSaveWithConflict({
     /** The newer version and the inputs this browser tried to save on the older one. */
     conflict,
     /** Saves the inputs that met the conflict on top of the newer version. */
-    keepMine: (note: string) => {
-      if (conflict) saveVersion(conflict.latest.number, conflict.mine, note);
+    keepMine: (note: string, sourceVersion?: number) => {
+      if (conflict) saveVersion(conflict.latest.number, conflict.mine, note, sourceVersion);
     },
     closeConflict: () => setConflict(null),
   };

@@ -1,4 +1,4 @@
-import type { AddReadingsBody, FillLog, FillLogBody } from '@loftwright/contract';
+import type { AddReadingsBody, Envelope, FillLog, FillLogBody } from '@loftwright/contract';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiClient } from '@/lib/api-client';
 
@@ -13,6 +13,13 @@ export const GAS_SOURCES = [
 ] as const satisfies readonly { value: FillLogBody['gasSource']; label: string }[];
 
 const listKey = (calculationId: string) => ['fill-logs', calculationId];
+
+/** The team's library envelopes a fill log can name. */
+export const useEnvelopeChoices = () =>
+  useQuery({
+    queryKey: ['envelopes'],
+    queryFn: async () => (await apiClient.get<Envelope[]>('/envelopes')).data,
+  });
 
 export const useFillLogs = (calculationId: string) =>
   useQuery({

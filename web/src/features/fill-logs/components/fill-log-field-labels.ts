@@ -13,6 +13,7 @@ const FILL_LOG_FIELDS: Record<string, InputFieldInfo> = {
   filledAt: { label: 'Filled at' },
   place: { label: 'Place' },
   envelopeLabel: { label: 'Envelope' },
+  envelopeId: { label: 'Library envelope' },
   gasSource: { label: 'Gas source' },
   note: { label: 'Note' },
 };

@@ -1,5 +1,6 @@
 import { Form, Input, Select, Space } from 'antd';
 import { GAS_SOURCES } from '../api/fill-logs-api';
+import { FillLogEnvelopeSelect } from './fill-log-envelope-select';
 import type { FillLogFields } from '../hooks/use-fill-log-fields';
 
 /** When and where the fill was, which envelope, and where its gas came from. */
@@ -37,6 +38,7 @@ export function FillLogWhereFields({
           maxLength={200}
         />
       </Form.Item>
+      <FillLogEnvelopeSelect fields={fields} />
       <Form.Item label="Gas source">
         <Select
           aria-label="Gas source"

@@ -52,6 +52,8 @@ export function useFillLogFields(version: FillLogVersion) {
   const [filledAt, setFilledAt] = useState(localNow);
   const [place, setPlace] = useState('');
   const [envelopeLabel, setEnvelopeLabel] = useState('');
+  /** The library envelope filled, if the person names one. */
+  const [envelopeId, setEnvelopeId] = useState<string | undefined>();
   const [gasSource, setGasSource] = useState<FillLogBody['gasSource']>('cylinder');
   const [temperatureK, setTemperatureK] = useState<number | undefined>(air.temperatureK);
   const [pressurePa, setPressurePa] = useState<number | undefined>(air.pressurePa);
@@ -85,6 +87,8 @@ export function useFillLogFields(version: FillLogVersion) {
     setPlace,
     envelopeLabel,
     setEnvelopeLabel,
+    envelopeId,
+    setEnvelopeId,
     gasSource,
     setGasSource,
     temperatureK,
@@ -148,6 +152,7 @@ export function fillLogDraftOf(fields: FillLogFields): FillLogBody | undefined {
     filledAt: new Date(fields.filledAt).toISOString(),
     place: fields.place,
     envelopeLabel: fields.envelopeLabel,
+    ...(fields.envelopeId ? { envelopeId: fields.envelopeId } : {}),
     gasSource: fields.gasSource,
     ambient: {
       temperatureK: numbers.temperatureK,
