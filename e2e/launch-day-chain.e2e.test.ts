@@ -95,6 +95,9 @@ describe('a balloon team goes from payload to landing area to fill card without 
     // The site is new information for the flight; the winds come from a file.
     await page.getByRole('textbox', { name: /^Latitude/ }).fill('47.5');
     await page.getByRole('textbox', { name: /^Longitude/ }).fill('8.6');
+    const canopy = page.getByRole('textbox', { name: /^Canopy area/ });
+    await canopy.fill('1.1 m²');
+    await canopy.press('Tab');
     await page.getByRole('button', { name: 'Winds from a file (CSV or text)' }).click();
     const dialog = page.getByRole('dialog');
     await dialog.getByLabel('Wind file').setInputFiles({
@@ -102,6 +105,11 @@ describe('a balloon team goes from payload to landing area to fill card without 
       mimeType: 'text/plain',
       buffer: Buffer.from(WIND_FILE),
     });
+    await dialog.getByRole('combobox', { name: 'Temperature column' }).click();
+    await page.locator('.ant-select-item-option[title="4: temp_c"]').click();
+    await expect
+      .poll(() => dialog.getByText(/replace the standard atmosphere/).count())
+      .toBeGreaterThan(0);
     await dialog.getByRole('button', { name: 'Use these 6 levels' }).click();
     await expect.poll(() => dialog.isVisible()).toBe(false);
     await expect
@@ -149,5 +157,6 @@ describe('a balloon team goes from payload to landing area to fill card without 
     const packages = rules.latest?.inputs.packages as { massKg: number }[];
     expect(packages.map((item) => item.massKg)).toEqual([flightInputs.payloadMassKg]);
     expect(consoleErrors).toEqual([]);
-  });
+    // A long walk through five pages, sized for a busy two-core machine.
+  }, 240_000);
 });

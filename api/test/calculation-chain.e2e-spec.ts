@@ -58,7 +58,7 @@ describe('the design chain: sizing → flight profile → rules check', () => {
         kind: 'envelope-sizing',
         versionNumber: 1,
         newestVersionNumber: 1,
-        needs: ['envelope.burstDiameterM'],
+        needs: ['envelope.burstDiameterM', 'parachute.areaM2'],
       },
       continuations: [],
     });
@@ -99,6 +99,7 @@ describe('the design chain: sizing → flight profile → rules check', () => {
       ...flight.latest.inputs,
       payloadMassKg: 1.2,
       envelope: { ...flight.latest.inputs.envelope, burstDiameterM: 5.5 },
+      parachute: { areaM2: 1.1 },
     };
     const taken = await http()
       .post(`/api/calculations/${flight.id}/versions`)
@@ -106,7 +107,7 @@ describe('the design chain: sizing → flight profile → rules check', () => {
       .send({ baseVersion: 1, inputs, sourceVersion: 2 });
     expect(taken.status).toBe(201);
     const current = await detail(designer, flight.id);
-    // The burst diameter was given, so nothing is left to fill.
+    // The burst diameter and the canopy were given, so nothing is left to fill.
     expect(current.source).toMatchObject({ versionNumber: 2, newestVersionNumber: 2, needs: [] });
   });
 
@@ -177,7 +178,7 @@ describe('the design chain: sizing → flight profile → rules check', () => {
       kind: 'envelope-sizing',
       versionNumber: 1,
       newestVersionNumber: null,
-      needs: ['envelope.burstDiameterM'],
+      needs: ['envelope.burstDiameterM', 'parachute.areaM2'],
     });
     // The colleague's flight is private to them: the sizing's owner does not see it listed.
     expect(madePrivate.body.continuations).toEqual([]);

@@ -43,7 +43,7 @@ describe('continuations', () => {
 });
 
 describe('sizing → flight profile', () => {
-  it('launches a sphere given by its mass at the sized diameter, with the burst diameter still to fill', () => {
+  it('launches a sphere given by its mass at the sized diameter, with the burst diameter and the parachute still to fill', () => {
     const sizing = evaluate('envelope-sizing', stretchingSizing);
     const continued = continueSizing(stretchingSizing);
     const envelope = continued.inputs.envelope as { kind: string; launchDiameterM: number };
@@ -51,7 +51,7 @@ describe('sizing → flight profile', () => {
     expect(envelope.launchDiameterM).toBe(sizing.outputs.size?.value);
     expect(continued.inputs.envelopeMassKg).toBe(sizing.outputs.envelopeMass?.value);
     expect(continued.inputs.payloadMassKg).toBe(0.9);
-    expect(continued.needs).toEqual(['envelope.burstDiameterM']);
+    expect(continued.needs).toEqual(['envelope.burstDiameterM', 'parachute.areaM2']);
     expect(continued.filled).toContain('envelope.launchDiameterM');
     const flight = evaluate('flight-profile', continued.inputs);
     // Archimedes' principle, as both kinds apply it to the same dry standard air and pure helium

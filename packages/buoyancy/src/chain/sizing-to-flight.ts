@@ -34,12 +34,19 @@ function envelopePart(sizing: EnvelopeSizingValues, sizeM: number): Part {
     };
   }
   const burstDiameterM = exampleValue('flight-profile', 'envelope.burstDiameterM') as number;
+  // A stretching envelope bursts, and only a parachute brings the payload down to a landing
+  // point; the sizing knows nothing of the team's canopy.
+  const parachuteAreaM2 = exampleValue('flight-profile', 'parachute.areaM2') as number;
   return {
-    inputs: { envelope: { kind: 'extensible', launchDiameterM: sizeM, burstDiameterM } },
+    inputs: {
+      envelope: { kind: 'extensible', launchDiameterM: sizeM, burstDiameterM },
+      parachute: { areaM2: parachuteAreaM2 },
+    },
     filled: ['envelope.kind', 'envelope.launchDiameterM'],
-    needs: ['envelope.burstDiameterM'],
+    needs: ['envelope.burstDiameterM', 'parachute.areaM2'],
     notes: [
       'A sphere given by its mass continues as a stretching (latex) envelope launched at the sized diameter. Its burst diameter is the maker’s figure: replace the example value.',
+      'After burst the payload comes down under a parachute: replace the example canopy area with your parachute’s.',
     ],
   };
 }

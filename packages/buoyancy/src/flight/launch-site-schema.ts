@@ -1,20 +1,10 @@
 import * as z from 'zod';
+import { quantity } from '../schema/quantity-schema.js';
 import { LAUNCH_LATITUDE_RANGE_DEG } from './drift.js';
 
-/**
- * An angle in degrees with its range. There is no angle among the engine's dimensions, so it
- * carries its unit '°' without one, as the wind profile's direction does; forms show a plain
- * number with the range.
- */
+/** An angle in degrees with its range: typed with decimals, read as degrees when bare. */
 export function angleDeg(min: number, max: number, description: string) {
-  return z
-    .number({ error: 'must be a number' })
-    .refine((value) => value >= min && value <= max, {
-      message: `must be between ${min} and ${max} °`,
-      params: { min, max, unit: '°' },
-      abort: true,
-    })
-    .meta({ unit: '°', minimum: min, maximum: max, description });
+  return quantity('angle', min, max, description);
 }
 
 /** Latitude of the launch site (optional; needed with longitude for a ground track on a map). */

@@ -21,6 +21,8 @@ export const DIMENSIONS = {
   fraction: { si: '', mathjs: '' },
   /** A plain ratio or coefficient (drag coefficient, length over diameter), never a percentage. */
   coefficient: { si: '', mathjs: '' },
+  /** A plane angle in degrees (latitude, longitude, a wind's direction): decimals, never a count. */
+  angle: { si: '°', mathjs: 'deg' },
 } as const;
 
 export type Dimension = keyof typeof DIMENSIONS;
@@ -71,6 +73,7 @@ export const DISPLAY_UNITS: Record<
   force: { si: [{ unit: 'N' }], us: [{ unit: 'lbf' }] },
   fraction: { si: [{ unit: '%' }], us: [{ unit: '%' }] },
   coefficient: { si: [{ unit: '' }], us: [{ unit: '' }] },
+  angle: { si: [{ unit: 'deg' }], us: [{ unit: 'deg' }] },
 };
 
 /**

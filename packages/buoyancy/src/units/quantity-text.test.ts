@@ -28,6 +28,16 @@ describe('parseQuantity', () => {
     expect(Math.abs(parseQuantity(text, dimension) / expected - 1)).toBeLessThan(1e-9);
   });
 
+  it('reads an angle in degrees with decimals, with or without its sign, and radians too', () => {
+    expect(parseQuantity('47.5', 'angle')).toBeCloseTo(47.5, 12);
+    expect(parseQuantity('47.5°', 'angle')).toBeCloseTo(47.5, 12);
+    expect(parseQuantity('-8.25 °', 'angle')).toBeCloseTo(-8.25, 12);
+    // 1 rad = 180/π degrees (BIPM SI Brochure, 9th ed., Table 4: 1° = (π/180) rad).
+    expect(parseQuantity('1 rad', 'angle')).toBeCloseTo(180 / Math.PI, 10);
+    expect(() => parseQuantity('47 m', 'angle')).toThrow(InputError);
+    expect(formatQuantity(47.5, 'angle', 'si').text).toBe('47.50°');
+  });
+
   it('reads a bare number in the field’s default unit', () => {
     expect(parseQuantity('163', 'length', { defaultUnit: 'cm' })).toBeCloseTo(1.63, 12);
     expect(parseQuantity('1,5', 'length')).toBe(1.5);

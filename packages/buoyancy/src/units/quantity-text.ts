@@ -22,6 +22,7 @@ const TEMPERATURE_STEP_K: Record<string, number> = {
 };
 
 const SYMBOLS: Record<string, string> = {
+  deg: '°',
   degC: '°C',
   degF: '°F',
   degR: '°F',
@@ -37,15 +38,19 @@ const SYMBOLS: Record<string, string> = {
 
 /** Unit symbols people type, as mathjs names them: "°C" -> "degC", "m³" -> "m^3", "µm" -> "um". */
 function normaliseUnit(text: string): string {
-  return text
-    .replace(/℃/g, 'degC')
-    .replace(/℉/g, 'degF')
-    .replace(/°\s*([CFR])\b/g, 'deg$1')
-    .replace(/²/g, '^2')
-    .replace(/³/g, '^3')
-    .replace(/[µμ]/g, 'u')
-    .replace(/\s*\/\s*/g, '/')
-    .replace(/\s+/g, ' ');
+  return (
+    text
+      .replace(/℃/g, 'degC')
+      .replace(/℉/g, 'degF')
+      .replace(/°\s*([CFR])\b/g, 'deg$1')
+      // A degree sign on its own is a plane angle (47.5°).
+      .replace(/°/g, 'deg')
+      .replace(/²/g, '^2')
+      .replace(/³/g, '^3')
+      .replace(/[µμ]/g, 'u')
+      .replace(/\s*\/\s*/g, '/')
+      .replace(/\s+/g, ' ')
+  );
 }
 
 export interface QuantityReadOptions {
@@ -224,7 +229,15 @@ export function formatQuantity(
     value,
     unit,
     unitName,
-    text: unit === '' ? number : unit === '%' ? `${number} %` : `${number} ${unit}`,
+    // The degree of plane angle follows its number without a space (BIPM SI Brochure, 5.4.3).
+    text:
+      unit === ''
+        ? number
+        : unit === '%'
+          ? `${number} %`
+          : unit === '°'
+            ? `${number}°`
+            : `${number} ${unit}`,
   };
 }
 

@@ -22,16 +22,7 @@ export const WIND_LAYER_COUNT_RANGE = { min: 2, max: 5000 } as const;
 
 /** A direction in degrees clockwise from true north, 0 to 360 (both mean north). */
 function directionDeg(description: string) {
-  const min = 0;
-  const max = 360;
-  return z
-    .number({ error: 'must be a number' })
-    .refine((value) => value >= min && value <= max, {
-      message: `must be between ${min} and ${max} °`,
-      params: { min, max, unit: '°' },
-      abort: true,
-    })
-    .meta({ unit: '°', minimum: min, maximum: max, description });
+  return quantity('angle', 0, 360, description);
 }
 
 /**
