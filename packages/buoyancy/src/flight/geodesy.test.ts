@@ -1,7 +1,7 @@
 import { Geodesic } from 'geographiclib-geodesic';
 import { describe, expect, it } from 'vitest';
 import { ComputationError, InputError } from '../errors.js';
-import { wgs84Inverse, wgs84RadiiOfCurvature } from './geodesy.js';
+import { stepOnEllipsoid, wgs84Inverse, wgs84RadiiOfCurvature } from './geodesy.js';
 
 // Reference library throughout: geographiclib-geodesic (C. F. F. Karney, "Algorithms for
 // geodesics", J. Geodesy 87 (2013) 43–55), Geodesic.WGS84.
@@ -24,6 +24,40 @@ describe('WGS 84 radii of curvature', () => {
       ).toBeLessThan(1e-7);
     },
   );
+});
+
+describe('a step from metres east and north to a new latitude and longitude', () => {
+  // The direct problem on short legs: 10 km covered in 100 m steps, each step's east and north
+  // parts taken from the reference geodesic's own azimuth at the step's middle (GeographicLib
+  // Line.Position; the middle, as the step itself works at its mid latitude), must end within
+  // 0.1 m of where GeographicLib Direct puts the 10 km point.
+  it.each([
+    [0, 45],
+    [30, 90],
+    [52.2, 200],
+    [-45, 315],
+    [70, 60],
+    [85, 135],
+  ])('follows GeographicLib Direct within 0.1 m over 10 km at %s° heading %s°', (lat, azi) => {
+    const legM = 10_000;
+    const stepM = 100;
+    const line = WGS84.Line(lat, 10, azi);
+    const position = new Float64Array([lat, 10]);
+    for (let travelledM = 0; travelledM < legM; travelledM += stepM) {
+      const azimuthDeg = line.Position(travelledM + stepM / 2).azi2 ?? NaN;
+      const azimuth = (azimuthDeg * Math.PI) / 180;
+      stepOnEllipsoid(position, stepM * Math.sin(azimuth), stepM * Math.cos(azimuth));
+    }
+    const reference = WGS84.Direct(lat, 10, azi, legM);
+    const missM =
+      WGS84.Inverse(
+        position[0] as number,
+        position[1] as number,
+        reference.lat2 ?? NaN,
+        reference.lon2 ?? NaN,
+      ).s12 ?? NaN;
+    expect(missM).toBeLessThan(0.1);
+  });
 });
 
 describe('ellipsoidal inverse (Vincenty 1975)', () => {
