@@ -97,6 +97,45 @@ export const DEMO_CALCULATIONS: readonly DemoCalculation[] = [
   },
   {
     owner: 'designer',
+    title: 'Curlew pod: launch-day drift',
+    kind: 'flight-profile',
+    visibility: 'team',
+    tags: ['curlew', 'spring-campaign', 'launch-day'],
+    versions: [
+      {
+        // An invented morning: a light westerly veering into a jet near 10 km, temperatures
+        // a little cooler than the standard, the team's field inland of the marsh.
+        note: 'Morning forecast winds from the inland field; parachute 0.9 m², 0.2 kg of the burst envelope stays on the line',
+        inputs: {
+          envelope: { kind: 'extensible', launchDiameterM: 1.55, burstDiameterM: 5.8 },
+          envelopeMassKg: 0.5,
+          payloadMassKg: 0.62,
+          gas: { gasId: 'helium' },
+          launch: {
+            altitudeM: 4,
+            latitudeDeg: 52.6214,
+            longitudeDeg: -1.1862,
+            time: '2027-04-17T07:30:00+01:00',
+          },
+          parachute: { areaM2: 0.9, envelopeRemnantMassKg: 0.2 },
+          wind: {
+            layers: [
+              { heightM: 4, directionDeg: 250, speedMS: 3, temperatureK: 281.2 },
+              { heightM: 1500, directionDeg: 260, speedMS: 9, temperatureK: 273.4 },
+              { heightM: 5000, directionDeg: 265, speedMS: 18, temperatureK: 250.6 },
+              { heightM: 10000, directionDeg: 275, speedMS: 42, temperatureK: 220.1 },
+              { heightM: 12000, directionDeg: 272, speedMS: 30, temperatureK: 215.2 },
+              { heightM: 20000, directionDeg: 255, speedMS: 8, temperatureK: 216.0 },
+              { heightM: 28000, directionDeg: 95, speedMS: 6, temperatureK: 224.5 },
+            ],
+          },
+        },
+      },
+    ],
+    stage: 'draft',
+  },
+  {
+    owner: 'designer',
     title: 'Shore anemometer, tethered capsule: lift check',
     kind: 'lift-check',
     visibility: 'private',

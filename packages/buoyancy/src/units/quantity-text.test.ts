@@ -35,7 +35,9 @@ describe('parseQuantity', () => {
     // 1 rad = 180/π degrees (BIPM SI Brochure, 9th ed., Table 4: 1° = (π/180) rad).
     expect(parseQuantity('1 rad', 'angle')).toBeCloseTo(180 / Math.PI, 10);
     expect(() => parseQuantity('47 m', 'angle')).toThrow(InputError);
-    expect(formatQuantity(47.5, 'angle', 'si').text).toBe('47.50°');
+    // A place to five decimals of a degree, about a metre on the ground.
+    expect(formatQuantity(47.5, 'angle', 'si').text).toBe('47.50000°');
+    expect(formatQuantity(-178.123456, 'angle', 'us').text).toBe('−178.12346°');
   });
 
   it('reads a bare number in the field’s default unit', () => {

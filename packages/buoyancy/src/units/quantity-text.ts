@@ -216,7 +216,7 @@ export function formatQuantity(
     trimZeros?: boolean;
   } = {},
 ): FormattedQuantity {
-  const digits = options.significantDigits ?? 4;
+  const digits = options.significantDigits ?? defaultDigits(valueSI, dimension);
   const unitName = options.unit ?? pickUnit(valueSI, dimension, unitSystem);
   const value = convertFromSI(valueSI, dimension, unitName);
   const unit = SYMBOLS[unitName] ?? unitName;
@@ -239,6 +239,16 @@ export function formatQuantity(
             ? `${number}°`
             : `${number} ${unit}`,
   };
+}
+
+/**
+ * Four significant digits, except for an angle: a latitude or longitude to five decimals of a
+ * degree (about a metre on the ground), which four digits (47.49°, over a kilometre) would lose.
+ */
+function defaultDigits(valueSI: number, dimension: Dimension): number {
+  if (dimension !== 'angle') return 4;
+  const wholeDigits = Math.max(1, Math.floor(Math.log10(Math.abs(valueSI) || 1)) + 1);
+  return wholeDigits + 5;
 }
 
 function pickUnit(valueSI: number, dimension: Dimension, unitSystem: UnitSystem): string {

@@ -18,6 +18,7 @@ const DIMENSION_OF_UNIT: Record<string, Dimension> = {
   'm/s': 'velocity',
   s: 'time',
   W: 'power',
+  '°': 'angle',
 };
 
 /** How a reader wants numbers shown: their unit system and number format. */
