@@ -164,6 +164,24 @@ describe('the design chain: sizing → flight profile → rules check', () => {
     expect(response.body.message).toMatch(/Envelope sizing does not continue into a Balloon rules/);
   });
 
+  it('reports a source that cannot make the next kind on toKind, the one field the request has', async () => {
+    const created = await http()
+      .post('/api/calculations')
+      .set(designer.auth)
+      .send({
+        title: 'Heated pod',
+        kind: 'envelope-sizing',
+        inputs: { ...sizingInputs(), gas: { gasId: 'hot-air', superheatK: 80 } },
+      });
+    expect(created.status).toBe(201);
+    const response = await continueAs(designer, created.body.id, 1, 'flight-profile');
+    expect(response.status).toBe(422);
+    expect(response.body.field).toBe('toKind');
+    expect(response.body.message).toMatch(
+      /version 1 cannot continue as a Flight profile: its gas\.gasId/,
+    );
+  });
+
   it('shows a source the reader may not open without its name, and hides private continuations', async () => {
     const sizing = await createSizing(designer, 'team');
     const flight = (await continueAs(colleague, sizing.id, 1, 'flight-profile')).body;

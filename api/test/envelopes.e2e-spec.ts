@@ -206,6 +206,42 @@ describe('the envelope library', () => {
     expect((await http().get(`/api/envelopes/${envelopeId}`).set(designer.auth)).status).toBe(404);
   });
 
+  it('counts for each reader only the fills of calculations they may open, yet keeps a filled envelope', async () => {
+    const created = await http()
+      .post('/api/envelopes')
+      .set(designer.auth)
+      .send(practice({ name: 'Privately filled sphere' }));
+    const envelopeId = created.body.id as string;
+    const own = await http().post('/api/calculations').set(designer.auth).send({
+      title: 'Private trial',
+      kind: 'lift-check',
+      inputs: liftCheckInputs(),
+      visibility: 'private',
+    });
+    const logged = await http()
+      .post(`/api/calculations/${own.body.id}/versions/1/fill-logs`)
+      .set(designer.auth)
+      .send({
+        filledAt: '2026-11-29T10:00:00Z',
+        envelopeId,
+        gasSource: 'cylinder',
+        ambient: AMBIENT,
+        readings: [{ kind: 'ballast', timeS: 0, ballastMassKg: 0.5, scaleReadingKg: 0.3 }],
+      });
+    expect(logged.status).toBe(201);
+    const colleague = await createUser(testApp.app, ['designer'], 'colleague');
+    const seenByOwner = await http().get(`/api/envelopes/${envelopeId}`).set(designer.auth);
+    const seenByColleague = await http().get(`/api/envelopes/${envelopeId}`).set(colleague.auth);
+    expect(seenByOwner.body).toMatchObject({
+      fillCount: 1,
+      history: [{ fillLogId: logged.body.id }],
+    });
+    // The colleague may not open the private calculation, so learns nothing of its fill ...
+    expect(seenByColleague.body).toMatchObject({ fillCount: 0, history: [] });
+    // ... yet may not remove an envelope whose history someone else keeps.
+    expect(seenByColleague.body.permissions).toEqual({ edit: true, remove: false });
+  });
+
   it('refuses a fill log naming an envelope the library does not hold, naming the field', async () => {
     const response = await http()
       .post(`/api/calculations/${calculationId}/versions/1/fill-logs`)

@@ -117,6 +117,9 @@ describe('the fill card of a saved version', () => {
   it.each([
     [{}, 'fillerMassKg'],
     [{ fillerMassKg: 'heavy' }, 'fillerMassKg'],
+    // Number('0x0') is 0 and Number('0b1') is 1: such literals are refused, not reread.
+    [{ fillerMassKg: '0x0' }, 'fillerMassKg'],
+    [{ fillerMassKg: '0.1', freeLiftKg: '0b1' }, 'freeLiftKg'],
     [{ fillerMassKg: '5' }, 'fillerMassKg'],
     [{ fillerMassKg: '0.1', freeLiftKg: '-2' }, 'freeLiftKg'],
     [{ fillerMassKg: '0.1', cylinderWaterVolumeM3: '0.05' }, 'cylinderFillPressurePa'],

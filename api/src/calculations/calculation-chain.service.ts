@@ -1,7 +1,7 @@
 import type { CalculationDetail } from '@loftwright/contract';
 import { ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { continueInputs, type ContinuationDraft, KINDS } from '@loftwright/buoyancy';
+import { continueInputs, type ContinuationDraft, InputError, KINDS } from '@loftwright/buoyancy';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
@@ -57,8 +57,10 @@ export class CalculationChainService {
     }
     const source = await this.calculations.findReadable(user, id);
     const version = await this.calculations.findVersion(id, number);
-    const draft = continueInputs(source.kind, dto.toKind, version.inputs, version.outputs);
-    const content = computeVersionContent(dto.toKind, draft.inputs);
+    const { draft, content } = asContinuation(dto.toKind, number, () => {
+      const made = continueInputs(source.kind, dto.toKind, version.inputs, version.outputs);
+      return { draft: made, content: computeVersionContent(dto.toKind, made.inputs) };
+    });
     const newId = randomUUID();
     await this.writeLock.transaction((manager) =>
       this.write(manager, user, newId, {
@@ -125,4 +127,26 @@ function versionNote({ source, versionNumber, draft }: Continued): string {
       ? ` Still to fill (they hold the kind’s example values): ${draft.needs.join(', ')}.`
       : '';
   return `Continued from “${source.title}”, version ${versionNumber}.${needs}`.slice(0, 2000);
+}
+
+/**
+ * The request names only `toKind`: a refusal of the inputs the continuation would make (from the
+ * saved source, not from anything sent) is reported on `toKind`, saying which input and why.
+ */
+function asContinuation<T>(toKind: string, number: number, work: () => T): T {
+  try {
+    return work();
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    const issue = error.issues[0];
+    if (!issue || issue.field === 'toKind' || error.issues.every((i) => i.field === 'toKind')) {
+      throw error;
+    }
+    const title = KINDS.find((kind) => kind.id === toKind)?.title ?? toKind;
+    throw new InputError(
+      'toKind',
+      toKind,
+      `version ${number} cannot continue as a ${title}: its ${issue.field} ${issue.reason}`,
+    );
+  }
 }

@@ -5,7 +5,10 @@ import type { Envelope } from './envelope.entity';
 
 export function envelopeView(
   envelope: Envelope,
+  /** Fills of calculations the reader may open. */
   fillCount: number,
+  /** The reader may remove it: a manager, and no fill log at all names it. */
+  mayRemove: boolean,
   mayManage: boolean,
 ): EnvelopeView {
   return {
@@ -20,7 +23,7 @@ export function envelopeView(
     notes: envelope.notes,
     version: envelope.version,
     fillCount,
-    permissions: { edit: mayManage, remove: mayManage && fillCount === 0 },
+    permissions: { edit: mayManage, remove: mayRemove },
     createdAt: envelope.createdAt.toISOString(),
     updatedAt: envelope.updatedAt.toISOString(),
   };

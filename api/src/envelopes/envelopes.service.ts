@@ -12,7 +12,7 @@ import {
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import { In, IsNull, Not, Repository } from 'typeorm';
+import { type EntityManager, In, IsNull, Not, Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service';
 import { type AuthUser, hasRole } from '../auth/auth-user';
 import { canRead } from '../calculations/calculation-access';
@@ -97,23 +97,45 @@ export class EnvelopesService {
     if (issues.length > 0) throw fieldIssuesException(issues);
   }
 
-  /** How many fill logs name each envelope (all of them, seen by the reader or not). */
-  private async fillCounts(ids: readonly string[]): Promise<Map<string, number>> {
-    if (ids.length === 0) return new Map();
-    const rows = await this.logs
-      .createQueryBuilder('log')
-      .select('log.envelope_id', 'envelopeId')
-      .addSelect('COUNT(*)', 'count')
-      .where({ envelopeId: In([...ids]) })
-      .groupBy('log.envelope_id')
-      .getRawMany<{ envelopeId: string; count: number }>();
-    return new Map(rows.map((row) => [row.envelopeId, Number(row.count)]));
+  /**
+   * How many fill logs name each envelope: all of them (an envelope with fills stays in the
+   * library) and those of calculations the reader may open (what the reader is told).
+   */
+  private async fillCounts(
+    user: AuthUser,
+    ids: readonly string[],
+  ): Promise<Map<string, { all: number; readable: number }>> {
+    const counts = new Map<string, { all: number; readable: number }>();
+    if (ids.length === 0) return counts;
+    const logs = await this.logs.find({
+      select: { id: true, envelopeId: true, calculationId: true },
+      where: { envelopeId: In([...ids]) },
+    });
+    const calculations = await this.calculations.findBy({
+      id: In([...new Set(logs.map((log) => log.calculationId))]),
+    });
+    const readable = new Set(
+      calculations.filter((calculation) => canRead(user, calculation)).map(({ id }) => id),
+    );
+    for (const log of logs) {
+      const count = counts.get(log.envelopeId as string) ?? { all: 0, readable: 0 };
+      count.all += 1;
+      if (readable.has(log.calculationId)) count.readable += 1;
+      counts.set(log.envelopeId as string, count);
+    }
+    return counts;
   }
 
   private async views(user: AuthUser, rows: Envelope[]): Promise<EnvelopeAnswer[]> {
-    const counts = await this.fillCounts(rows.map((row) => row.id));
+    const counts = await this.fillCounts(
+      user,
+      rows.map((row) => row.id),
+    );
     const mayManage = hasRole(user, ...ENVELOPE_MANAGER_ROLES);
-    return rows.map((row) => envelopeView(row, counts.get(row.id) ?? 0, mayManage));
+    return rows.map((row) => {
+      const count = counts.get(row.id) ?? { all: 0, readable: 0 };
+      return envelopeView(row, count.readable, mayManage && count.all === 0, mayManage);
+    });
   }
 
   private async find(id: string): Promise<Envelope> {
@@ -123,8 +145,13 @@ export class EnvelopesService {
   }
 
   /** A fill log may name this envelope: it exists (the team's library is one for everyone). */
-  async requireExists(id: string, field = 'envelopeId'): Promise<void> {
-    if (!(await this.envelopes.existsBy({ id }))) {
+  /**
+   * Refuses a link to an envelope not in the library. Pass the write's transaction, so a removal
+   * cannot slip in between the check and the insert (the foreign key would then fail as a 500).
+   */
+  async requireExists(id: string, manager?: EntityManager, field = 'envelopeId'): Promise<void> {
+    const repository = manager ? manager.getRepository(Envelope) : this.envelopes;
+    if (!(await repository.existsBy({ id }))) {
       throw new UnprocessableEntityException({
         message: 'Envelope: no such envelope in the library.',
         field,

@@ -9,15 +9,22 @@ const QUERY_NAMES: Record<string, keyof FillCardQueryDto> = {
   'cylinder.fillPressurePa': 'cylinderFillPressurePa',
   'cylinder.temperatureK': 'cylinderTemperatureK',
   'cylinder.count': 'cylinderCount',
-  cylinder: 'cylinderWaterVolumeM3',
 };
+
+/**
+ * A plain decimal, as a person or a form writes it ("0.15", "-2", "1.2e3"). `Number` would also
+ * take "0x10" or "0b1" and read them as 16 and 1 without a word.
+ */
+const PLAIN_DECIMAL = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
 
 /** A query value as a number: absent stays absent, text that is not a number is refused. */
 function numberOf(query: FillCardQueryDto, name: keyof FillCardQueryDto): number | undefined {
   const text = query[name]?.trim();
   if (text === undefined || text === '') return undefined;
-  const value = Number(text);
-  if (!Number.isFinite(value)) throw new InputError(name, text, 'must be a number');
+  const value = PLAIN_DECIMAL.test(text) ? Number(text) : NaN;
+  if (!Number.isFinite(value)) {
+    throw new InputError(name, text, 'must be a plain decimal number in SI units, such as 0.15');
+  }
   return value;
 }
 

@@ -84,10 +84,10 @@ export class FillLogsService {
   ): Promise<FillLogView> {
     const calculation = await this.calculations.findReadable(user, calculationId);
     this.requireEditor(user, calculation);
-    if (dto.envelopeId) await this.envelopes.requireExists(dto.envelopeId);
     const reduced = await this.reduce(calculation, versionNumber, dto);
     const id = randomUUID();
     await this.writeLock.transaction(async (manager) => {
+      if (dto.envelopeId) await this.envelopes.requireExists(dto.envelopeId, manager);
       await insertRow(manager.getRepository(FillLog), {
         id,
         calculationId,
@@ -146,7 +146,6 @@ export class FillLogsService {
   async update(user: AuthUser, id: string, dto: UpdateFillLogDto): Promise<FillLogView> {
     const { log, calculation } = await this.findReadable(user, id);
     this.requireEditor(user, calculation);
-    if (dto.envelopeId) await this.envelopes.requireExists(dto.envelopeId);
     const next = {
       filledAt: dto.filledAt ?? log.filledAt,
       place: dto.place ?? log.place,
@@ -161,6 +160,7 @@ export class FillLogsService {
     };
     const reduced = await this.reduce(calculation, log.versionNumber, next);
     await this.writeLock.transaction(async (manager) => {
+      if (dto.envelopeId) await this.envelopes.requireExists(dto.envelopeId, manager);
       await manager.getRepository(FillLog).update({ id }, { ...next, ...reduced } as never);
       await this.audit.record(
         {

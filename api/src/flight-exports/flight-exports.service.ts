@@ -8,8 +8,10 @@ import {
   flightKml,
   flightProfileTable,
   KINDS,
+  type LandingArea,
   landingArea,
   evaluate,
+  ENGINE_VERSION,
 } from '@loftwright/buoyancy';
 import type { FlightExportFile, VersionLandingArea } from '@loftwright/contract';
 import { FLIGHT_EXPORT_MEDIA_TYPES } from '@loftwright/contract';
@@ -32,7 +34,12 @@ interface SavedFlight {
   title: string;
   versionNumber: number;
   inputs: FlightProfileInput;
+  /** The version's content fingerprint: the same inputs give the same landing area. */
+  fingerprint: string;
 }
+
+/** Landing areas kept, newest last: each costs up to a second of processor time to redo. */
+const LANDING_AREA_CACHE_SIZE = 32;
 
 /** A 422 that names the input by its label in the message and by its path in `field`. */
 function refuse(field: string, fieldLabel: string, reason: string): UnprocessableEntityException {
@@ -45,6 +52,12 @@ function refuse(field: string, fieldLabel: string, reason: string): Unprocessabl
  */
 @Injectable()
 export class FlightExportsService {
+  /**
+   * Landing areas by version fingerprint and engine version. A repeat download of the same
+   * version reuses it; every instance would compute the same area, so nothing here needs sharing.
+   */
+  private readonly landingAreas = new Map<string, LandingArea>();
+
   constructor(private readonly calculations: CalculationsService) {}
 
   async download(
@@ -69,7 +82,25 @@ export class FlightExportsService {
   ): Promise<VersionLandingArea> {
     const flight = await this.savedFlight(user, id, versionNumber);
     this.requireDrift(flight.inputs);
-    return landingArea(flight.inputs);
+    return this.cachedLandingArea(flight);
+  }
+
+  private cachedLandingArea(flight: SavedFlight): LandingArea {
+    const key = `${flight.fingerprint}:${ENGINE_VERSION}`;
+    const cached = this.landingAreas.get(key);
+    if (cached) {
+      // Refresh its place, so the least recently used one leaves first.
+      this.landingAreas.delete(key);
+      this.landingAreas.set(key, cached);
+      return cached;
+    }
+    const area = landingArea(flight.inputs);
+    this.landingAreas.set(key, area);
+    if (this.landingAreas.size > LANDING_AREA_CACHE_SIZE) {
+      const oldest = this.landingAreas.keys().next().value;
+      if (oldest !== undefined) this.landingAreas.delete(oldest);
+    }
+    return area;
   }
 
   /** The version if the user may read it (404 otherwise) and it is a flight profile (422). */
@@ -90,6 +121,7 @@ export class FlightExportsService {
       title: calculation.title,
       versionNumber,
       inputs: version.inputs as FlightProfileInput,
+      fingerprint: version.fingerprint,
     };
   }
 
@@ -118,7 +150,7 @@ export class FlightExportsService {
       title: flight.title,
       drift,
       // A flight that does not come down (float, no parachute) has no landing to spread.
-      ...(drift.landed ? { landingArea: landingArea(flight.inputs) } : {}),
+      ...(drift.landed ? { landingArea: this.cachedLandingArea(flight) } : {}),
       ...(flight.inputs.launch.time ? { launchTime: flight.inputs.launch.time } : {}),
     };
     if (file === 'track.geojson') return flightGeoJsonText(geography);
