@@ -6,6 +6,7 @@ import { AuditModule } from './audit/audit.module';
 import { AuthModule } from './auth/auth.module';
 import { CalculationsModule } from './calculations/calculations.module';
 import { ClassroomsModule } from './classrooms/classrooms.module';
+import { ClientConfigModule } from './client-config/client-config.module';
 import { EnvironmentVariables, validateEnvironment } from './config/env.validation';
 import { PersistenceModule } from './persistence/persistence.module';
 import { buildDataSourceOptions } from './database/database.options';
@@ -47,6 +48,7 @@ import { WorkedExamplesModule } from './worked-examples/worked-examples.module';
     EvaluateModule,
     FlightExportsModule,
     HealthModule,
+    ClientConfigModule,
     SeedModule,
   ],
 })

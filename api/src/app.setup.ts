@@ -9,10 +9,18 @@ import helmet from 'helmet';
 import { API_PREFIX } from './app.constants';
 import { API_VERSION } from './config/app-info';
 import type { EnvironmentVariables } from './config/env.validation';
+import { tileOrigin } from './client-config/map-tile-env';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { MAX_JSON_BODY, refuseDeepJson } from './common/json-depth';
 import { createValidationPipe } from './common/pipes/api-validation.pipe';
 import { DEFAULT_WEB_DIST_DIR, serveWebApp } from './web/serve-web-app';
+
+/** The tile server's origin when MAP_TILE_URL is set (validated at start), else nothing. */
+function mapTileOrigins(config: ConfigService<EnvironmentVariables, true>): string[] {
+  const template = config.get('MAP_TILE_URL', { infer: true });
+  const origin = template ? tileOrigin(template) : undefined;
+  return origin ? [origin] : [];
+}
 
 /**
  * Everything main.ts and the API tests share, so the tests run the app as it ships: prefix,
@@ -41,10 +49,11 @@ export function configureApp(app: NestExpressApplication): void {
       contentSecurityPolicy: {
         directives: {
           'upgrade-insecure-requests': null,
-          // antd writes its styles at run time; fonts and images are bundled, never fetched.
+          // antd writes its styles at run time; fonts and images are bundled, never fetched, but
+          // for a configured base map's tiles, allowed from exactly that tile server.
           'style-src': ["'self'", "'unsafe-inline'"],
           'font-src': ["'self'", 'data:'],
-          'img-src': ["'self'", 'data:', 'blob:'],
+          'img-src': ["'self'", 'data:', 'blob:', ...mapTileOrigins(config)],
         },
       },
     }),

@@ -3,13 +3,12 @@ import { Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { resolve } from 'node:path';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { AppModule } from './app.module';
 import { configureApp } from './app.setup';
 import type { EnvironmentVariables } from './config/env.validation';
-import { DATABASE_FILE_NAME } from './database/database.options';
+import { describeDatabase } from './database/database.options';
 
 async function bootstrap(): Promise<void> {
   const app = await NestFactory.create<NestExpressApplication>(AppModule);
@@ -25,7 +24,7 @@ async function bootstrap(): Promise<void> {
   await app.listen(config.get('PORT', { infer: true }), host);
   const { port } = app.getHttpServer().address() as AddressInfo;
   const shownHost = host === '0.0.0.0' || host === '127.0.0.1' ? 'localhost' : host;
-  const databaseFile = resolve(config.get('DATA_DIR', { infer: true }), DATABASE_FILE_NAME);
+  const databaseFile = describeDatabase(config.get('DATA_DIR', { infer: true }));
   const logger = new Logger('Loftwright');
   logger.log(`Listening on http://${shownHost}:${port} (API under /api)`);
   logger.log(`Database: ${databaseFile}`);

@@ -1,11 +1,12 @@
 import { createHash } from 'node:crypto';
-import { existsSync, readdirSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { UploadStore } from '../src/attachments/upload-store';
-import { createTestApp, type TestApp } from './support/create-test-app';
+import type { TestApp } from './support/create-test-app';
 import { liftCheckInputs } from './support/fixtures';
+import { OBJECT_STORE, type ObjectStore } from '../src/storage/object-store';
+import { createStorageTestApp, STORAGES, type StoredObjects } from './support/storages';
 import { createUser, type TestUser } from './support/users';
 
 // A 1×1 PNG (the smallest valid image: signature, IHDR, IDAT, IEND).
@@ -25,8 +26,10 @@ const ZIP = Buffer.concat([
 const EXE = Buffer.concat([Buffer.from('MZ'), Buffer.alloc(62, 0), Buffer.from('PE\0\0')]);
 const sha = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
-describe('attachments', () => {
+// The same cases on the local folder and on S3 (a local fake server).
+describe.each(STORAGES)('attachments, stored in the $name', (storage) => {
   let testApp: TestApp;
+  let stored: StoredObjects;
   let owner: TestUser;
   let otherDesigner: TestUser;
   let reviewer: TestUser;
@@ -40,7 +43,8 @@ describe('attachments', () => {
       .attach('file', bytes, { filename: name, contentType: type });
 
   beforeAll(async () => {
-    testApp = await createTestApp();
+    testApp = await createStorageTestApp(storage);
+    stored = storage.objects(testApp.dataDir);
     owner = await createUser(testApp.app, ['designer'], 'owner');
     otherDesigner = await createUser(testApp.app, ['designer'], 'other');
     reviewer = await createUser(testApp.app, ['reviewer'], 'reviewer');
@@ -57,6 +61,7 @@ describe('attachments', () => {
 
   afterAll(async () => {
     await testApp.close();
+    await storage.stop();
   });
 
   it('stores a photo by its content hash, keeping only the name of a path-like file name', async () => {
@@ -70,10 +75,9 @@ describe('attachments', () => {
       sha256: sha(PNG),
       uploadedBy: { id: owner.id },
     });
-    const stored = join(testApp.dataDir, 'uploads', sha(PNG).slice(0, 2), sha(PNG));
-    expect(readFileSync(stored).equals(PNG)).toBe(true);
-    // Nothing landed anywhere else: only the fan-out folder beside the data.
-    expect(readdirSync(join(testApp.dataDir, 'uploads'))).toEqual([sha(PNG).slice(0, 2)]);
+    expect(await stored.hashes()).toEqual([sha(PNG)]);
+    // Nothing landed anywhere else: only the fan-out folder (or key prefix) of its hash.
+    expect(await stored.topLevel()).toEqual([sha(PNG).slice(0, 2)]);
     expect(existsSync(join(testApp.dataDir, '..', 'etc'))).toBe(false);
   });
 
@@ -187,7 +191,7 @@ describe('attachments', () => {
     const CSV = Buffer.from('time_s,scale_kg\n0,0.300\n86400,0.322\n');
     const first = await upload(owner, CSV, 'day1.csv');
     const second = await upload(owner, CSV, 'day1-again.csv');
-    const stored = join(testApp.dataDir, 'uploads', sha(CSV).slice(0, 2), sha(CSV));
+    const isStored = async () => (await stored.hashes()).includes(sha(CSV));
     expect(first.body.sha256).toBe(second.body.sha256);
 
     // Only the uploader or an admin removes a file.
@@ -206,7 +210,7 @@ describe('attachments', () => {
     expect(
       (await request(server()).delete(`/api/attachments/${first.body.id}`).set(owner.auth)).status,
     ).toBe(204);
-    expect(existsSync(stored)).toBe(before > 1);
+    expect(await isStored()).toBe(before > 1);
     expect(await csvRecords()).toBe(before - 1);
     for (const item of (
       await request(server()).get(`/api/calculations/${calculationId}/attachments`).set(owner.auth)
@@ -214,7 +218,7 @@ describe('attachments', () => {
       const removed = await request(server()).delete(`/api/attachments/${item.id}`).set(admin.auth);
       expect(removed.status).toBe(204);
     }
-    expect(existsSync(stored)).toBe(false);
+    expect(await isStored()).toBe(false);
     expect((await request(server()).get(first.body.contentUrl).set(owner.auth)).status).toBe(404);
   });
 
@@ -246,9 +250,9 @@ describe('attachments', () => {
       expect([400, 404]).toContain(response.status);
       expect(response.headers['content-type']).toMatch(/application\/json/);
     }
-    const store = testApp.app.get(UploadStore);
-    expect(() => store.pathFor('../../loftwright.sqlite')).toThrow(/SHA-256/);
-    expect(() => store.pathFor(`${'a'.repeat(63)}/`)).toThrow(/SHA-256/);
+    const store = testApp.app.get<ObjectStore>(OBJECT_STORE);
+    await expect(store.get('../../loftwright.sqlite')).rejects.toThrow(/SHA-256/);
+    await expect(store.get(`${'a'.repeat(63)}/`)).rejects.toThrow(/SHA-256/);
   });
 
   it('records uploads and removals in the audit trail', async () => {

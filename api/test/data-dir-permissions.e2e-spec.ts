@@ -30,7 +30,7 @@ describe('the data folder is private to the server’s account, whatever the uma
     await testApp.close();
   });
 
-  it('makes the folder 0700 and the database, its journal files, the key and uploads 0600', async () => {
+  it('makes the folder 0700 and the database, its journal files and uploads 0600', async () => {
     const owner = await createUser(testApp.app, ['designer'], 'owner');
     const server = testApp.app.getHttpServer();
     const created = await request(server).post('/api/calculations').set(owner.auth).send({
@@ -50,7 +50,8 @@ describe('the data folder is private to the server’s account, whatever the uma
     const entries = modes(testApp.dataDir);
     const names = entries.map((entry) => entry.path.slice(testApp.dataDir.length + 1));
     expect(names).toEqual(
-      expect.arrayContaining(['loftwright.sqlite', 'loftwright.sqlite-wal', 'jwt-secret']),
+      // The generated signing key is in the database now, shared by every instance.
+      expect.arrayContaining(['loftwright.sqlite', 'loftwright.sqlite-wal']),
     );
     expect(names.some((name) => name.startsWith('uploads/'))).toBe(true);
     const loose = entries.filter((entry) => entry.mode !== (entry.isDirectory ? 0o700 : 0o600));

@@ -1,4 +1,4 @@
-import { statSync, readFileSync } from 'node:fs';
+import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -22,10 +22,19 @@ describe('security defaults', () => {
     expect(preflight.headers['access-control-allow-origin']).toBeUndefined();
   });
 
-  it('generates the signing key on first start, readable by the owner only, when JWT_SECRET is unset', () => {
-    const file = join(testApp.dataDir, 'jwt-secret');
-    expect(readFileSync(file, 'utf8').trim().length).toBeGreaterThanOrEqual(48);
-    expect(statSync(file).mode & 0o077).toBe(0);
+  it('generates the signing key on first start into the database, not a file, when JWT_SECRET is unset', async () => {
+    // Every API instance on the database signs with this one key (docs/deployment.md).
+    const { DataSource } = await import('typeorm');
+    const rows: { value: string }[] = await testApp.app
+      .get(DataSource)
+      .createQueryBuilder()
+      .select('setting.value', 'value')
+      .from('app_setting', 'setting')
+      .where('setting.key = :key', { key: 'jwt-secret' })
+      .getRawMany();
+    expect(rows).toHaveLength(1);
+    expect(rows[0]?.value.length).toBeGreaterThanOrEqual(48);
+    expect(existsSync(join(testApp.dataDir, 'jwt-secret'))).toBe(false);
   });
 
   it('answers an unexpected failure with a 500 that carries no internals', async () => {

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /**
  * An uploaded file's record. The bytes live under DATA_DIR/uploads, named by their SHA-256, so
@@ -37,6 +38,6 @@ export class Attachment {
   @Column('varchar', { name: 'uploaded_by', length: 36, nullable: true })
   uploadedBy: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 }

@@ -18,6 +18,7 @@ import {
 import { FileInterceptor } from '@nestjs/platform-express';
 import { ApiBearerAuth, ApiBody, ApiConsumes, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
+import { pipeline } from 'node:stream';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../common/decorators/current-user.decorator';
 import { uuidParam } from '../common/pipes/uuid-param.pipe';
@@ -99,8 +100,9 @@ export class AttachmentsController {
       ),
       ETag: `"${attachment.sha256}"`,
     });
-    stream.on('error', () => response.destroy());
-    stream.pipe(response);
+    // Streamed as it arrives (from disk or S3); an error or a client going away mid-file ends
+    // both sides, so the response is cut short rather than left hanging.
+    pipeline(stream, response, () => undefined);
   }
 
   @Delete('attachments/:id')

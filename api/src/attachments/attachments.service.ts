@@ -7,7 +7,7 @@ import {
 } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { randomUUID } from 'node:crypto';
-import type { ReadStream } from 'node:fs';
+import type { Readable } from 'node:stream';
 import { Repository } from 'typeorm';
 import { type AuditRecord, AuditService } from '../audit/audit.service';
 import type { AuthUser } from '../auth/auth-user';
@@ -16,6 +16,7 @@ import { CalculationsService } from '../calculations/calculations.service';
 import { insertRow } from '../persistence/insert-row';
 import { WriteLock } from '../persistence/write-lock';
 import { FillLog } from '../fill-logs/fill-log.entity';
+import { StoredObjectMissing } from '../storage/object-store';
 import { UsersService } from '../users/users.service';
 import { Attachment } from './attachment.entity';
 import { attachmentView, type AttachmentView, canRemoveAttachment } from './attachment-views';
@@ -118,10 +119,12 @@ export class AttachmentsService {
   }
 
   /**
-   * Puts staged bytes under their hash and inserts the record, under the write lock, as one
-   * decision against removals (which delete, count and remove under the same lock). The bytes
-   * were written and synced first, so a crash in between leaves an unreferenced file, never a row
-   * pointing at nothing.
+   * Puts staged bytes in the object store under their hash, then inserts the record under the
+   * write lock, as one decision against removals (which delete, count and remove under the same
+   * lock): a removal of the same content that took the bytes away between the put and this
+   * turn is seen here, and the bytes are put again. The bytes are stored (synced, or acknowledged
+   * by S3) before the record, so a crash in between leaves an unreferenced object, never a row
+   * pointing at nothing. The put itself, a network upload with S3, holds no lock.
    */
   private async record(
     user: Pick<AuthUser, 'id'> | null,
@@ -137,8 +140,9 @@ export class AttachmentsService {
   ): Promise<AttachmentView> {
     const { sha256 } = staged;
     const id = randomUUID();
+    await this.store.commit(staged);
     await this.writeLock.transaction(async (manager) => {
-      await this.store.commit(staged);
+      if (!(await this.store.exists(sha256))) await this.store.commit(staged);
       await insertRow(manager.getRepository(Attachment), {
         id,
         calculationId,
@@ -187,15 +191,14 @@ export class AttachmentsService {
     return attachment;
   }
 
-  async content(
-    user: AuthUser,
-    id: string,
-  ): Promise<{ attachment: Attachment; stream: ReadStream }> {
+  async content(user: AuthUser, id: string): Promise<{ attachment: Attachment; stream: Readable }> {
     const attachment = await this.findReadable(user, id);
-    if (!this.store.exists(attachment.sha256)) {
+    try {
+      return { attachment, stream: await this.store.read(attachment.sha256) };
+    } catch (error) {
+      if (!(error instanceof StoredObjectMissing)) throw error;
       throw new NotFoundException({ message: 'The stored file is missing.', field: 'id' });
     }
-    return { attachment, stream: this.store.read(attachment.sha256) };
   }
 
   async remove(user: AuthUser, id: string): Promise<void> {

@@ -1,25 +1,25 @@
 import { createHash, randomUUID } from 'node:crypto';
-import { createReadStream, createWriteStream, existsSync, type ReadStream } from 'node:fs';
-import { open, rename, rm } from 'node:fs/promises';
+import { createReadStream, createWriteStream, type ReadStream } from 'node:fs';
+import { open, rm } from 'node:fs/promises';
 import { type Readable, Transform } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { join, resolve, sep } from 'node:path';
-import { Injectable } from '@nestjs/common';
+import { join } from 'node:path';
+import { Inject, Injectable, Logger, ServiceUnavailableException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { makePrivateDirectory, preparePrivateDataDir } from '../config/data-dir';
+import { makePrivateDirectory } from '../config/data-dir';
 import type { EnvironmentVariables } from '../config/env.validation';
-
-const SHA256_HEX = /^[0-9a-f]{64}$/;
+import { OBJECT_STORE, type ObjectStore, StoredObjectMissing } from '../storage/object-store';
+import { uploadsFolder } from '../storage/uploads-folder';
 
 /** Bytes written and synced to a temporary file, not yet visible under their hash. */
 export interface StagedUpload {
   readonly sha256: string;
   readonly temporaryPath: string;
+  readonly sizeBytes: number;
 }
 
 /** An upload streamed to disk: its hash, size and first bytes (enough to tell its type). */
 export interface StagedStream extends StagedUpload {
-  readonly sizeBytes: number;
   readonly head: Buffer;
 }
 
@@ -27,24 +27,22 @@ export interface StagedStream extends StagedUpload {
 export const HEAD_BYTES = 4100;
 
 /**
- * Files under DATA_DIR/uploads, each named by the SHA-256 of its bytes (two-character fan-out
- * folders keep directories small). A path is only ever built from a checked hash, so no name
- * from a client can reach the file system.
+ * Uploads on their way in and out. Every upload is first staged in DATA_DIR/uploads (streamed to
+ * a temporary file, hashed on the way, synced); `commit` then puts it in the object store (that
+ * same folder, or S3) under the SHA-256 of its bytes. Stored files are only ever named by a
+ * checked hash, so no name from a client reaches the file system or a bucket key.
  */
 @Injectable()
 export class UploadStore {
+  /** Folder of staged files (and of stored ones when no bucket is set). */
   readonly root: string;
+  private readonly logger = new Logger('UploadStore');
 
-  constructor(config: ConfigService<EnvironmentVariables, true>) {
-    this.root = resolve(preparePrivateDataDir(config.get('DATA_DIR', { infer: true })), 'uploads');
-  }
-
-  pathFor(sha256: string): string {
-    if (!SHA256_HEX.test(sha256)) throw new Error(`Not a SHA-256 hex digest: ${sha256}`);
-    const path = resolve(this.root, sha256.slice(0, 2), sha256);
-    // Belt and braces: the checked hash cannot leave the folder, and this says so.
-    if (!path.startsWith(this.root + sep)) throw new Error('Upload path escapes its folder');
-    return path;
+  constructor(
+    config: ConfigService<EnvironmentVariables, true>,
+    @Inject(OBJECT_STORE) private readonly objects: ObjectStore,
+  ) {
+    this.root = uploadsFolder(config);
   }
 
   /**
@@ -66,7 +64,7 @@ export class UploadStore {
       throw error;
     }
     await handle.close();
-    return { sha256, temporaryPath };
+    return { sha256, temporaryPath, sizeBytes: bytes.length };
   }
 
   /**
@@ -120,10 +118,17 @@ export class UploadStore {
     return createReadStream(staged.temporaryPath);
   }
 
-  /** Puts a staged file under its hash; a file already there has the same bytes and is replaced. */
+  /**
+   * Stores a staged file under its hash unless the store has it already (same hash, same bytes).
+   * The staged file stays until `discard`, so a commit can be repeated.
+   */
   async commit(staged: StagedUpload): Promise<void> {
-    makePrivateDirectory(join(this.root, staged.sha256.slice(0, 2)));
-    await rename(staged.temporaryPath, this.pathFor(staged.sha256));
+    await this.reach(() =>
+      this.objects.put(staged.sha256, {
+        path: staged.temporaryPath,
+        sizeBytes: staged.sizeBytes,
+      }),
+    );
   }
 
   /** Drops a staged file that will not be committed. */
@@ -131,15 +136,40 @@ export class UploadStore {
     await rm(staged.temporaryPath, { force: true });
   }
 
-  read(sha256: string): ReadStream {
-    return createReadStream(this.pathFor(sha256));
+  /** The stored bytes as a stream; rejects with StoredObjectMissing when they are gone. */
+  read(sha256: string): Promise<Readable> {
+    return this.reach(() => this.objects.get(sha256));
   }
 
-  exists(sha256: string): boolean {
-    return existsSync(this.pathFor(sha256));
+  exists(sha256: string): Promise<boolean> {
+    return this.reach(() => this.objects.exists(sha256));
   }
 
+  /**
+   * Removes stored bytes whose last record is already gone. If the store cannot be reached the
+   * bytes stay behind, unreferenced, as after a crash; the removal the user asked for is done.
+   */
   async remove(sha256: string): Promise<void> {
-    await rm(this.pathFor(sha256), { force: true });
+    try {
+      await this.objects.delete(sha256);
+    } catch (error) {
+      this.logger.warn(`Could not delete stored object ${sha256}: ${String(error)}`);
+    }
+  }
+
+  /**
+   * A store that cannot be reached (S3 down, refused, misconfigured) answers 503, not 500: the
+   * request was fine and may succeed later. A missing object is passed on as such.
+   */
+  private async reach<T>(action: () => Promise<T>): Promise<T> {
+    try {
+      return await action();
+    } catch (error) {
+      if (error instanceof StoredObjectMissing) throw error;
+      this.logger.error(`The file store failed: ${String(error)}`);
+      throw new ServiceUnavailableException({
+        message: 'The file store cannot be reached just now; nothing was changed. Try again later.',
+      });
+    }
   }
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /** Who did what to which thing, and when. Rows are only ever inserted. */
 @Entity('audit_entry')
@@ -23,6 +24,6 @@ export class AuditEntry {
   detail: Record<string, unknown> | null;
 
   @Index()
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /** A single-use, expiring password reset. Only the SHA-256 of the mailed token is stored. */
 @Entity('password_reset_token')
@@ -12,12 +13,12 @@ export class PasswordResetToken {
   @Column('varchar', { name: 'token_hash', unique: true })
   tokenHash: string;
 
-  @Column('datetime', { name: 'expires_at' })
+  @Column(DATETIME, { name: 'expires_at' })
   expiresAt: Date;
 
-  @Column('datetime', { name: 'used_at', nullable: true })
+  @Column(DATETIME, { name: 'used_at', nullable: true })
   usedAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 }

@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
 import type { NumberFormat } from '../users/preferences';
+import { DATETIME } from '../database/column-types';
 
 /**
  * A registration waiting for its owner to open the mailed link. The account is created only then,
@@ -29,9 +30,9 @@ export class PendingRegistration {
   @Column('varchar', { name: 'token_hash', unique: true })
   tokenHash: string;
 
-  @Column('datetime', { name: 'expires_at' })
+  @Column(DATETIME, { name: 'expires_at' })
   expiresAt: Date;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 }

@@ -1,6 +1,7 @@
 import type { CalculationResult } from '@loftwright/buoyancy';
 import type { VersionStatus } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 export { VERSION_STATUSES, type VersionStatus } from '@loftwright/contract';
 
@@ -56,9 +57,9 @@ export class CalculationVersion {
   @Column('varchar', { name: 'reviewer_id', length: 36, nullable: true })
   reviewerId: string | null;
 
-  @Column('datetime', { name: 'submitted_at', nullable: true })
+  @Column(DATETIME, { name: 'submitted_at', nullable: true })
   submittedAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 }

@@ -1,5 +1,6 @@
 import type { VersionStatus, Visibility } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 export { VISIBILITIES, type Visibility } from '@loftwright/contract';
 
@@ -47,12 +48,12 @@ export class Calculation {
   @Column('simple-json', { name: 'source_needs', nullable: true })
   sourceNeeds: string[] | null;
 
-  @Column('datetime', { name: 'archived_at', nullable: true })
+  @Column(DATETIME, { name: 'archived_at', nullable: true })
   archivedAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  @UpdateDateColumn({ name: 'updated_at', type: DATETIME })
   updatedAt: Date;
 }

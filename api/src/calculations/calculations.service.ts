@@ -31,6 +31,7 @@ import type { SaveVersionDto } from './dto/save-version.dto';
 import type { UpdateCalculationDto } from './dto/update-calculation.dto';
 import { computeVersionContent } from './version-content';
 import { diffInputs, diffOutputs } from '@loftwright/buoyancy';
+import { containsIgnoringCase, jsonArrayContains } from '../database/sql-dialect';
 
 const SORT_COLUMNS: Record<string, string> = {
   updatedAt: 'calculation.updated_at',
@@ -121,7 +122,7 @@ export class CalculationsService {
       builder.andWhere('calculation.archived_at IS NULL');
       const visible = ['calculation.owner_id = :me', `calculation.visibility = 'published'`];
       if (hasRole(user, ...TEAM_ROLES)) visible.push(`calculation.visibility = 'team'`);
-      if (hasRole(user, 'reviewer')) visible.push('calculation.ever_submitted = 1');
+      if (hasRole(user, 'reviewer')) visible.push('calculation.ever_submitted = TRUE');
       builder.andWhere(`(${visible.join(' OR ')})`, { me: user.id });
     }
     if (query.kind) builder.andWhere('calculation.kind = :kind', { kind: query.kind });
@@ -132,16 +133,13 @@ export class CalculationsService {
         owner: query.owner === 'me' ? user.id : query.owner,
       });
     if (query.tag) {
-      builder.andWhere(
-        'EXISTS (SELECT 1 FROM json_each(calculation.tags) WHERE json_each.value = :tag)',
-        { tag: query.tag },
-      );
+      builder.andWhere(jsonArrayContains('calculation.tags', 'tag'), { tag: query.tag });
     }
     if (query.q) {
       const words = query.q.trim().split(/\s+/).filter(Boolean).slice(0, 8);
       words.forEach((word, index) => {
         builder.andWhere(
-          `(calculation.title LIKE :q${index} ESCAPE '\\' OR calculation.tags LIKE :q${index} ESCAPE '\\')`,
+          `(${containsIgnoringCase('calculation.title', `q${index}`)} OR ${containsIgnoringCase('calculation.tags', `q${index}`)})`,
           {
             [`q${index}`]: `%${word.replace(/[\\%_]/g, (c) => `\\${c}`)}%`,
           },

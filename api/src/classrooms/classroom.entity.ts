@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /** A class a teacher runs: students join it with a code and see what is published to it. */
 @Entity('classroom')
@@ -17,13 +18,13 @@ export class Classroom {
   joinCode: string;
 
   /** After this moment the code no longer admits anyone; a new code can be issued. */
-  @Column('datetime', { name: 'join_code_expires_at' })
+  @Column(DATETIME, { name: 'join_code_expires_at' })
   joinCodeExpiresAt: Date;
 
   /** A closed class admits no one and takes no submissions; its students can still read it. */
-  @Column('datetime', { name: 'closed_at', nullable: true })
+  @Column(DATETIME, { name: 'closed_at', nullable: true })
   closedAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 }

@@ -8,7 +8,8 @@ export type RateLimitBucket = 'sign-in' | 'register' | 'class-join' | 'evaluate'
 
 /**
  * Counts requests to this route per client address in the bucket's window and answers 429 past
- * its limit. Each route keeps its own count.
+ * its limit. Each route keeps its own count, in the database (auth/database-throttler-storage.ts),
+ * so every API instance behind a load balancer adds to the same count.
  */
 export const RateLimited = (bucket: RateLimitBucket): ReturnType<typeof applyDecorators> =>
   applyDecorators(SetMetadata(RATE_LIMIT_BUCKET, bucket), UseGuards(ThrottlerGuard));

@@ -33,6 +33,12 @@ import { ReviewComments1764752400000 } from './migrations/1764752400000-review-c
 import { CalculationLinks1764759600000 } from './migrations/1764759600000-calculation-links';
 import { EnvelopeLibrary1764756000000 } from './migrations/1764756000000-envelope-library';
 import { Envelope } from '../envelopes/envelope.entity';
+import { AppSetting } from '../auth/app-setting.entity';
+import { RateLimitWindow } from '../auth/rate-limit-window.entity';
+import { SharedInstanceState1764763200000 } from './migrations/1764763200000-shared-instance-state';
+
+import { DATABASE_KIND, databaseKindOf } from './database-kind';
+import { migrationsFor } from './migration-sets';
 
 export const DATABASE_FILE_NAME = 'loftwright.sqlite';
 
@@ -55,6 +61,8 @@ export const ENTITIES = [
   WorkedExample,
   ExerciseSubmission,
   Envelope,
+  AppSetting,
+  RateLimitWindow,
 ];
 export const MIGRATIONS = [
   InitSchema1764633600000,
@@ -71,22 +79,33 @@ export const MIGRATIONS = [
   ReviewComments1764752400000,
   EnvelopeLibrary1764756000000,
   CalculationLinks1764759600000,
+  SharedInstanceState1764763200000,
 ];
 
 /**
- * TypeORM options for the SQLite file under `dataDir`. Schema changes come only from migrations,
- * which run on start; `synchronize` stays off so a model change can never silently alter a
- * team's stored calculations.
+ * TypeORM options for the SQLite file under `dataDir`, or for the PostgreSQL database
+ * DATABASE_URL names. Schema changes come only from migrations, which run on start;
+ * `synchronize` stays off so a model change can never silently alter a team's stored
+ * calculations.
  */
-export function buildDataSourceOptions(dataDir: string): DataSourceOptions {
+export function buildDataSourceOptions(
+  dataDir: string,
+  databaseUrl: string | undefined = process.env.DATABASE_URL,
+): DataSourceOptions {
   const directory = preparePrivateDataDir(dataDir);
+  const kind = databaseKindOf(databaseUrl);
+  // Entities took their column types from the environment when they were loaded.
+  if (kind !== DATABASE_KIND) {
+    throw new Error(`DATABASE_URL changed after start: entities were set up for ${DATABASE_KIND}`);
+  }
+  if (kind === 'postgres') return postgresOptions(databaseUrl as string);
   // SQLite gives its -wal and -shm files the database file's permissions.
   createPrivateFile(resolve(directory, DATABASE_FILE_NAME));
   return {
     type: 'better-sqlite3',
     database: resolve(directory, DATABASE_FILE_NAME),
     entities: ENTITIES,
-    migrations: MIGRATIONS,
+    migrations: migrationsFor('sqlite', MIGRATIONS),
     migrationsRun: true,
     synchronize: false,
     // WAL keeps readers going while a save commits; foreign keys are off by default in SQLite.
@@ -99,4 +118,27 @@ export function buildDataSourceOptions(dataDir: string): DataSourceOptions {
       db.pragma('busy_timeout = 5000');
     },
   };
+}
+
+/**
+ * PostgreSQL: its own baseline migration, then the portable ones (migration-sets.ts). Several
+ * API instances may share the database; a save that loses a race to another instance is
+ * refused by the unique (calculation, number) index and answered 409 (database-errors.ts).
+ */
+function postgresOptions(url: string): DataSourceOptions {
+  return {
+    type: 'postgres',
+    url,
+    entities: ENTITIES,
+    migrations: migrationsFor('postgres', MIGRATIONS),
+    migrationsRun: true,
+    synchronize: false,
+  };
+}
+
+/** Where the data is kept, for the start-up log: the SQLite file, or the server without password. */
+export function describeDatabase(dataDir: string, databaseUrl = process.env.DATABASE_URL): string {
+  if (databaseKindOf(databaseUrl) === 'sqlite') return resolve(dataDir, DATABASE_FILE_NAME);
+  const url = new URL(databaseUrl as string);
+  return `PostgreSQL ${url.hostname}:${url.port || '5432'}${url.pathname}`;
 }

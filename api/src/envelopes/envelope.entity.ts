@@ -1,5 +1,6 @@
 import type { LibraryEnvelopeKind } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { DATETIME, DOUBLE } from '../database/column-types';
 
 /** One envelope the team keeps on its shelf, its figures in SI. */
 @Entity('envelope')
@@ -13,18 +14,18 @@ export class Envelope {
   @Column('varchar')
   kind: LibraryEnvelopeKind;
 
-  @Column('real', { name: 'mass_kg' })
+  @Column(DOUBLE, { name: 'mass_kg' })
   massKg: number;
 
   /** Extensible envelopes only [m]. */
-  @Column('real', { name: 'burst_diameter_m', nullable: true })
+  @Column(DOUBLE, { name: 'burst_diameter_m', nullable: true })
   burstDiameterM: number | null;
 
   /** Fixed envelopes only [Pa]. */
-  @Column('real', { name: 'rated_superpressure_pa', nullable: true })
+  @Column(DOUBLE, { name: 'rated_superpressure_pa', nullable: true })
   ratedSuperpressurePa: number | null;
 
-  @Column('real', { name: 'drag_coefficient', nullable: true })
+  @Column(DOUBLE, { name: 'drag_coefficient', nullable: true })
   dragCoefficient: number | null;
 
   @Column('varchar', { default: '' })
@@ -41,9 +42,9 @@ export class Envelope {
   @Column('varchar', { name: 'created_by', length: 36, nullable: true })
   createdBy: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  @UpdateDateColumn({ name: 'updated_at', type: DATETIME })
   updatedAt: Date;
 }

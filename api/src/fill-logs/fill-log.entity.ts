@@ -1,6 +1,7 @@
 import type { CalculationResult, FillAmbient, FillReading } from '@loftwright/buoyancy';
 import type { FillLogPoint, GasSource } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /**
  * A real fill of the envelope a calculation version describes: where and when, the air, the lift
@@ -66,9 +67,9 @@ export class FillLog {
   @Column('varchar', { name: 'engine_version' })
   engineVersion: string;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  @UpdateDateColumn({ name: 'updated_at', type: DATETIME })
   updatedAt: Date;
 }

@@ -158,12 +158,18 @@ export class FlightExportsService {
     return flightGpx(geography);
   }
 
-  /** The profile with place columns when the version has wind and a site, without them else. */
+  /** The profile, with east and north where the version has winds and latitude and longitude where it also has a site. */
   private profileCsv(flight: SavedFlight): string {
     const { inputs } = flight;
-    const drift =
-      inputs.wind && inputs.launch.latitudeDeg !== undefined ? flightDrift(inputs) : null;
-    const table = flightProfileTable(evaluate(FLIGHT_KIND, inputs), drift, inputs.launch.time);
+    // Winds alone give the drift east and north; a launch site also places it on the map.
+    const drift = inputs.wind ? flightDrift(inputs) : null;
+    const hasSite = inputs.launch.latitudeDeg !== undefined;
+    const table = flightProfileTable(
+      evaluate(FLIGHT_KIND, inputs),
+      drift,
+      inputs.launch.time,
+      hasSite,
+    );
     const columns: ExportColumn<readonly (number | string | null)[]>[] = table.columns.map(
       (column, index) => ({ header: column.header, value: (row) => row[index] ?? null }),
     );

@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /** The single row that says when this database was created. */
 @Entity('installation')
@@ -6,6 +7,6 @@ export class Installation {
   @PrimaryColumn()
   id: number;
 
-  @Column({ name: 'created_at', type: 'datetime' })
+  @Column({ name: 'created_at', type: DATETIME })
   createdAt: string;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /** A message the local fake mail server received, kept so an admin can read it. */
 @Entity('outbox_message')
@@ -24,6 +25,6 @@ export class OutboxMessage {
   @Column('varchar', { name: 'message_id', nullable: true })
   messageId: string | null;
 
-  @CreateDateColumn({ name: 'received_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'received_at', type: DATETIME })
   receivedAt: Date;
 }

@@ -1,5 +1,6 @@
 import type { Plan, SavePlanBody } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /**
  * A gas and cost plan for an event or a launch campaign: envelopes times counts, the supply and
@@ -31,9 +32,9 @@ export class GasPlanRecord {
   @Column('varchar', { name: 'engine_version' })
   engineVersion: string;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  @UpdateDateColumn({ name: 'updated_at', type: DATETIME })
   updatedAt: Date;
 }

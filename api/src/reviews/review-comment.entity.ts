@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /** Where a review comment points: one input (by its dotted path) or one result (by its name). */
 export type CommentAnchorKind = 'input' | 'result';
@@ -38,9 +39,9 @@ export class ReviewComment {
   @Column('varchar', { name: 'addressed_by', length: 36, nullable: true })
   addressedBy: string | null;
 
-  @Column('datetime', { name: 'addressed_at', nullable: true })
+  @Column(DATETIME, { name: 'addressed_at', nullable: true })
   addressedAt: Date | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 export type ReviewDecision = 'approved' | 'changes_requested';
 
@@ -30,6 +31,6 @@ export class Review {
   @Column('varchar', { name: 'calculation_title', nullable: true })
   calculationTitle: string | null;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 }

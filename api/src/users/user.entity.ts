@@ -3,6 +3,7 @@ import { accountPermissions } from './account-permissions';
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import type { NumberFormat, UnitSystem } from './preferences';
 import type { Role } from './roles';
+import { DATETIME } from '../database/column-types';
 
 @Entity('user')
 export class User {
@@ -36,10 +37,10 @@ export class User {
   @Column('integer', { name: 'token_version', default: 0 })
   tokenVersion: number;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: DATETIME })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  @UpdateDateColumn({ name: 'updated_at', type: DATETIME })
   updatedAt: Date;
 }
 

@@ -5,6 +5,7 @@ import { In, Repository } from 'typeorm';
 import { type AuditRecord, AuditService } from '../audit/audit.service';
 import { fieldIssuesException } from '../common/errors/field-issues';
 import { WriteLock } from '../persistence/write-lock';
+import { claimFirstAccount } from './first-account-claim';
 import { PasswordHasher } from './password-hasher.service';
 import {
   DEFAULT_CURRENCY,
@@ -16,6 +17,7 @@ import {
 import type { Role } from './roles';
 import { User } from './user.entity';
 import type { NameLookup } from './user-ref';
+import { jsonArrayContains } from '../database/sql-dialect';
 
 export interface NewAccount {
   email: string;
@@ -24,7 +26,7 @@ export interface NewAccount {
   displayName: string;
   /**
    * The account's roles, or how to choose them once it is known whether this is the first
-   * account (decided under the write lock with the insert).
+   * account (decided in the insert's transaction by the database's first-account claim).
    */
   roles: Role[] | ((isFirstAccount: boolean) => Role[]);
   /** As the browser guessed it at registration; the default when not known. */
@@ -70,9 +72,10 @@ export class UsersService {
   }
 
   /**
-   * Creates the account only when the database has none yet, else nothing (null). Decided under
-   * the write lock with the insert, so of registrations racing on an empty database exactly one
-   * is the first.
+   * Creates the account only when the database has had none yet, else nothing (null). Decided by
+   * the first-account claim in the database (first-account-claim.ts) in the insert's transaction,
+   * so of registrations racing on an empty database, on one instance or several, exactly one is
+   * the first.
    */
   createFirstAccount(input: NewAccount): Promise<User | null> {
     return this.insertAccount(input, true);
@@ -102,7 +105,8 @@ export class UsersService {
     });
     return this.writeLock.transaction(async (manager) => {
       const users = manager.getRepository(User);
-      const isFirstAccount = (await users.count()) === 0;
+      // Decided by the database, not this process, so it holds across API instances too.
+      const isFirstAccount = await claimFirstAccount(manager, user.id);
       if (onlyIfFirst && !isFirstAccount) return null;
       // Checked again under the lock: two registrations of one address at once get one account.
       if (await users.findOneBy({ email })) throw taken();
@@ -126,7 +130,7 @@ export class UsersService {
   listByRole(role: Role): Promise<User[]> {
     return this.users
       .createQueryBuilder('user')
-      .where(`EXISTS (SELECT 1 FROM json_each(user.roles) WHERE json_each.value = :role)`, { role })
+      .where(jsonArrayContains('user.roles', 'role'), { role })
       .getMany();
   }
 

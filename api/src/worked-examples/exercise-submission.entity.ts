@@ -1,5 +1,6 @@
 import type { Submission } from '@loftwright/contract';
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn } from 'typeorm';
+import { DATETIME } from '../database/column-types';
 
 /** One attempt by a student at an exercise, with the engine's check of every answer. */
 @Entity('exercise_submission')
@@ -35,6 +36,6 @@ export class ExerciseSubmission {
   @Column('boolean', { name: 'all_correct' })
   allCorrect: boolean;
 
-  @CreateDateColumn({ name: 'submitted_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'submitted_at', type: DATETIME })
   submittedAt: Date;
 }

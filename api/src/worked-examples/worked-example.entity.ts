@@ -13,6 +13,7 @@ export {
   type RevealRule,
   type TryRanges,
 } from '@loftwright/contract';
+import { DATETIME } from '../database/column-types';
 
 /**
  * A calculation version published to a class. The calculation content (inputs, outputs, steps,
@@ -82,9 +83,9 @@ export class WorkedExample {
   @Column('simple-json', { nullable: true })
   exercise: ExerciseSettings | null;
 
-  @CreateDateColumn({ name: 'published_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'published_at', type: DATETIME })
   publishedAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  @UpdateDateColumn({ name: 'updated_at', type: DATETIME })
   updatedAt: Date;
 }

@@ -3,6 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Test } from '@nestjs/testing';
 import type { NestExpressApplication } from '@nestjs/platform-express';
+import { dropTestDatabase, testDatabaseUrl } from './postgres-test-database';
 
 export interface TestApp {
   readonly app: NestExpressApplication;
@@ -36,6 +37,13 @@ export async function createTestApp(
   process.env.CLASS_JOIN_RATE_LIMIT = '1000';
   process.env.EVALUATE_RATE_LIMIT = '100000';
   delete process.env.SMTP_URL;
+  // Local folder storage unless the test asks for a bucket.
+  delete process.env.STORAGE_URL;
+  delete process.env.STORAGE_ENDPOINT;
+  // SQLite in dataDir, or in the api-postgres project a fresh PostgreSQL database of its own.
+  const databaseUrl = await testDatabaseUrl(dataDir);
+  if (databaseUrl) process.env.DATABASE_URL = databaseUrl;
+  else delete process.env.DATABASE_URL;
   for (const [key, value] of Object.entries(options.env ?? {})) process.env[key] = value;
   if (options.webDistDir) process.env.WEB_DIST_DIR = options.webDistDir;
   else delete process.env.WEB_DIST_DIR;
@@ -52,6 +60,7 @@ export async function createTestApp(
     dataDir,
     async close() {
       await app.close();
+      await dropTestDatabase(dataDir);
       rmSync(dataDir, { recursive: true, force: true });
     },
   };

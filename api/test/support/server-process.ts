@@ -2,6 +2,7 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { join } from 'node:path';
+import { testDatabaseUrl } from './postgres-test-database';
 
 export const BUILT_SERVER = join(__dirname, '..', '..', 'dist', 'main.js');
 
@@ -39,17 +40,23 @@ export async function startServerProcess(
   if (!existsSync(BUILT_SERVER))
     throw new Error(`${BUILT_SERVER} is missing: run "npm run build" first (npm test does).`);
   const port = await freePort();
+  // In the api-postgres project the server gets the database kept for this data folder, so a
+  // restart on the same folder finds its data as it would in the SQLite file.
+  const databaseUrl = await testDatabaseUrl(dataDir);
+  const childEnv: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: 'test',
+    PORT: String(port),
+    HOST: '127.0.0.1',
+    DATA_DIR: dataDir,
+    SEED_DEMO: '0',
+    SCRYPT_COST: '10',
+    DATABASE_URL: databaseUrl,
+    ...env,
+  };
+  if (childEnv.DATABASE_URL === undefined) delete childEnv.DATABASE_URL;
   const child = spawn(process.execPath, [BUILT_SERVER], {
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      DATA_DIR: dataDir,
-      SEED_DEMO: '0',
-      SCRYPT_COST: '10',
-      ...env,
-    },
+    env: childEnv,
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   started.add(child);

@@ -2,7 +2,6 @@ import type { NestExpressApplication } from '@nestjs/platform-express';
 import request from 'supertest';
 import { expect } from 'vitest';
 import type { Role } from '../../src/users/roles';
-import { UsersService } from '../../src/users/users.service';
 import { readOutbox } from './outbox';
 
 export interface TestUser {
@@ -23,6 +22,9 @@ export async function createUser(
   counter += 1;
   const email = `${name}-${counter}@test.invalid`;
   const password = `password-${counter}-long`;
+  // Imported here, not at the top: a test that reloads the app's modules (vi.resetModules, to boot
+  // it with other settings) gets the UsersService class the running app was built from.
+  const { UsersService } = await import('../../src/users/users.service');
   const user = await app
     .get(UsersService)
     .create({ email, password, displayName: `Test ${name} ${counter}`, roles });

@@ -17,4 +17,9 @@
 // 0.11.0: a flight profile gives its envelope volume at launch (launchVolume), for gas plans.
 // 0.12.0: a flight profile with winds: the air from the profile's temperatures, the drift to
 // burst and landing, the envelope remnant under the parachute; landing areas.
-export const ENGINE_VERSION = '0.12.0';
+// 0.13.0: a wind profile's temperatures used where given (levels without one filled from their
+// neighbours); launch-air steps name the formula used below, within or above the profile; landing
+// areas refused when fewer than 20 (or half) runs land, widened to 100 m when the scatter has no
+// width, with notes; track and regions cut at the antimeridian in the files; a sizing's sphere
+// given by its mass stretches on the fill card; cylinders emptied to the day's air pressure.
+export const ENGINE_VERSION = '0.13.0';

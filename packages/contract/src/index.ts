@@ -14,3 +14,4 @@ export type * from './evaluate.js';
 export type * from './envelopes.js';
 export * from './flight-exports.js';
 export type * from './fill-cards.js';
+export type * from './client-config.js';

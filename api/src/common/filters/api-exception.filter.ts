@@ -9,6 +9,7 @@ import {
 import { InputError } from '@loftwright/buoyancy';
 import type { Response } from 'express';
 import { MAX_JSON_BODY } from '../json-depth';
+import { databaseConflict } from '../../database/database-errors';
 
 /** Every error body the API sends: status, a message a person can read, and the field at fault. */
 export interface ApiErrorBody {
@@ -116,6 +117,9 @@ export class ApiExceptionFilter implements ExceptionFilter {
       }
       return { statusCode: status, error: HttpStatus[status] ?? 'Error', message: String(raw) };
     }
+    // A write the database refused as a conflict (a lost race, immutable content): 409, not 500.
+    const conflict = databaseConflict(exception);
+    if (conflict) return { ...conflict };
     // Errors raised by Express middleware (body parser: oversize or malformed bodies) carry a status.
     const status = (exception as { status?: unknown; statusCode?: unknown })?.status;
     if (typeof status === 'number' && status >= 400 && status < 500) {

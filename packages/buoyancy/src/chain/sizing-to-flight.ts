@@ -1,10 +1,8 @@
 import { InputError } from '../errors.js';
 import { envelopeAtSize, type EnvelopeSizingValues } from '../kinds/envelope-sizing.kind.js';
 import type { Continuation, ContinuationDraft, SourceOutputs } from './continuation-types.js';
+import { sizingEnvelopeStretches } from './sizing-stretches.js';
 import { exampleValue, requiredOutput } from './source-values.js';
-
-/** Largest launch diameter a flight profile's stretching envelope takes [m] (its input range). */
-const FLIGHT_LAUNCH_DIAMETER_MAX_M = 20;
 
 interface Part {
   readonly inputs: Record<string, unknown>;
@@ -20,11 +18,7 @@ interface Part {
  * diameter; its burst diameter comes from its maker, which the sizing does not know.
  */
 function envelopePart(sizing: EnvelopeSizingValues, sizeM: number): Part {
-  const stretching =
-    sizing.shape.shape === 'sphere' &&
-    sizing.envelopeMass.kind === 'fixed' &&
-    sizeM <= FLIGHT_LAUNCH_DIAMETER_MAX_M;
-  if (!stretching) {
+  if (!sizingEnvelopeStretches(sizing, sizeM)) {
     return {
       inputs: { envelope: { kind: 'fixed', shape: envelopeAtSize(sizing.shape, sizeM) } },
       filled: ['envelope'],

@@ -190,6 +190,43 @@ describe('flight GPX', () => {
   });
 });
 
+describe('landing-area notes and left-out runs in the files', () => {
+  const noted = {
+    ...geography,
+    landingArea: {
+      ...landingArea,
+      runs: Array.from({ length: 37 }, () => landingArea.nominal),
+      failedRuns: 3,
+      notes: [{ code: 'landing-area-widened', severity: 'note' as const, message: 'Widened.' }],
+    },
+  };
+
+  it('GeoJSON: on each region, and in words on the collection, still valid by the schema', () => {
+    const collection = flightGeoJson(noted);
+    const validate = new Ajv({ strict: false }).compile(featureCollectionSchema);
+    expect(validate(collection), JSON.stringify(validate.errors)).toBe(true);
+    const regions = collection.features.filter((f) => f.properties.role === 'landing-area');
+    for (const region of regions) {
+      expect(region.properties.failedRuns).toBe(3);
+      expect(region.properties.noteCodes).toEqual(['landing-area-widened']);
+    }
+    expect(collection.landingArea).toEqual({
+      runs: 40,
+      failedRuns: 3,
+      notes: [{ code: 'landing-area-widened', message: 'Widened.' }],
+    });
+    expect(flightGeoJson(geography).landingArea?.notes).toEqual([]);
+  });
+
+  it('KML: in each region’s description and ExtendedData', () => {
+    const features = kml(parseXml(flightKml(noted))).features as unknown as ParsedFeature[];
+    const region = features.find((feature) => feature.properties.name === '95 % landing area');
+    expect(String(region?.properties.description)).toContain('37 of 40 runs landed; 3 left out.');
+    expect(String(region?.properties.description)).toContain('Widened. [landing-area-widened]');
+    expect(region?.properties.failedRuns).toBe('3');
+  });
+});
+
 describe('export text helpers', () => {
   it('escapes XML and drops characters XML 1.0 cannot hold', () => {
     expect(xmlText(`a<b>&"c'\u0001`)).toBe('a&lt;b&gt;&amp;&quot;c&apos;');

@@ -1,5 +1,6 @@
 import type { DriftPoint, DriftResult } from '../flight/drift.js';
 import type { GroundPoint, LandingArea, LandingRegion } from '../landing/landing-area-types.js';
+import { continuousLongitudesDeg, ringPieces, trackPieces } from './antimeridian.js';
 
 /** What the track exports draw: a flight's drift, its launch time and its landing area. */
 export interface FlightGeography {
@@ -72,23 +73,59 @@ export const TRACK_NAME = 'Flight track';
  * The boundary as [lon, lat] positions at export precision, closed and counter-clockwise seen
  * from above (RFC 7946 section 3.1.6 asks this of exterior rings; KML 2.2 section 10.8 too):
  * the landing area already draws it so, but a ring is checked again after rounding, which can
- * merge points.
+ * merge points. Longitudes are continuous (see `continuousLongitudesDeg`), near the launch's
+ * `referenceDeg`: a region across the antimeridian then runs past ±180 instead of jumping round
+ * the globe, so its turn is read right; `exteriorRingPieces` cuts it for the files.
  */
-export function exteriorRing(boundary: readonly GroundPoint[]): [number, number][] {
+export function exteriorRing(
+  boundary: readonly GroundPoint[],
+  referenceDeg = boundary[0]?.longitudeDeg ?? 0,
+): [number, number][] {
+  const longitudes = continuousLongitudesDeg(
+    boundary.map((point) => point.longitudeDeg),
+    referenceDeg,
+  );
   const ring: [number, number][] = [];
-  for (const point of boundary) {
+  boundary.forEach((point, index) => {
     const position: [number, number] = [
-      rounded(point.longitudeDeg, EXPORT_DIGITS.degrees),
+      rounded(longitudes[index] as number, EXPORT_DIGITS.degrees),
       rounded(point.latitudeDeg, EXPORT_DIGITS.degrees),
     ];
     const previous = ring[ring.length - 1];
     if (!previous || previous[0] !== position[0] || previous[1] !== position[1])
       ring.push(position);
-  }
+  });
   const first = ring[0];
   const last = ring[ring.length - 1];
   if (first && last && (first[0] !== last[0] || first[1] !== last[1])) ring.push([...first]);
   return signedAreaDeg2(ring) < 0 ? ring.reverse() : ring;
+}
+
+/**
+ * A region's exterior ring as every file writes it: counter-clockwise and closed, cut at the
+ * antimeridian into one ring per side (RFC 7946 section 3.1.9), longitudes in −180 to 180 and at
+ * export precision. One ring when the region does not cross.
+ */
+export function exteriorRingPieces(
+  boundary: readonly GroundPoint[],
+  referenceDeg: number,
+): [number, number][][] {
+  return ringPieces(exteriorRing(boundary, referenceDeg)).map((piece) =>
+    piece.map(([lon, lat]): [number, number] => [
+      rounded(lon, EXPORT_DIGITS.degrees),
+      rounded(lat, EXPORT_DIGITS.degrees),
+    ]),
+  );
+}
+
+/** The launch's longitude, which continuous longitudes of a flight's files are taken near. */
+export function launchLongitudeDeg(geography: FlightGeography): number {
+  return (geography.drift.track[0] ?? geography.drift.burst).longitudeDeg;
+}
+
+/** The track cut at the antimeridian (see `trackPieces`): one piece when it does not cross. */
+export function flightTrackPieces(geography: FlightGeography): DriftPoint[][] {
+  return trackPieces(geography.drift.track, launchLongitudeDeg(geography));
 }
 
 /** Shoelace sum over a closed ring in degrees²: positive when counter-clockwise (east = x). */

@@ -1,9 +1,11 @@
 import type { DriftPoint } from '../flight/drift.js';
 import {
   EXPORT_DIGITS,
-  exteriorRing,
+  exteriorRingPieces,
   type FlightGeography,
   fixedText,
+  flightTrackPieces,
+  launchLongitudeDeg,
   namedFlightPoints,
   pointTimeText,
   regionName,
@@ -12,10 +14,16 @@ import {
 } from './flight-geography.js';
 import { xmlElement } from './xml-text.js';
 
-/** `lat="…" lon="…"`, longitude in −180 to 180 as GPX 1.1's longitudeType asks. */
+/**
+ * `lat="…" lon="…"`, longitude in −180 (inclusive) to 180 (exclusive) as GPX 1.1's longitudeType
+ * asks. A point on +180° ends a piece west of the antimeridian (see `trackPieces`); written as
+ * −180 it would sit at that piece's far end, so it is written one export step west, 179.999999°
+ * (about 0.1 m at the equator), and the piece stays on its side.
+ */
 function latLon(latitudeDeg: number, longitudeDeg: number): string {
   const lon = fixedText(wrappedLongitudeDeg(longitudeDeg), EXPORT_DIGITS.degrees);
-  return `lat="${fixedText(latitudeDeg, EXPORT_DIGITS.degrees)}" lon="${lon === '180.000000' ? '-180.000000' : lon}"`;
+  const onEastEdge = longitudeDeg === 180 || lon === '180.000000';
+  return `lat="${fixedText(latitudeDeg, EXPORT_DIGITS.degrees)}" lon="${onEastEdge ? '179.999999' : lon}"`;
 }
 
 function trackPoint(point: DriftPoint, launchTime: string | undefined): string {
@@ -40,11 +48,15 @@ function waypoints(geography: FlightGeography): string[] {
  */
 function regionTracks(geography: FlightGeography): string[] {
   return (geography.landingArea?.regions ?? []).map((region) => {
-    const points = exteriorRing(region.boundary)
-      .map(([lon, lat]) => `<trkpt ${latLon(lat, lon)}/>`)
+    // One trkseg per side of the antimeridian, as the flight track.
+    const segments = exteriorRingPieces(region.boundary, launchLongitudeDeg(geography))
+      .map(
+        (piece) =>
+          `<trkseg>${piece.map(([lon, lat]) => `<trkpt ${latLon(lat, lon)}/>`).join('')}</trkseg>`,
+      )
       .join('');
     const desc = `Drawn to hold ${Math.round(region.probability * 100)} % of the landings; area ${Math.round(region.areaM2)} m²`;
-    return `<trk>${xmlElement('name', regionName(region))}${xmlElement('desc', desc)}${xmlElement('type', 'landing-area')}<trkseg>${points}</trkseg></trk>`;
+    return `<trk>${xmlElement('name', regionName(region))}${xmlElement('desc', desc)}${xmlElement('type', 'landing-area')}${segments}</trk>`;
   });
 }
 
@@ -57,8 +69,16 @@ export function flightGpx(geography: FlightGeography): string {
   const { drift, launchTime } = geography;
   const launchStamp = xmlElement('time', pointTimeText(launchTime, drift.track[0]?.timeS ?? 0));
   const metadata = `<metadata>${xmlElement('name', geography.title)}${launchStamp}</metadata>`;
-  const trackPoints = drift.track.map((point) => trackPoint(point, launchTime)).join('\n');
-  const track = `<trk>${xmlElement('name', TRACK_NAME)}${xmlElement('type', 'track')}<trkseg>\n${trackPoints}\n</trkseg></trk>`;
+  // A trkseg is a run of points "logically connected in order" (GPX 1.1 trksegType): the track
+  // is cut at the antimeridian into one per side, so no reader joins 179.99° to −179.99° the
+  // long way round; the points on ±180° are interpolated.
+  const segments = flightTrackPieces(geography)
+    .map(
+      (piece) =>
+        `<trkseg>\n${piece.map((point) => trackPoint(point, launchTime)).join('\n')}\n</trkseg>`,
+    )
+    .join('');
+  const track = `<trk>${xmlElement('name', TRACK_NAME)}${xmlElement('type', 'track')}${segments}</trk>`;
   const body = [metadata, ...waypoints(geography), track, ...regionTracks(geography)].join('\n');
   return `<?xml version="1.0" encoding="UTF-8"?>\n<gpx version="1.1" creator="Loftwright" xmlns="http://www.topografix.com/GPX/1/1" xmlns:xsi="http://www.w3.org/2001/XMLSchema-instance" xsi:schemaLocation="http://www.topografix.com/GPX/1/1 http://www.topografix.com/GPX/1/1/gpx.xsd">\n${body}\n</gpx>\n`;
 }

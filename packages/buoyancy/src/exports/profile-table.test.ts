@@ -69,6 +69,17 @@ describe('flight profile table', () => {
     expect(table.rows.every((row) => row.length === 4)).toBe(true);
   });
 
+  it('keeps east and north but leaves out latitude and longitude for a flight without a site', () => {
+    const table = flightProfileTable(result, drift, undefined, false);
+    expect(table.columns.map((column) => column.header).slice(-2)).toEqual([
+      PROFILE_HEADERS.east,
+      PROFILE_HEADERS.north,
+    ]);
+    const last = table.rows.at(-1) ?? [];
+    expect(last).toHaveLength(6);
+    expect(last[4]).toBeCloseTo(drift.landing.eastM, 1);
+  });
+
   it('interpolates the drift linearly between track points', () => {
     const a = drift.track[10];
     const b = drift.track[11];

@@ -99,8 +99,11 @@ export function flightProfileTable(
   result: CalculationResult,
   drift: DriftResult | null,
   launchTime?: string,
+  /** Whether the flight has a launch site; without one, places are east and north only. */
+  hasSite = true,
 ): ProfileTable {
   const h = PROFILE_HEADERS;
+  const onMap = drift !== null && hasSite;
   const clock = launchTime !== undefined;
   const columns: ProfileColumn[] = [
     { header: h.time, digits: EXPORT_DIGITS.seconds },
@@ -112,6 +115,10 @@ export function flightProfileTable(
       ? [
           { header: h.east, digits: EXPORT_DIGITS.metres },
           { header: h.north, digits: EXPORT_DIGITS.metres },
+        ]
+      : []),
+    ...(onMap
+      ? [
           { header: h.latitude, digits: EXPORT_DIGITS.degrees },
           { header: h.longitude, digits: EXPORT_DIGITS.degrees },
         ]
@@ -125,7 +132,8 @@ export function flightProfileTable(
       moment.altitudeM,
       moment.verticalSpeedMS,
       moment.diameterM,
-      ...(place ? [place.eastM, place.northM, place.latitudeDeg, place.longitudeDeg] : []),
+      ...(place ? [place.eastM, place.northM] : []),
+      ...(place && onMap ? [place.latitudeDeg, place.longitudeDeg] : []),
     ];
     return cells.map((cell, index) => {
       const digits = columns[index]?.digits;

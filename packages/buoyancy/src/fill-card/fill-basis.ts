@@ -1,4 +1,5 @@
 import type { CalculationResult, DerivationStep } from '../derivation.js';
+import { sizingEnvelopeStretches } from '../chain/sizing-stretches.js';
 import { ComputationError, InputError } from '../errors.js';
 import { GAS_CATALOGUE, type GasId } from '../gas/gas-catalogue.js';
 import type { EnvelopeSizingValues } from '../kinds/envelope-sizing.kind.js';
@@ -44,7 +45,8 @@ const KIND_PARTS: Record<string, (inputs: unknown, result: CalculationResult) =>
       payloadMassKg: inputs.payloadMassKg,
       versionFreeLiftKg: sizingOutput(result, 'freeLift'),
       envelopeVolumeM3: sizingOutput(result, 'volume'),
-      stretches: false,
+      // The design chain's rule: a sphere given by its mass is a stretching (latex) envelope.
+      stretches: sizingEnvelopeStretches(inputs, sizingOutput(result, 'size')),
     };
   },
   'flight-profile': (raw, result) => {

@@ -1,4 +1,4 @@
-import { MOLAR_GAS_CONSTANT_J_PER_MOL_K, NORMAL_PRESSURE_PA } from '../constants.js';
+import { MOLAR_GAS_CONSTANT_J_PER_MOL_K } from '../constants.js';
 import { type Derivation, v } from '../derivation.js';
 import { InputError } from '../errors.js';
 import { GAS_CATALOGUE, type GasId } from '../gas/gas-catalogue.js';
@@ -21,7 +21,9 @@ export interface FillCardCylinders {
   readonly temperatureK: number;
   /** Full cylinders the team has. */
   readonly available: number;
-  /** Gas one full cylinder gives down to atmospheric pressure [mol]. */
+  /** The day's air pressure the gauges read against, and cylinders are emptied to [Pa]. */
+  readonly airPressurePa: number;
+  /** Gas one full cylinder gives down to the day's air pressure [mol]. */
   readonly perCylinderMol: number;
   /** Cylinders the fill opens: all but the last emptied, the last drawn down. */
   readonly needed: number;
@@ -44,20 +46,25 @@ const cylinderGas = (gasId: GasId): CylinderGasId => {
 };
 
 /**
- * The fill as cylinders: what one full cylinder gives down to atmospheric pressure (real gas),
+ * The fill as cylinders: what one full cylinder gives down to the day's air pressure (real gas),
  * how many the fill opens, and the gauge pressure the last one falls to, found from
  * V_w·(p_f/Z_f − p_e/Z_e)/(R·T) = n_last with the engine's published compressibility models.
+ * A gauge reads against the air around it, so absolute pressures are gauge + the day's air
+ * pressure, and an opened cylinder empties to that air pressure, not to 101 325 Pa: at a high
+ * site it keeps less gas back.
+ * @param airPressurePa the day's air pressure at the launch site [Pa]
  */
 export function deriveFillCylinders(
   d: Derivation,
   gasId: GasId,
   cylinder: Cylinder,
   neededMol: number,
+  airPressurePa: number,
 ): FillCardCylinders {
   const gas = cylinderGas(gasId);
   const model = CYLINDER_COMPRESSIBILITY[gas];
   const { waterVolumeM3, temperatureK } = cylinder;
-  const fullAbsPa = cylinder.fillPressurePa + NORMAL_PRESSURE_PA;
+  const fullAbsPa = cylinder.fillPressurePa + airPressurePa;
   assertWithinCompressibilityModel(model, fullAbsPa, temperatureK);
   const zFull = d.step({
     id: 'fill-cylinder-compressibility',
@@ -69,21 +76,22 @@ export function deriveFillCylinders(
   });
   const perCylinderMol = d.step({
     id: 'fill-cylinder-amount',
-    label: 'Gas one full cylinder gives, down to atmospheric pressure',
+    label: 'Gas one full cylinder gives, down to the day’s air pressure',
     formula: 'n_cyl = V_w·(p_f/Z_f − p_a/Z_a) / (R·T_cyl)',
     values: [
       v('V_w', waterVolumeM3, 'm³'),
       v('p_f', fullAbsPa, 'Pa'),
       v('Z_f', zFull, ''),
-      v('p_a', NORMAL_PRESSURE_PA, 'Pa'),
+      v('p_a', airPressurePa, 'Pa'),
       v('T_cyl', temperatureK, 'K'),
     ],
     result: v(
       'n_cyl',
-      cylinderDeliverableMol(gas, waterVolumeM3, fullAbsPa, NORMAL_PRESSURE_PA, temperatureK),
+      cylinderDeliverableMol(gas, waterVolumeM3, fullAbsPa, airPressurePa, temperatureK),
       'mol',
     ),
-    source: 'real-gas law p = Z·(n/V)·R·T at both pressures',
+    source:
+      'real-gas law p = Z·(n/V)·R·T at both pressures; p_f = gauge fill pressure + p_a, p_a the day’s air pressure the gauge reads against and the cylinder empties to',
   });
   // A hair of tolerance so a fill of exactly k cylinders does not open a (k+1)th for rounding.
   const needed = Math.max(1, Math.ceil(neededMol / perCylinderMol - 1e-9));
@@ -96,7 +104,7 @@ export function deriveFillCylinders(
     source: 'whole cylinders',
   });
   const lastMol = neededMol - (needed - 1) * perCylinderMol;
-  const endAbsPa = lastCylinderEndPa(gas, cylinder, fullAbsPa, zFull, lastMol);
+  const endAbsPa = lastCylinderEndPa(gas, cylinder, { fullAbsPa, zFull, airPressurePa }, lastMol);
   d.step({
     id: 'fill-cylinder-end-pressure',
     label: 'Gauge pressure the last opened cylinder falls to',
@@ -107,16 +115,18 @@ export function deriveFillCylinders(
       v('n_last', lastMol, 'mol'),
       v('V_w', waterVolumeM3, 'm³'),
       v('T_cyl', temperatureK, 'K'),
+      v('p_a', airPressurePa, 'Pa'),
     ],
-    result: v('p_e,gauge', endAbsPa - NORMAL_PRESSURE_PA, 'Pa'),
+    result: v('p_e,gauge', endAbsPa - airPressurePa, 'Pa'),
     source: `${model.source}; solved by Brent's method`,
   });
-  const lastEndPressurePa = endAbsPa - NORMAL_PRESSURE_PA;
+  const lastEndPressurePa = endAbsPa - airPressurePa;
   const lastPressureDropPa = cylinder.fillPressurePa - lastEndPressurePa;
   return {
     waterVolumeM3,
     fillPressurePa: cylinder.fillPressurePa,
     temperatureK,
+    airPressurePa,
     available: cylinder.count,
     perCylinderMol,
     needed,
@@ -131,18 +141,18 @@ export function deriveFillCylinders(
 function lastCylinderEndPa(
   gas: CylinderGasId,
   cylinder: Cylinder,
-  fullAbsPa: number,
-  zFull: number,
+  full: { readonly fullAbsPa: number; readonly zFull: number; readonly airPressurePa: number },
   lastMol: number,
 ): number {
+  const { fullAbsPa, zFull, airPressurePa } = full;
   const { waterVolumeM3, temperatureK } = cylinder;
   const target =
     fullAbsPa / zFull - (lastMol * MOLAR_GAS_CONSTANT_J_PER_MOL_K * temperatureK) / waterVolumeM3;
   // p/Z(p) rises with p over the cylinder range, so the root between p_a and p_f is the one.
   const excess = (pressurePa: number) =>
     pressurePa / cylinderCompressibility(gas, pressurePa, temperatureK) - target;
-  if (excess(NORMAL_PRESSURE_PA) >= 0) return NORMAL_PRESSURE_PA;
-  return findRoot(excess, NORMAL_PRESSURE_PA, fullAbsPa, { xTolerance: 1e-6 });
+  if (excess(airPressurePa) >= 0) return airPressurePa;
+  return findRoot(excess, airPressurePa, fullAbsPa, { xTolerance: 1e-6 });
 }
 
 const bar = (pressurePa: number) => `${(pressurePa / 1e5).toFixed(1)} bar`;
@@ -152,7 +162,7 @@ function dropText(needed: number, cylinder: Cylinder, endPa: number, dropPa: num
   const opened =
     needed === 1
       ? `One cylinder is enough: its gauge falls ${last}.`
-      : `${needed} cylinders: empty ${needed - 1} to atmospheric pressure, then the last falls ${last}.`;
+      : `${needed} cylinders: empty ${needed - 1} to the day’s air pressure (gauge 0), then the last falls ${last}.`;
   return needed > cylinder.count
     ? `${opened} Not enough: the team has ${cylinder.count}, the fill needs ${needed}.`
     : opened;

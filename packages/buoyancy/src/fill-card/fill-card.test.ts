@@ -18,6 +18,12 @@ const heliumSizing = {
 
 const hydrogenSizing = { ...heliumSizing, gas: { gasId: 'hydrogen' } };
 
+/** The same sphere with its mass from a film's areal density: it keeps its shape. */
+const filmSizing = {
+  ...heliumSizing,
+  envelopeMass: { kind: 'areal', arealDensityKgM2: 0.05, fittingsKg: 0.02 },
+};
+
 const relative = (actual: number, expected: number) => Math.abs(actual / expected - 1);
 
 /** The InputError a call throws, so a test can check the field it names. */
@@ -92,6 +98,17 @@ describe('fill card: neck lift and the weight on the filler', () => {
   });
 });
 
+describe('fill card: a sphere given by its mass stretches', () => {
+  it('takes a free lift above the sized volume, as the design chain flies it (latex)', () => {
+    // The design chain continues this sizing as a stretching envelope (sizing-to-flight), so its
+    // fill card must let it take more gas than the sized volume; same lift per m³ as above.
+    const card = fillCard('envelope-sizing', heliumSizing, { fillerMassKg: 0.1, freeLiftKg: 0.5 });
+    const expectedM3 = (0.3 + 0.5 + 0.5) / (1.225 - 0.16928);
+    expect(relative(card.gasVolume.value, expectedM3)).toBeLessThan(1e-4);
+    expect(card.notes.join(' ')).toContain('differs');
+  });
+});
+
 describe('fill card: cylinders', () => {
   // Hydrogen at 25 °C: Z = 1.0601 at 100 bar and 1.0006 at 1 bar, Hydrogen Analysis Resource
   // Center table computed with NIST REFPROP 8.0 (test/reference/data/hydrogen-compressibility.csv).
@@ -147,6 +164,36 @@ describe('fill card: cylinders', () => {
   });
 });
 
+describe('fill card: cylinders at a high launch site', () => {
+  // Sized at 2 000 m in the 1976 standard atmosphere: p = 79 501 Pa (check-values §1.4, geometric
+  // altitude, five digits). The gauge reads against that air, and a cylinder empties to it.
+  const highSizing = { ...hydrogenSizing, ambient: { mode: 'standard', altitudeM: 2000 } };
+  const airPa = 79501;
+  const temperatureK = 298.15;
+  const fullAbsPa = 1e7;
+  const card = fillCard('envelope-sizing', highSizing, {
+    fillerMassKg: 0.1,
+    cylinder: { waterVolumeM3: 0.05, fillPressurePa: fullAbsPa - airPa, temperatureK, count: 1 },
+  });
+
+  it('empties cylinders to the day’s air pressure, not to 101 325 Pa', () => {
+    const amount = card.steps.find((step) => step.id === 'fill-cylinder-amount');
+    const emptiedPa = amount?.values.find((value) => value.symbol === 'p_a')?.value ?? 0;
+    expect(relative(emptiedPa, airPa)).toBeLessThan(1e-4);
+    expect(relative(card.cylinders?.airPressurePa ?? 0, airPa)).toBeLessThan(1e-4);
+  });
+
+  it('gives what one cylinder delivers from gauge + day’s pressure down to the day’s pressure', () => {
+    // Hydrogen at 25 °C, Z = 1.0601 at 100 bar and 1.0006 at 1 bar (HyARC table from NIST REFPROP
+    // 8.0, test/reference/data/hydrogen-compressibility.csv); Z − 1 nearly proportional to p
+    // below 1 bar, so Z(0.795 bar) = 1 + 0.0006·0.79501. Against 101 325 Pa the figure is 2.6e-4
+    // apart, so 1e-4 tells the two apart.
+    const zAir = 1 + 0.0006 * (airPa / 1e5);
+    const expectedMol = (0.05 * (fullAbsPa / 1.0601 - airPa / zAir)) / (R * temperatureK);
+    expect(relative(card.cylinders?.perCylinderMol ?? 0, expectedMol)).toBeLessThan(1e-4);
+  });
+});
+
 describe('fill card: cautions', () => {
   it('gives hydrogen’s flammability from the gas catalogue and defers to local codes', () => {
     const card = fillCard('envelope-sizing', hydrogenSizing, {
@@ -179,10 +226,11 @@ describe('fill card: refusals name the field', () => {
       'freeLiftKg',
       () => fillCard('envelope-sizing', heliumSizing, { fillerMassKg: 0.1, freeLiftKg: -1 }),
     ],
-    // A fixed envelope cannot take the gas a larger free lift needs.
+    // A film envelope (mass from its area) keeps its shape: it cannot take the gas a larger free
+    // lift needs.
     [
       'freeLiftKg',
-      () => fillCard('envelope-sizing', heliumSizing, { fillerMassKg: 0.1, freeLiftKg: 0.5 }),
+      () => fillCard('envelope-sizing', filmSizing, { fillerMassKg: 0.1, freeLiftKg: 0.5 }),
     ],
     ['kind', () => fillCard('lift-check', {}, { fillerMassKg: 0.1 })],
     [

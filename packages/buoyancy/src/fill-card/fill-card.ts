@@ -123,7 +123,7 @@ export function fillCard(kindId: string, inputs: unknown, options: FillCardOptio
     source: 'the filler and its weight together are the neck lift the balloon must just hold up',
   });
   const cylinders = checked.cylinder
-    ? deriveFillCylinders(d, basis.gasId, checked.cylinder, gas.dryMol)
+    ? deriveFillCylinders(d, basis.gasId, checked.cylinder, gas.dryMol, basis.airPressurePa)
     : undefined;
   const gasInfo = GAS_CATALOGUE[basis.gasId];
   const q = (value: number, unit: string): Quantity => ({ value, unit });

@@ -6,7 +6,12 @@ import { type Derivation, v } from '../derivation.js';
 import type { FlightProfileValues } from '../kinds/flight-profile.kind.js';
 import { SOURCES } from '../sources.js';
 import { type AmbientState, describeAir } from '../steps/ambient-state.js';
-import { prepareWindProfile, type WindProfile, windProfileAirAt } from '../wind/wind-profile.js';
+import {
+  prepareWindProfile,
+  type ProfilePosition,
+  type WindProfile,
+  windProfileAirAt,
+} from '../wind/wind-profile.js';
 import { type AirModel, profileAirModel, standardAirModel } from './air-model.js';
 
 /** The air a flight is computed in, and the wind profile when one is given. */
@@ -14,25 +19,52 @@ export interface FlightAir {
   readonly model: AirModel;
   /** The prepared wind profile, when the inputs give one. */
   readonly wind: WindProfile | undefined;
-  /** Whether temperature, pressure and density come from the profile (every level has a temperature). */
+  /**
+   * Whether temperature, pressure and density come from the profile (at least one level gives a
+   * temperature; levels without one are filled from their neighbours).
+   */
   readonly fromProfile: boolean;
 }
 
+/** "2 and 4 (wind.layers.1, wind.layers.3)": levels counted from 1 at the lowest. */
+function levelList(indices: readonly number[]): string {
+  const numbers = indices.map((index) => String(index + 1));
+  const spoken =
+    numbers.length === 1
+      ? (numbers[0] as string)
+      : `${numbers.slice(0, -1).join(', ')} and ${numbers[numbers.length - 1] as string}`;
+  return `${spoken} (${indices.map((index) => `wind.layers.${index}`).join(', ')})`;
+}
+
+/** The note for a profile some of whose levels give no temperature (code `flight-air-filled-temperatures`). */
+function filledTemperaturesNote(d: Derivation, wind: WindProfile): void {
+  const filled = wind.temperatureGiven.flatMap((given, index) => (given ? [] : [index]));
+  if (filled.length === 0) return;
+  d.warn({
+    code: 'flight-air-filled-temperatures',
+    severity: 'note',
+    message: `Level${filled.length === 1 ? '' : 's'} ${levelList(filled)} of the wind profile give${filled.length === 1 ? 's' : ''} no temperature: filled linearly in geopotential height from the nearest levels below and above that give one, and beyond the outermost such level from the 1976 standard atmosphere shifted to meet it.`,
+    field: `wind.layers.${filled[0] as number}.temperatureK`,
+  });
+}
+
 /**
- * Picks the flight's air: the profile's when it gives a temperature at every level, else the 1976
- * standard atmosphere with the day's offset; says which in a note.
+ * Picks the flight's air: the profile's when any level gives a temperature (where the file gives
+ * one, it replaces the standard atmosphere; levels without one are filled from their neighbours,
+ * see `TemperatureFill`), else the 1976 standard atmosphere with the day's offset; says which in
+ * a note.
  */
 export function chooseFlightAir(d: Derivation, inputs: FlightProfileValues): FlightAir {
   const offsetK = inputs.launch.temperatureOffsetK;
   if (!inputs.wind)
     return { model: standardAirModel(offsetK), wind: undefined, fromProfile: false };
-  const wind = prepareWindProfile(inputs.wind);
-  if (!wind.hasTemperatures) {
+  const wind = prepareWindProfile(inputs.wind, 'neighbours');
+  if (!wind.temperatureGiven.some(Boolean)) {
     d.warn({
       code: 'flight-air-standard',
       severity: 'note',
       message:
-        'Not every level of the wind profile gives a temperature, so the flight uses the 1976 standard atmosphere with the day’s temperature offset; the profile gives only the wind.',
+        'No level of the wind profile gives a temperature, so the flight uses the 1976 standard atmosphere with the day’s temperature offset; the profile gives only the wind.',
       field: 'wind',
     });
     return { model: standardAirModel(offsetK), wind, fromProfile: false };
@@ -46,6 +78,7 @@ export function chooseFlightAir(d: Derivation, inputs: FlightProfileValues): Fli
         : 'Air temperature, pressure and density on the way come from the wind profile’s levels; the day’s temperature offset is not used.',
     field: 'wind',
   });
+  filledTemperaturesNote(d, wind);
   return { model: profileAirModel(wind), wind, fromProfile: true };
 }
 
@@ -62,30 +95,63 @@ export function noteAirAboveProfile(d: Derivation, air: FlightAir, highestM: num
   });
 }
 
-/** The air at the launch site from the profile, with steps (dry, the 1976 standard's ideal gas). */
+/** Formulas and sources of the launch air for each place of the launch in the profile. */
+const LAUNCH_AIR_TEXT = {
+  within: {
+    temperatureFormula: 'T = T_i + (T_i+1 − T_i)·(H − H_i)/(H_i+1 − H_i)',
+    temperatureSource: 'wind profile: temperature linear in geopotential height between levels',
+    pressureFormula: 'p = p_i·exp(−(H − H_i) / ((R/g₀)·T̄))',
+    pressureSource:
+      'hypsometric equation from the profile level below (Wallace & Hobbs, Atmospheric Science, 2nd ed., 2006, §3.2)',
+  },
+  below: {
+    temperatureFormula: 'T = T_std(z) + (T_1 − T_std(z_1))',
+    temperatureSource: `${SOURCES.ussa1976Temperature}, shifted to meet the profile’s lowest level (the launch is below it)`,
+    pressureFormula: 'p = p_1·p_std(z) / p_std(z_1)',
+    pressureSource: `${SOURCES.ussa1976Pressure}, scaled to meet the profile’s lowest level (the launch is below it)`,
+  },
+  above: {
+    temperatureFormula: 'T = T_std(z) + (T_n − T_std(z_n))',
+    temperatureSource: `${SOURCES.ussa1976Temperature}, shifted to meet the profile’s top level (the launch is above it)`,
+    pressureFormula: 'p = p_n·p_std(z) / p_std(z_n)',
+    pressureSource: `${SOURCES.ussa1976Pressure}, scaled to meet the profile’s top level (the launch is above it)`,
+  },
+} as const satisfies Record<ProfilePosition, Record<string, string>>;
+
+/** Below, within or above the profile's levels, as `windAt` tells them (a top level is within). */
+function launchPosition(wind: WindProfile, altitudeM: number): ProfilePosition {
+  const topM = wind.heightsM[wind.heightsM.length - 1] as number;
+  if (altitudeM < (wind.heightsM[0] as number)) return 'below';
+  return altitudeM > topM ? 'above' : 'within';
+}
+
+/**
+ * The air at the launch site from the profile, with steps (dry, the 1976 standard's ideal gas):
+ * between levels from the profile, below or above it from the shifted standard atmosphere, each
+ * step naming the formula and source actually used.
+ */
 export function deriveProfileLaunchAir(
   d: Derivation,
   wind: WindProfile,
   altitudeM: number,
 ): AmbientState {
   const air = windProfileAirAt(wind, altitudeM);
-  const source = 'wind profile: temperature linear in geopotential height between levels';
+  const text = LAUNCH_AIR_TEXT[launchPosition(wind, altitudeM)];
   const temperatureK = d.step({
     id: 'air-temperature',
     label: 'Air temperature at the launch site (from the wind profile)',
-    formula: 'T = T_i + (T_i+1 − T_i)·(H − H_i)/(H_i+1 − H_i)',
+    formula: text.temperatureFormula,
     values: [v('z', altitudeM, 'm')],
     result: v('T', air.temperatureK, 'K'),
-    source,
+    source: text.temperatureSource,
   });
   const pressurePa = d.step({
     id: 'air-pressure',
     label: 'Air pressure at the launch site (from the wind profile)',
-    formula: 'p = p_i·exp(−(H − H_i) / ((R/g₀)·T̄))',
+    formula: text.pressureFormula,
     values: [v('z', altitudeM, 'm'), v('T', temperatureK, 'K')],
     result: v('p', air.pressurePa, 'Pa'),
-    source:
-      'hypsometric equation from the profile level below (Wallace & Hobbs, Atmospheric Science, 2nd ed., 2006, §3.2)',
+    source: text.pressureSource,
   });
   const densityKgM3 = d.step({
     id: 'air-density',

@@ -110,15 +110,110 @@ describe('flight-profile: the air from a wind profile', () => {
     }
   });
 
-  it('keeps the standard atmosphere, and says so, when a level lacks a temperature', () => {
+  it('keeps the standard atmosphere, and says so, when no level gives a temperature', () => {
     const layers = [
-      { heightM: 0, directionDeg: 270, speedMS: 5, temperatureK: 290 },
+      { heightM: 0, directionDeg: 270, speedMS: 5 },
       { heightM: 30000, directionDeg: 270, speedMS: 20 },
     ];
     const plain = evaluate('flight-profile', balloon);
     const withWind = evaluate('flight-profile', { ...balloon, wind: { layers } });
     for (const name of VERTICAL) expect(output(withWind, name), name).toBe(output(plain, name));
     expect(withWind.warnings.map((w) => w.code)).toContain('flight-air-standard');
+  });
+
+  it('uses the temperatures the file gives and fills the levels without one from neighbours', () => {
+    // U.S. Standard Atmosphere 1976, Table 4: temperature is linear in geopotential height within
+    // each layer. A profile 12 K warmer than the standard that gives temperatures only at the
+    // layer boundaries (0, 11, 20, 32 km′) and at 35 km must fill every level between them with
+    // exactly the temperatures a full profile gives, so both flights agree to rounding; the old
+    // rule (standard atmosphere as soon as one level lacks a temperature) is 12 K colder.
+    const offsetK = 12;
+    const boundariesM = [0, 11000, 20000, 32000].map((h) => geometricAltitudeM(h));
+    const heightsM = levelHeightsM().filter((heightM) => heightM <= 35000);
+    const full = heightsM.map((heightM) => ({
+      heightM,
+      directionDeg: 90,
+      speedMS: 0,
+      temperatureK: standardAtmosphere(heightM).temperatureK + offsetK,
+    }));
+    const partial = full.map((layer) =>
+      boundariesM.includes(layer.heightM) || layer.heightM === 35000
+        ? layer
+        : { heightM: layer.heightM, directionDeg: 90, speedMS: 0 },
+    );
+    const fromFull = evaluate('flight-profile', { ...balloon, wind: { layers: full } });
+    const fromPartial = evaluate('flight-profile', { ...balloon, wind: { layers: partial } });
+    for (const name of VERTICAL) {
+      expect(relative(output(fromPartial, name), output(fromFull, name)), name).toBeLessThan(1e-9);
+    }
+    const note = fromPartial.warnings.find((w) => w.code === 'flight-air-filled-temperatures');
+    expect(note?.message).toContain('wind.layers.1');
+    expect(note?.message).not.toContain('wind.layers.0,');
+    expect(fromPartial.warnings.map((w) => w.code)).not.toContain('wind-standard-temperature');
+  });
+
+  it('fills levels beyond the last temperature from the standard shifted to meet it', () => {
+    // Only the lowest level gives a temperature, 10 K above the standard's: every level above
+    // takes the 1976 standard's temperature + 10 K, so the flight matches a full profile of
+    // standard + 10 K (U.S. Standard Atmosphere 1976, Table 4 layer temperatures).
+    const heightsM = levelHeightsM();
+    const full = heightsM.map((heightM) => ({
+      heightM,
+      directionDeg: 0,
+      speedMS: 0,
+      temperatureK: standardAtmosphere(heightM).temperatureK + 10,
+    }));
+    const partial = full.map((layer, index) =>
+      index === 0 ? layer : { heightM: layer.heightM, directionDeg: 0, speedMS: 0 },
+    );
+    const fromFull = evaluate('flight-profile', { ...balloon, wind: { layers: full } });
+    const fromPartial = evaluate('flight-profile', { ...balloon, wind: { layers: partial } });
+    for (const name of VERTICAL) {
+      expect(relative(output(fromPartial, name), output(fromFull, name)), name).toBeLessThan(1e-9);
+    }
+  });
+});
+
+describe('flight-profile: the launch air below, within and above the profile', () => {
+  // Levels at 1 km and 2 km geometric with the 1976 standard's temperatures and pressures
+  // (check-values §1.4: 281.651 K, 89 876 Pa at 1 km; 275.154 K, 79 501 Pa at 2 km).
+  const layers = [
+    { heightM: 1000, pressurePa: 89876, directionDeg: 0, speedMS: 0, temperatureK: 281.651 },
+    { heightM: 2000, pressurePa: 79501, directionDeg: 0, speedMS: 0, temperatureK: 275.154 },
+  ];
+  const launchStep = (altitudeM: number, id: string) =>
+    evaluate('flight-profile', {
+      ...balloon,
+      launch: { altitudeM },
+      wind: { layers },
+    }).steps.find((step) => step.id === id);
+
+  it('below the lowest level: the shifted standard atmosphere, named as such', () => {
+    // Sea level of the 1976 standard: 288.150 K, 101 325 Pa (check-values §1.4).
+    const temperature = launchStep(0, 'air-temperature');
+    const pressure = launchStep(0, 'air-pressure');
+    expect(Math.abs((temperature?.result.value ?? 0) - 288.15)).toBeLessThan(2e-3);
+    expect(relative(pressure?.result.value ?? 0, 101325)).toBeLessThan(1e-4);
+    expect(temperature?.formula).toBe('T = T_std(z) + (T_1 − T_std(z_1))');
+    expect(temperature?.source).toContain('lowest level');
+    expect(pressure?.formula).toBe('p = p_1·p_std(z) / p_std(z_1)');
+    expect(pressure?.source).not.toContain('hypsometric');
+  });
+
+  it('between levels: linear in geopotential height and hypsometric from the level below', () => {
+    const temperature = launchStep(1500, 'air-temperature');
+    expect(temperature?.source).toContain('between levels');
+    expect(launchStep(1500, 'air-pressure')?.source).toContain('hypsometric');
+  });
+
+  it('above the top level: the standard shifted to meet the top', () => {
+    // 5 000 m of the 1976 standard: 255.676 K, 54 048 Pa (check-values §1.4).
+    const temperature = launchStep(5000, 'air-temperature');
+    const pressure = launchStep(5000, 'air-pressure');
+    expect(Math.abs((temperature?.result.value ?? 0) - 255.676)).toBeLessThan(2e-3);
+    expect(relative(pressure?.result.value ?? 0, 54048)).toBeLessThan(1e-4);
+    expect(temperature?.source).toContain('top level');
+    expect(pressure?.formula).toBe('p = p_n·p_std(z) / p_std(z_n)');
   });
 });
 

@@ -41,7 +41,7 @@ describe('a step from metres east and north to a new latitude and longitude', ()
   ])('follows GeographicLib Direct within 0.1 m over 10 km at %s° heading %s°', (lat, azi) => {
     const legM = 10_000;
     const stepM = 100;
-    const line = WGS84.Line(lat, 10, azi);
+    const line = WGS84.DirectLine(lat, 10, azi, legM);
     const position = new Float64Array([lat, 10]);
     for (let travelledM = 0; travelledM < legM; travelledM += stepM) {
       const azimuthDeg = line.Position(travelledM + stepM / 2).azi2 ?? NaN;

@@ -1,3 +1,5 @@
+import type { CalculationWarning } from '../derivation.js';
+
 /** A point on the ground: geodetic latitude and longitude on WGS 84 [°]. */
 export interface GroundPoint {
   readonly latitudeDeg: number;
@@ -49,4 +51,11 @@ export interface LandingArea {
   readonly seed: number;
   /** Runs left out because the varied balloon did not rise or did not come down in time. */
   readonly failedRuns: number;
+  /**
+   * What the reader should know about how the regions were drawn, with stable codes:
+   * `landing-area-failed-runs` (some runs left out), `landing-area-widened` (the scatter was too
+   * narrow in some direction, so the regions were widened to the stated minimum). Absent when
+   * there is nothing to say.
+   */
+  readonly notes?: readonly CalculationWarning[];
 }

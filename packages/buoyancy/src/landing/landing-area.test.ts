@@ -8,8 +8,13 @@ import { Derivation } from '../derivation.js';
 import { flightProfileSchema } from '../kinds/flight-profile.kind.js';
 import { evaluate } from '../kinds/registry.js';
 import { parseInputs } from '../schema/parse-inputs.js';
-import { flightDrift, landingArea } from './landing-area.js';
-import { groundPointOf, insideEllipse, scatterOf } from './landing-regions.js';
+import { checkLandingSurvivors, flightDrift, landingArea } from './landing-area.js';
+import {
+  groundPointOf,
+  insideEllipse,
+  LANDING_REGION_MIN_SIGMA_M,
+  scatterOf,
+} from './landing-regions.js';
 import { flyRun, gasForRateMol, NOMINAL_FACTORS } from './landing-run.js';
 import { windProfile } from '../wind/wind-profile.js';
 import { DEFAULT_LANDING_SPREADS } from './landing-spreads.js';
@@ -45,17 +50,47 @@ const fieldsOf = (run: () => unknown): string[] => {
 };
 
 describe('landingArea', () => {
-  it('collapses to the nominal landing point when nothing spreads', () => {
+  it('widens a scatter with no width to the stated minimum, and says so', () => {
+    // Nothing spreads, so every run is the nominal one and the sample covariance is zero: the
+    // regions become circles of σ = 100 m around it, of area π·r²·σ², r² = −2·ln(1 − p) (chi-square
+    // with two degrees of freedom; NIST/SEMATECH e-Handbook, §1.3.6.6.6).
     const area = landingArea(input, { runs: 20, spreads: ZERO });
     expect(area.failedRuns).toBe(0);
     for (const run of area.runs) expect(run).toEqual(area.nominal);
     for (const region of area.regions) {
-      expect(region.areaM2).toBe(0);
+      const r2 = -2 * Math.log(1 - region.probability);
+      expect(region.areaM2 / (Math.PI * r2 * LANDING_REGION_MIN_SIGMA_M ** 2)).toBeCloseTo(1, 9);
       for (const [east, north] of region.boundaryEastNorthM) {
-        expect(east).toBeCloseTo(area.nominal.eastM, 6);
-        expect(north).toBeCloseTo(area.nominal.northM, 6);
+        const distanceM = Math.hypot(east - area.nominal.eastM, north - area.nominal.northM);
+        expect(distanceM / (Math.sqrt(r2) * LANDING_REGION_MIN_SIGMA_M)).toBeCloseTo(1, 9);
       }
     }
+    expect(area.notes?.map((note) => note.code)).toEqual(['landing-area-widened']);
+  });
+
+  it('gives a line of landings (wind speed only) a width, not an area of 1e-8 m²', () => {
+    // With only the wind speed varied the landings lie on a line: one principal variance is the
+    // total variance var(east) + var(north), the other ~0 and raised to σ_min², so the area is
+    // π·r²·√(λ_max·σ_min²) (ellipse area π·a·b; chi-square radius as above).
+    const area = landingArea(input, { runs: 60, spreads: { ...ZERO, windSpeed: 0.1 } });
+    const n = area.runs.length;
+    const mean = (values: number[]) => values.reduce((sum, x) => sum + x, 0) / n;
+    const variance = (values: number[]) => {
+      const mu = mean(values);
+      return values.reduce((sum, x) => sum + (x - mu) ** 2, 0) / (n - 1);
+    };
+    const lambdaMaxM2 =
+      variance(area.runs.map((run) => run.eastM)) + variance(area.runs.map((run) => run.northM));
+    const region95 = area.regions[1];
+    const expectedM2 =
+      Math.PI * -2 * Math.log(1 - 0.95) * Math.sqrt(lambdaMaxM2) * LANDING_REGION_MIN_SIGMA_M;
+    expect(Math.abs((region95?.areaM2 ?? 0) / expectedM2 - 1)).toBeLessThan(1e-3);
+    expect(area.notes?.map((note) => note.code)).toContain('landing-area-widened');
+  });
+
+  it('leaves a healthy scatter as it is, with no notes', () => {
+    const area = landingArea(input, { runs: 40 });
+    expect(area.notes).toBeUndefined();
   });
 
   it('lands the nominal run, at its coarser step, within 0.1 % of the distance of the kind’s flight', () => {
@@ -155,11 +190,27 @@ describe('landingArea', () => {
   it('counts runs that do not burst within the longest flight time as failed', () => {
     // The nominal ascent only just fits into maxTimeS, so the slower half of the draws cannot.
     const nominalAscentS = evaluate('flight-profile', input).outputs.ascentTime?.value ?? 0;
-    const tight = { ...input, maxTimeS: Math.ceil(nominalAscentS * 1.01) };
-    const area = landingArea(tight, { runs: 40, spreads: { ...ZERO, ascentRate: 0.1 } });
-    expect(area.failedRuns + area.runs.length).toBe(40);
-    expect(area.failedRuns).toBeGreaterThan(5);
-    expect(area.failedRuns).toBeLessThan(35);
+    const tight = { ...input, maxTimeS: Math.ceil(nominalAscentS * 1.05) };
+    const area = landingArea(tight, { runs: 80, spreads: { ...ZERO, ascentRate: 0.1 } });
+    expect(area.failedRuns + area.runs.length).toBe(80);
+    expect(area.failedRuns).toBeGreaterThan(2);
+    expect(area.failedRuns).toBeLessThan(40);
+    expect(area.notes?.map((note) => note.code)).toContain('landing-area-failed-runs');
+  });
+
+  it('refuses when fewer than 20 runs, or fewer than half, land', () => {
+    // The nominal ascent only just fits, so about half the draws (the slower ones) fail: of 20
+    // runs asked, fewer than 20 land; before, regions were drawn from whatever was left (or from
+    // the nominal flight alone when none was).
+    const nominalAscentS = evaluate('flight-profile', input).outputs.ascentTime?.value ?? 0;
+    const tight = { ...input, maxTimeS: Math.ceil(nominalAscentS) };
+    const run = () => landingArea(tight, { runs: 20, spreads: { ...ZERO, ascentRate: 0.1 } });
+    expect(fieldsOf(run)).toEqual(['landingArea.spreads']);
+    // The half rule on its own: 49 of 100 is refused, 50 of 100 and 20 of 20 are drawn.
+    expect(fieldsOf(() => checkLandingSurvivors(49, 100))).toEqual(['landingArea.spreads']);
+    expect(fieldsOf(() => checkLandingSurvivors(50, 100))).toEqual([]);
+    expect(fieldsOf(() => checkLandingSurvivors(20, 20))).toEqual([]);
+    expect(fieldsOf(() => checkLandingSurvivors(0, 20))).toEqual(['landingArea.spreads']);
   });
 
   it('leaves out a run whose balloon does not rise', () => {

@@ -1,4 +1,4 @@
-import { Derivation } from '../derivation.js';
+import { type CalculationWarning, Derivation } from '../derivation.js';
 import { InputError } from '../errors.js';
 import { type DriftResult, driftTrack } from '../flight/drift.js';
 import { chooseFlightAir } from '../flight/flight-air.js';
@@ -11,13 +11,58 @@ import {
 } from '../kinds/flight-profile.kind.js';
 import { parseInputs } from '../schema/parse-inputs.js';
 import type { LandingArea, LandingRun, LandingSpreads } from './landing-area-types.js';
-import { landingRegion, scatterOf } from './landing-regions.js';
+import {
+  LANDING_REGION_MIN_SIGMA_M,
+  landingRegion,
+  scatterOf,
+  widenedScatter,
+} from './landing-regions.js';
 import { flyRun, LANDING_RUN_STEP_S, NOMINAL_FACTORS, type RunSetup } from './landing-run.js';
 import { landingAreaSettingsSchema, type LandingAreaSettings } from './landing-spreads.js';
 import { seededNormals } from './normal-draws.js';
 
 /** Shares of the landings the regions are drawn for. */
 export const LANDING_REGION_PROBABILITIES = [0.5, 0.95] as const;
+
+/**
+ * Fewest runs a region is drawn from: the fewest the settings allow (20), and at least half the
+ * runs asked for, so the regions never rest on a lucky few or on the nominal flight alone.
+ */
+export const LANDING_MIN_SURVIVING_RUNS = 20;
+
+/**
+ * Refuses an estimate most of whose runs failed: the regions would say nothing.
+ * @throws InputError on `landingArea.spreads` with fewer than 20 (or half the asked) runs left
+ */
+export function checkLandingSurvivors(survived: number, asked: number): void {
+  const needed = Math.max(LANDING_MIN_SURVIVING_RUNS, Math.ceil(asked / 2));
+  if (survived >= needed) return;
+  throw new InputError(
+    'landingArea.spreads',
+    survived,
+    `leave only ${survived} of ${asked} runs that burst and land within the longest flight time; a landing area needs at least ${needed} (20, and half the runs): narrow the spreads, or raise the longest flight time`,
+  );
+}
+
+/** Notes on left-out runs and a widened region, with stable codes. */
+function areaNotes(failedRuns: number, asked: number, widened: boolean): CalculationWarning[] {
+  const notes: CalculationWarning[] = [];
+  if (failedRuns > 0) {
+    notes.push({
+      code: 'landing-area-failed-runs',
+      severity: 'note',
+      message: `${failedRuns} of ${asked} runs were left out: the varied balloon did not rise, or did not burst and land within the longest flight time. The regions are drawn from the others.`,
+    });
+  }
+  if (widened) {
+    notes.push({
+      code: 'landing-area-widened',
+      severity: 'note',
+      message: `The runs scatter along a line or not at all (only some inputs vary), so their spread across it is unknown: the regions are widened to at least ${LANDING_REGION_MIN_SIGMA_M} m (one standard deviation) in every direction.`,
+    });
+  }
+  return notes;
+}
 
 /** What `landingArea` may change from the input's own `landingArea` settings. */
 export interface LandingAreaOptions {
@@ -121,11 +166,14 @@ function setupOf(inputs: FlightProfileValues): RunSetup {
  * factor) each multiplied by 1 + σ·z, z standard normal from a seeded generator, σ the spread;
  * and the 50 % and 95 % regions, ellipses of the runs' sample covariance in east and north
  * (r² = −2 ln(1 − p)), which assume the landings scatter like a two-dimensional normal
- * distribution. Runs use a 20 s time step (or the input’s, if coarser).
+ * distribution. Runs use a 20 s time step (or the input’s, if coarser). Fewer than 20 surviving
+ * runs (or fewer than half) are refused; a scatter narrower than 100 m (one standard deviation) in
+ * some direction is widened to it, and `notes` say so.
  * @param input flight-profile inputs with `wind` and the launch site's latitude and longitude
  * @param options runs, seed and spreads, laid over the input's `landingArea`
  * @throws InputError naming `launch.latitudeDeg`, `wind`, `envelope.kind`, `parachute`,
- *   `landingArea.*`, or when the nominal flight does not land (`envelope.burstDiameterM`)
+ *   `landingArea.*` (`landingArea.spreads` when too few runs land), or when the nominal flight
+ *   does not land (`envelope.burstDiameterM`)
  */
 export function landingArea(
   input: FlightProfileInput,
@@ -156,14 +204,18 @@ export function landingArea(
     const run = flyRun(setup, factors);
     if (run) runs.push(run);
   }
+  checkLandingSurvivors(runs.length, settings.runs);
   const launch = { latitudeDeg: setup.latitudeDeg, longitudeDeg: setup.longitudeDeg };
-  const scatter = scatterOf(runs.length > 0 ? runs : [nominal]);
+  const { scatter, widened } = widenedScatter(scatterOf(runs));
+  const failedRuns = settings.runs - runs.length;
+  const notes = areaNotes(failedRuns, settings.runs, widened);
   return {
     runs,
     regions: LANDING_REGION_PROBABILITIES.map((p) => landingRegion(scatter, p, launch)),
     nominal,
     spreads: { ...spreads },
     seed: settings.seed,
-    failedRuns: settings.runs - runs.length,
+    failedRuns,
+    ...(notes.length > 0 ? { notes } : {}),
   };
 }

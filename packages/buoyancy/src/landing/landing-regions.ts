@@ -44,6 +44,51 @@ export function scatterOf(runs: readonly LandingRun[]): Scatter {
 }
 
 /**
+ * Smallest standard deviation a region is drawn with in any direction [m]. A product choice, not
+ * physics: when the runs scatter along a line (only the wind speed varied, say) or not at all, the
+ * sample covariance is singular and its ellipse has no width, which says nothing about the real
+ * spread across; the region is then widened to this and a note says so.
+ */
+export const LANDING_REGION_MIN_SIGMA_M = 100;
+
+/** Unit eigenvector of the covariance for λ: (b, λ − a) when b ≠ 0, else the matching axis. */
+function unitEigenvector(
+  scatter: Scatter,
+  lambda: number,
+  index: number,
+  isotropic: boolean,
+): [number, number] {
+  const { eastEastM2: a, eastNorthM2: b, northNorthM2: c } = scatter;
+  if (isotropic) return index === 0 ? [1, 0] : [0, 1];
+  if (b === 0) return Math.abs(a - lambda) <= Math.abs(c - lambda) ? [1, 0] : [0, 1];
+  const length = Math.hypot(b, lambda - a);
+  return [b / length, (lambda - a) / length];
+}
+
+/**
+ * The scatter with each principal variance raised to at least σ_min² (eigen-decomposition of the
+ * 2×2 covariance: S' = S + Σ max(0, σ_min² − λᵢ)·vᵢ·vᵢᵀ), and whether it had to be.
+ */
+export function widenedScatter(scatter: Scatter): { scatter: Scatter; widened: boolean } {
+  const minimumM2 = LANDING_REGION_MIN_SIGMA_M ** 2;
+  const { eastEastM2: a, eastNorthM2: b, northNorthM2: c } = scatter;
+  const half = Math.hypot((a - c) / 2, b);
+  const eigen = [(a + c) / 2 - half, (a + c) / 2 + half];
+  let [ee, en, nn] = [a, b, c];
+  let widened = false;
+  eigen.forEach((lambda, index) => {
+    const raise = minimumM2 - lambda;
+    if (!(raise > 0)) return;
+    widened = true;
+    const [x, y] = unitEigenvector(scatter, lambda, index, half === 0);
+    ee += raise * x * x;
+    en += raise * x * y;
+    nn += raise * y * y;
+  });
+  return { scatter: { ...scatter, eastEastM2: ee, eastNorthM2: en, northNorthM2: nn }, widened };
+}
+
+/**
  * Squared Mahalanobis radius holding a share p of a two-dimensional normal distribution:
  * r² = −2·ln(1 − p), the chi-square quantile with two degrees of freedom (its distribution
  * function is 1 − e^(−x/2); NIST/SEMATECH e-Handbook of Statistical Methods, §1.3.6.6.6).

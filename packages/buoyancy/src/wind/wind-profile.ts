@@ -41,6 +41,8 @@ export interface WindProfile {
   readonly heightSources: readonly HeightSource[];
   /** Whether every level came with its own temperature. */
   readonly hasTemperatures: boolean;
+  /** Which levels came with their own temperature, in level order. */
+  readonly temperatureGiven: readonly boolean[];
   /** What the profile took from the standard atmosphere, as notes with stable codes. */
   readonly notes: readonly CalculationWarning[];
 }
@@ -98,17 +100,66 @@ export function windProfile(input: unknown, field = 'wind'): WindProfile {
   return prepareWindProfile(values);
 }
 
-/** Builds the interpolation arrays from validated values (see `windProfile`). */
-export function prepareWindProfile(values: WindProfileValues): WindProfile {
+/**
+ * How levels without a temperature get one: `standard`, the 1976 standard atmosphere's at their
+ * height; `neighbours`, linear in geopotential height between the nearest levels below and above
+ * that give one (as the 1976 standard's layers are), and beyond the last such level the standard
+ * atmosphere shifted to meet it. With no temperature at all both give the standard's.
+ */
+export type TemperatureFill = 'standard' | 'neighbours';
+
+/**
+ * Each level's temperature [K]: the given one, else filled as `fill` says.
+ * @internal
+ */
+export function levelTemperaturesK(
+  given: readonly (number | undefined)[],
+  heightsM: Float64Array,
+  fill: TemperatureFill,
+): Float64Array {
+  const standardK = (heightM: number) => standardAtmosphereUnchecked(heightM, 0).temperatureK;
+  const known = given.flatMap((temperatureK, index) => (temperatureK === undefined ? [] : [index]));
+  return Float64Array.from(given, (temperatureK, index) => {
+    const heightM = heightsM[index] as number;
+    if (temperatureK !== undefined) return temperatureK;
+    if (fill === 'standard' || known.length === 0) return standardK(heightM);
+    const below = known.filter((level) => level < index).pop();
+    const above = known.find((level) => level > index);
+    const end = below === undefined ? above : above === undefined ? below : undefined;
+    if (end !== undefined) {
+      const endM = heightsM[end] as number;
+      return standardK(heightM) + ((given[end] as number) - standardK(endM));
+    }
+    const lowH = geopotentialAltitudeM(heightsM[below as number] as number);
+    const highH = geopotentialAltitudeM(heightsM[above as number] as number);
+    const t = (geopotentialAltitudeM(heightM) - lowH) / (highH - lowH);
+    const lowK = given[below as number] as number;
+    return lowK + t * ((given[above as number] as number) - lowK);
+  });
+}
+
+/**
+ * Builds the interpolation arrays from validated values (see `windProfile`).
+ * @param fill how levels without a temperature get one (see `TemperatureFill`)
+ */
+export function prepareWindProfile(
+  values: WindProfileValues,
+  fill: TemperatureFill = 'standard',
+): WindProfile {
   const { layers } = values;
   const resolved = resolveLayerHeights(layers);
   const count = layers.length;
   const heightsM = Float64Array.from(resolved.heightsM);
   const uMS = new Float64Array(count);
   const vMS = new Float64Array(count);
-  const temperaturesK = new Float64Array(count);
+  const temperatureGiven = layers.map((layer) => layer.temperatureK !== undefined);
+  const hasTemperatures = temperatureGiven.every(Boolean);
+  const temperaturesK = levelTemperaturesK(
+    layers.map((layer) => layer.temperatureK),
+    heightsM,
+    fill,
+  );
   const pressuresPa = new Float64Array(count);
-  let hasTemperatures = true;
   let pressureFromStandard = false;
   layers.forEach((layer, index) => {
     const heightM = heightsM[index] as number;
@@ -116,8 +167,6 @@ export function prepareWindProfile(values: WindProfileValues): WindProfile {
     uMS[index] = wind.uMS;
     vMS[index] = wind.vMS;
     const standard = standardAtmosphereUnchecked(heightM, 0);
-    if (layer.temperatureK === undefined) hasTemperatures = false;
-    temperaturesK[index] = layer.temperatureK ?? standard.temperatureK;
     const given = resolved.pressuresPa[index];
     if (given !== undefined) {
       pressuresPa[index] = given;
@@ -152,7 +201,7 @@ export function prepareWindProfile(values: WindProfileValues): WindProfile {
         'Some pressure levels have no temperature: their heights use the thickness of the 1976 standard atmosphere between the pressures.',
     });
   }
-  if (!hasTemperatures) {
+  if (!hasTemperatures && (fill === 'standard' || !temperatureGiven.some(Boolean))) {
     notes.push({
       code: 'wind-standard-temperature',
       severity: 'note',
@@ -176,6 +225,7 @@ export function prepareWindProfile(values: WindProfileValues): WindProfile {
     pressuresPa,
     heightSources: resolved.sources,
     hasTemperatures,
+    temperatureGiven,
     notes,
   };
 }

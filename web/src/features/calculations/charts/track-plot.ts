@@ -132,6 +132,23 @@ function ringRadii(near: number, far: number): number[] {
   return rings;
 }
 
+/**
+ * The launch site [°] from the track's first row, when the flight was given one (the engine then
+ * adds latitude and longitude columns); undefined otherwise.
+ */
+export function trackLaunchSite(
+  series: DataSeries,
+): { latitudeDeg: number; longitudeDeg: number } | undefined {
+  const latitude = series.columns.findIndex((column) => column.key === 'latitude');
+  const longitude = series.columns.findIndex((column) => column.key === 'longitude');
+  const first = series.rows[0];
+  if (latitude < 0 || longitude < 0 || !first) return undefined;
+  const [latitudeDeg, longitudeDeg] = [first[latitude], first[longitude]];
+  return Number.isFinite(latitudeDeg) && Number.isFinite(longitudeDeg)
+    ? { latitudeDeg: latitudeDeg as number, longitudeDeg: longitudeDeg as number }
+    : undefined;
+}
+
 /** Bearing from north, clockwise, of a point east and north of launch [°, 0 to 360). */
 export function bearingDeg([east, north]: Point): number {
   const degrees = (Math.atan2(east, north) * 180) / Math.PI;

@@ -70,6 +70,9 @@ describe('LandingAreaSection', () => {
     ).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Estimate landing area' }));
     expect(await screen.findByText(/^Landing area from 20 runs/)).toBeInTheDocument();
+    // A wind from one direction varied only in speed scatters the runs along a line: the engine
+    // says the regions were widened, and the page shows it.
+    expect(screen.getByText(/scatter along a line .* regions are widened/)).toBeInTheDocument();
   });
 
   it('can be cancelled while the runs fly', async () => {

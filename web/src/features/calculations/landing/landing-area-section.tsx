@@ -97,6 +97,9 @@ export function LandingAreaSection({
           .
         </Typography.Paragraph>
       ) : null}
+      {landing.area?.notes?.map((note) => (
+        <Alert key={note.code} type="info" showIcon style={{ marginTop: 8 }} title={note.message} />
+      ))}
     </Card>
   );
 }

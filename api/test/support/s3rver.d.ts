@@ -1,0 +1,18 @@
+// s3rver ships no types; only what the tests use.
+declare module 's3rver' {
+  import type { AddressInfo } from 'node:net';
+
+  interface S3rverOptions {
+    address?: string;
+    port?: number;
+    silent?: boolean;
+    directory: string;
+    configureBuckets?: { name: string }[];
+  }
+
+  export default class S3rver {
+    constructor(options: S3rverOptions);
+    run(): Promise<AddressInfo>;
+    close(): Promise<void>;
+  }
+}
