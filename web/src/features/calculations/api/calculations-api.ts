@@ -163,14 +163,15 @@ export const getVersion = async (id: string, n: number) =>
   (await apiClient.get<VersionDetail>(`/calculations/${id}/versions/${n}`)).data;
 
 /** POST .../versions/:n/continue: a new calculation of the next kind made from this version. */
-export function useContinueCalculation(id: string) {
+/** "Continue as …" from version `version` of calculation `id`. */
+export function useContinueCalculation(id: string, version: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({ version, toKind }: { version: number } & ContinueCalculationBody) =>
+    mutationFn: async (body: ContinueCalculationBody) =>
       (
         await apiClient.post<CalculationDetail>(
           `/calculations/${id}/versions/${version}/continue`,
-          { toKind } satisfies ContinueCalculationBody,
+          body,
         )
       ).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['calculations'] }),

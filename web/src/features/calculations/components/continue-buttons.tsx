@@ -10,9 +10,9 @@ import { type CalculationDetail, useContinueCalculation } from '../api/calculati
 export function ContinueButtons({ detail, dirty }: { detail: CalculationDetail; dirty: boolean }) {
   const { message } = App.useApp();
   const navigate = useNavigate();
-  const proceed = useContinueCalculation(detail.id);
-  if (!detail.latest || detail.continueAs.length === 0) return null;
   const version = detail.latestVersion;
+  const proceed = useContinueCalculation(detail.id, version);
+  if (!detail.latest || detail.continueAs.length === 0) return null;
   return (
     <Space wrap>
       {detail.continueAs.map((target) => (
@@ -28,7 +28,7 @@ export function ContinueButtons({ detail, dirty }: { detail: CalculationDetail; 
             loading={proceed.isPending && proceed.variables.toKind === target.toKind}
             onClick={() =>
               proceed.mutate(
-                { version, toKind: target.toKind },
+                { toKind: target.toKind },
                 {
                   onSuccess: (created) => void navigate(paths.calculation.href(created.id)),
                   onError: (error) => void message.error(error.message),

@@ -32,7 +32,7 @@ export const useEnvelope = (id: string) =>
 export function useSaveEnvelope(id?: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (body: EnvelopeBody & Partial<Pick<UpdateEnvelopeBody, 'version'>>) =>
+    mutationFn: async (body: EnvelopeBody | UpdateEnvelopeBody) =>
       (id
         ? await apiClient.put<EnvelopeDetail>(`/envelopes/${id}`, body)
         : await apiClient.post<EnvelopeDetail>('/envelopes', body)
